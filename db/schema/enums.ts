@@ -1,0 +1,17 @@
+/**
+ * Value sets stored as text with CHECK constraints (not PostgreSQL enums): adding a value
+ * later is a one-line migration that never rewrites a table. The same arrays feed zod.
+ */
+export const ROLES = ["researcher", "supervisor", "admin"] as const;
+export type Role = (typeof ROLES)[number];
+
+export const ENTRY_STATUSES = ["draft", "submitted", "countersigned", "returned"] as const;
+export type EntryStatus = (typeof ENTRY_STATUSES)[number];
+
+export const SIGNATURE_MEANINGS = ["authored", "countersigned", "witnessed"] as const;
+export type SignatureMeaning = (typeof SIGNATURE_MEANINGS)[number];
+
+/** SQL list literal for a CHECK constraint, e.g. `('a','b')`. Values are our own constants. */
+export function sqlList(values: readonly string[]): string {
+  return `(${values.map((v) => `'${v.replace(/'/g, "''")}'`).join(",")})`;
+}

@@ -1,0 +1,4 @@
+export * from "./enums";
+export * from "./labs";
+export * from "./notebook";
+export * from "./relations";
