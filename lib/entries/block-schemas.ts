@@ -1,0 +1,114 @@
+import { z } from "zod";
+
+/**
+ * Input schemas of the two live blocks. The node views and the server share these, so the
+ * browser never drifts from what a save accepts.
+ *
+ * The limits here are about shape and size, not chemistry: a negative amount or a
+ * temperature outside a solvent's range must still save, so the block can show the
+ * engine's message in place while the rest of the entry keeps saving (DESIGN.md, "Bad
+ * input"). Only values no chemist could mean (non-finite numbers, 10 MB strings, a
+ * thousand rows) are refused here.
+ */
+
+export const AMOUNT_UNITS = [
+  "mol/kg",
+  "mmol/kg",
+  "mol/L",
+  "mmol/L",
+  "µmol/L",
+  "g",
+  "mg",
+  "mass fraction",
+] as const;
+export type AmountUnit = (typeof AMOUNT_UNITS)[number];
+
+/** Units of the `per` basis: a mass is the mass of solvent, a volume the final volume. */
+export const PER_UNITS = ["g", "kg", "mL", "L"] as const;
+export type PerUnit = (typeof PER_UNITS)[number];
+
+/** Units that need a `per` basis (an absolute quantity weighed out). */
+export const UNITS_NEEDING_PER: readonly AmountUnit[] = ["g", "mg"];
+
+export const MODEL_CHOICES = [
+  "auto",
+  "dh-limiting",
+  "dh-extended",
+  "guntelberg",
+  "davies",
+  "truesdell-jones",
+  "pitzer",
+  "sit",
+] as const;
+export type ModelChoice = (typeof MODEL_CHOICES)[number];
+
+export const REFERENCE_ELECTRODE_IDS = [
+  "SHE",
+  "SCE",
+  "Ag/AgCl-satKCl",
+  "Ag/AgCl-3.5MKCl",
+  "Ag/AgCl-3MKCl",
+  "Hg/HgO-1MNaOH",
+  "Hg/Hg2SO4-satK2SO4",
+  "RHE",
+] as const;
+export type ReferenceElectrodeId = (typeof REFERENCE_ELECTRODE_IDS)[number];
+
+/** A stable block id: letters, digits, "-" and "_" (UUIDs fit). */
+export const blockIdSchema = z
+  .string()
+  .min(4)
+  .max(64)
+  .regex(/^[A-Za-z0-9_-]+$/, "A block id uses only letters, digits, - and _.");
+
+const shortText = (max: number) => z.string().max(max);
+/** A finite number inside generous physical bounds; null while a field is empty. */
+const boundedNumber = (min: number, max: number) => z.number().finite().min(min).max(max);
+
+export const solutionComponentSchema = z.strictObject({
+  formula: shortText(80),
+  amount: boundedNumber(-1e9, 1e9).nullable(),
+  unit: z.enum(AMOUNT_UNITS),
+  perAmount: boundedNumber(-1e9, 1e9).nullable().optional(),
+  perUnit: z.enum(PER_UNITS).nullable().optional(),
+});
+export type SolutionComponentInput = z.infer<typeof solutionComponentSchema>;
+
+export const solutionBlockInputSchema = z.strictObject({
+  blockId: blockIdSchema,
+  name: shortText(120),
+  solvent: shortText(40),
+  temperatureC: boundedNumber(-273.15, 1000).nullable(),
+  densityGPerMl: boundedNumber(-100, 100).nullable().optional(),
+  model: z.enum(MODEL_CHOICES),
+  components: z.array(solutionComponentSchema).max(40),
+});
+export type SolutionBlockInput = z.infer<typeof solutionBlockInputSchema>;
+
+export const electrodeSchema = z.strictObject({
+  material: shortText(80),
+  areaCm2: boundedNumber(-1e6, 1e6).nullable(),
+  pretreatment: z.array(shortText(300)).max(20),
+});
+export type ElectrodeInput = z.infer<typeof electrodeSchema>;
+
+export const cellBlockInputSchema = z.strictObject({
+  blockId: blockIdSchema,
+  name: shortText(120),
+  cellType: shortText(80),
+  workingElectrode: electrodeSchema,
+  counterElectrode: electrodeSchema,
+  referenceElectrode: electrodeSchema.extend({ type: z.enum(REFERENCE_ELECTRODE_IDS) }),
+  /** blockId of a solution block in the same entry; may dangle after that block is deleted. */
+  electrolyteBlockId: blockIdSchema.nullable(),
+  purgeGas: shortText(40),
+  purgeMinutes: boundedNumber(-1e6, 1e6).nullable(),
+  temperatureC: boundedNumber(-273.15, 1000).nullable(),
+  instrument: shortText(120),
+  channel: shortText(40),
+  /** Couple id from lib/chem's catalogue, e.g. "Fe3+/Fe2+". */
+  couple: shortText(60).nullable(),
+  /** Needed only for the RHE scale. */
+  pH: boundedNumber(-20, 30).nullable(),
+});
+export type CellBlockInput = z.infer<typeof cellBlockInputSchema>;

@@ -1,0 +1,150 @@
+import { z } from "zod";
+import { cellBlockInputSchema, solutionBlockInputSchema } from "./block-schemas";
+import { isSafeHref } from "./safe-href";
+
+export {
+  cellBlockInputSchema,
+  solutionBlockInputSchema,
+  type CellBlockInput,
+  type SolutionBlockInput,
+} from "./block-schemas";
+
+/**
+ * The tiptap document as the server accepts it on save. The editor's ProseMirror schema
+ * already drops unknown nodes when content is pasted; this schema is the server's own
+ * check, because a request body can be anything.
+ */
+
+const LIMITS = { maxNodes: 20000, maxDepth: 40, maxTextLength: 100000, maxLatex: 4000 };
+
+/** Attribute schemas of each allowed node type. tiptap writes defaults, so most keys are optional. */
+const NODE_ATTRS = {
+  doc: z.strictObject({}),
+  paragraph: z.strictObject({}),
+  text: z.strictObject({}),
+  heading: z.strictObject({ level: z.number().int().min(1).max(4) }),
+  bulletList: z.strictObject({}),
+  orderedList: z.strictObject({ start: z.number().int().min(0).max(100000).optional(), type: z.string().max(8).nullable().optional() }),
+  listItem: z.strictObject({}),
+  taskList: z.strictObject({}),
+  taskItem: z.strictObject({ checked: z.boolean().optional() }),
+  blockquote: z.strictObject({}),
+  codeBlock: z.strictObject({ language: z.string().max(40).regex(/^[\w+#.-]*$/).nullable().optional() }),
+  horizontalRule: z.strictObject({}),
+  hardBreak: z.strictObject({}),
+  table: z.strictObject({}),
+  tableRow: z.strictObject({}),
+  tableCell: z.strictObject({
+    colspan: z.number().int().min(1).max(100).optional(),
+    rowspan: z.number().int().min(1).max(1000).optional(),
+    colwidth: z.array(z.number().int().min(0).max(10000)).max(100).nullable().optional(),
+  }),
+  tableHeader: z.strictObject({
+    colspan: z.number().int().min(1).max(100).optional(),
+    rowspan: z.number().int().min(1).max(1000).optional(),
+    colwidth: z.array(z.number().int().min(0).max(10000)).max(100).nullable().optional(),
+  }),
+  inlineMath: z.strictObject({ latex: z.string().max(LIMITS.maxLatex) }),
+  blockMath: z.strictObject({ latex: z.string().max(LIMITS.maxLatex) }),
+  solutionBlock: solutionBlockInputSchema,
+  cellBlock: cellBlockInputSchema,
+} as const;
+
+export const ALLOWED_NODE_TYPES = Object.keys(NODE_ATTRS) as (keyof typeof NODE_ATTRS)[];
+export type EntryNodeType = keyof typeof NODE_ATTRS;
+
+const MARK_ATTRS = {
+  bold: z.strictObject({}),
+  italic: z.strictObject({}),
+  strike: z.strictObject({}),
+  underline: z.strictObject({}),
+  code: z.strictObject({}),
+  link: z.strictObject({
+    href: z.string().max(2048).refine(isSafeHref, "Links may only use http, https or mailto."),
+    target: z.enum(["_blank", "_self"]).nullable().optional(),
+    rel: z.string().max(100).nullable().optional(),
+    class: z.string().max(100).nullable().optional(),
+  }),
+} as const;
+
+export const ALLOWED_MARK_TYPES = Object.keys(MARK_ATTRS) as (keyof typeof MARK_ATTRS)[];
+
+const markSchema = z
+  .strictObject({ type: z.enum(ALLOWED_MARK_TYPES), attrs: z.record(z.string(), z.unknown()).optional() })
+  .superRefine((mark, ctx) => {
+    const parsed = MARK_ATTRS[mark.type].safeParse(mark.attrs ?? {});
+    if (!parsed.success) addIssues(ctx, parsed.error, ["attrs"]);
+  });
+
+export interface EntryNode {
+  type: EntryNodeType;
+  attrs?: Record<string, unknown>;
+  content?: EntryNode[];
+  marks?: z.infer<typeof markSchema>[];
+  text?: string;
+}
+
+const nodeSchema: z.ZodType<EntryNode> = z.lazy(() =>
+  z
+    .strictObject({
+      type: z.enum(ALLOWED_NODE_TYPES),
+      attrs: z.record(z.string(), z.unknown()).optional(),
+      content: z.array(nodeSchema).max(5000).optional(),
+      marks: z.array(markSchema).max(10).optional(),
+      text: z.string().max(LIMITS.maxTextLength).optional(),
+    })
+    .superRefine((node, ctx) => {
+      const parsed = NODE_ATTRS[node.type].safeParse(node.attrs ?? {});
+      if (!parsed.success) addIssues(ctx, parsed.error, ["attrs"]);
+      if (node.type === "text" && (!node.text || node.content)) {
+        ctx.addIssue({ code: "custom", message: "A text node holds non-empty text and no content." });
+      }
+      if (node.type !== "text" && node.text !== undefined) {
+        ctx.addIssue({ code: "custom", message: `A ${node.type} node cannot hold text directly.`, path: ["text"] });
+      }
+    }),
+);
+
+function addIssues(ctx: z.RefinementCtx, error: z.ZodError, prefix: (string | number)[]) {
+  for (const issue of error.issues) {
+    ctx.addIssue({ code: "custom", message: issue.message, path: [...prefix, ...issue.path.map((p) => (typeof p === "symbol" ? String(p) : p))] });
+  }
+}
+
+/** Walks the tree once for the whole-document rules: size, depth and unique block ids. */
+function checkWholeDocument(doc: EntryNode, ctx: z.RefinementCtx) {
+  let count = 0;
+  const seenIds = new Set<string>();
+  const walk = (node: EntryNode, depth: number) => {
+    count += 1;
+    if (depth > LIMITS.maxDepth) {
+      ctx.addIssue({ code: "custom", message: `The document nests deeper than ${LIMITS.maxDepth} levels.` });
+      return;
+    }
+    if (node.type === "solutionBlock" || node.type === "cellBlock") {
+      const id = String(node.attrs?.blockId ?? "");
+      if (seenIds.has(id)) ctx.addIssue({ code: "custom", message: `Two blocks share the id "${id}".` });
+      seenIds.add(id);
+    }
+    node.content?.forEach((child) => walk(child, depth + 1));
+  };
+  walk(doc, 0);
+  if (count > LIMITS.maxNodes) {
+    ctx.addIssue({ code: "custom", message: `The document has more than ${LIMITS.maxNodes} nodes.` });
+  }
+}
+
+export const entryDocumentSchema = z
+  .strictObject({
+    type: z.literal("doc"),
+    attrs: z.record(z.string(), z.unknown()).optional(),
+    content: z.array(nodeSchema).max(5000),
+  })
+  .superRefine((doc, ctx) => checkWholeDocument(doc as EntryNode, ctx));
+
+export type EntryDocument = z.infer<typeof entryDocumentSchema>;
+
+/** Field-level messages for a refused save, e.g. "content.3.attrs.temperatureC: …". */
+export function describeDocumentErrors(error: z.ZodError): string[] {
+  return error.issues.slice(0, 20).map((issue) => `${issue.path.join(".") || "document"}: ${issue.message}`);
+}
