@@ -1,0 +1,8 @@
+/** Public API of the electrolyte engine (see ../shared/DESIGN.md, "The computation contract"). */
+export { ChemInputError, isChemInputError } from "./errors";
+export { parseFormula, molarMass } from "./formula";
+export type { ParsedFormula, Composition } from "./formula";
+export { debyeHuckelConstants, debyeHuckelConstantsFrom } from "./debye-huckel-constants";
+export { waterRelativePermittivity, waterDensityGPerMl } from "./solvents/water";
+export { listSolvents } from "./solvents/catalogue";
+export type { ActivityModelId, DebyeHuckelConstants } from "./models/types";
