@@ -1,0 +1,10 @@
+export { pitzerModel, computePitzer, PITZER_FORMULA_TEX } from "./pitzer-model";
+export { pitzerBinarySalt, meanLnGamma, stoichiometry } from "./binary-salt";
+export type { BinarySaltInput, BinarySaltResult } from "./binary-salt";
+export { pitzerMixture } from "./equations";
+export { eTheta } from "./e-theta";
+export { jFunction } from "./j-function";
+export { binaryParameters, parameterisedSalts, thetaParameter, psiParameter } from "./parameter-tables";
+export { assemblePitzerSystem } from "./assemble";
+export { pitzerCoverage } from "./coverage";
+export type { PitzerCoverage } from "./coverage";
