@@ -1,0 +1,50 @@
+"use server";
+import { revalidatePath } from "next/cache";
+import { requireActor } from "@/lib/access/actor";
+import { runAction, type ActionState } from "@/lib/http/action";
+import { inviteMember, withdrawInvitation } from "@/lib/labs/invitations";
+import { changeMemberRole, setMemberActivation } from "@/lib/labs/members";
+import { formDataToObject } from "@/lib/validation/parse";
+
+// Every action is a public POST endpoint: each one resolves the actor itself, and the
+// service it calls checks the role and the lab.
+
+export async function inviteMemberAction(_prev: ActionState, form: FormData): Promise<ActionState> {
+  const values = formDataToObject(form);
+  return runAction(async () => {
+    const actor = await requireActor();
+    await inviteMember(actor, values);
+    revalidatePath("/lab");
+    return { ok: true, message: `Invitation sent to ${values.email}.` };
+  }, values);
+}
+
+export async function changeRoleAction(_prev: ActionState, form: FormData): Promise<ActionState> {
+  const values = formDataToObject(form);
+  return runAction(async () => {
+    const actor = await requireActor();
+    const member = await changeMemberRole(actor, values);
+    revalidatePath("/lab");
+    return { ok: true, message: `${member.name} is now ${member.role}.` };
+  });
+}
+
+export async function setActivationAction(_prev: ActionState, form: FormData): Promise<ActionState> {
+  const values = formDataToObject(form);
+  return runAction(async () => {
+    const actor = await requireActor();
+    const member = await setMemberActivation(actor, values, values.active === "true");
+    revalidatePath("/lab");
+    return { ok: true, message: member.active ? `${member.name} can sign in again.` : `${member.name} is deactivated; their entries stay.` };
+  });
+}
+
+export async function withdrawInvitationAction(_prev: ActionState, form: FormData): Promise<ActionState> {
+  const values = formDataToObject(form);
+  return runAction(async () => {
+    const actor = await requireActor();
+    await withdrawInvitation(actor, values.invitationId ?? "");
+    revalidatePath("/lab");
+    return { ok: true, message: "Invitation withdrawn." };
+  });
+}

@@ -1,0 +1,31 @@
+"use client";
+import { useActionState } from "react";
+import { Field } from "@/components/ui/field";
+import { FormMessage } from "@/components/ui/form-message";
+import { SubmitButton } from "@/components/ui/submit-button";
+import { initialActionState } from "@/lib/http/action-state";
+import { acceptInvitationAction } from "./actions";
+
+export function AcceptInvitationForm({ token, email }: { token: string; email: string }) {
+  const [state, formAction] = useActionState(acceptInvitationAction, initialActionState);
+  return (
+    <form action={formAction} className="space-y-4" noValidate>
+      <input type="hidden" name="token" value={token} />
+      <FormMessage message={state.message} />
+      <div className="space-y-1.5">
+        <p className="label">E-mail</p>
+        <p className="rounded-md bg-paper-deep px-3 py-2 text-sm">{email}</p>
+      </div>
+      <Field id="name" label="Your name" errors={state.fieldErrors?.name}>
+        {(aria) => <input {...aria} name="name" autoComplete="name" className="input" defaultValue={state.values?.name ?? ""} />}
+      </Field>
+      <Field id="password" label="Choose a password" hint="At least 10 characters, letters mixed with digits or symbols." errors={state.fieldErrors?.password}>
+        {(aria) => <input {...aria} name="password" type="password" autoComplete="new-password" className="input" />}
+      </Field>
+      <Field id="confirmPassword" label="Repeat the password" errors={state.fieldErrors?.confirmPassword}>
+        {(aria) => <input {...aria} name="confirmPassword" type="password" autoComplete="new-password" className="input" />}
+      </Field>
+      <SubmitButton pendingLabel="Joining…" className="btn-primary w-full">Join the lab</SubmitButton>
+    </form>
+  );
+}

@@ -1,0 +1,28 @@
+import "server-only";
+import NextAuth, { CredentialsSignin } from "next-auth";
+import Credentials from "next-auth/providers/credentials";
+import { getDb } from "@/lib/server/database";
+import { authConfig } from "./config";
+import { verifyCredentials } from "./verify-credentials";
+
+export class ThrottledSignIn extends CredentialsSignin {
+  code = "throttled";
+}
+
+export const { handlers, auth, signIn, signOut } = NextAuth({
+  ...authConfig,
+  providers: [
+    Credentials({
+      credentials: { email: { label: "E-mail", type: "email" }, password: { label: "Password", type: "password" } },
+      async authorize(credentials) {
+        const result = await verifyCredentials(getDb(), credentials);
+        if (result.kind === "throttled") {
+          const error = new ThrottledSignIn();
+          error.code = `throttled:${result.retryAfterSeconds}`;
+          throw error;
+        }
+        return result.kind === "ok" ? result.user : null;
+      },
+    }),
+  ],
+});

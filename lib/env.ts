@@ -1,0 +1,34 @@
+import { z } from "zod";
+
+/**
+ * The one place that reads process.env. Everything the server needs from its environment
+ * is validated here; a missing or malformed value stops the server with a clear message.
+ * scripts/start.sh and scripts/test.sh set these.
+ */
+const envSchema = z.object({
+  DATABASE_URL: z.string().url(),
+  AUTH_SECRET: z.string().min(32, "AUTH_SECRET must be at least 32 characters"),
+  APP_URL: z.string().url().default("http://localhost:3000"),
+  SMTP_HOST: z.string().default("127.0.0.1"),
+  SMTP_PORT: z.coerce.number().int().positive().default(2525),
+  MAIL_FROM: z.string().default("Ionleaf <notebook@ionleaf.invalid>"),
+  /** Set only when mail goes to the local mail catcher; enables the in-app inbox page. */
+  MAIL_CATCHER_URL: z.string().url().optional(),
+  UPLOAD_DIR: z.string().default("uploads"),
+  NODE_ENV: z.enum(["development", "production", "test"]).default("development"),
+});
+
+export type Env = z.infer<typeof envSchema>;
+
+let cached: Env | null = null;
+
+export function getEnv(): Env {
+  if (cached) return cached;
+  const parsed = envSchema.safeParse(process.env);
+  if (!parsed.success) {
+    const problems = parsed.error.issues.map((i) => `${i.path.join(".")}: ${i.message}`).join("; ");
+    throw new Error(`Ionleaf is not configured: ${problems}`);
+  }
+  cached = parsed.data;
+  return cached;
+}

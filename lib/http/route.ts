@@ -1,0 +1,37 @@
+import "server-only";
+import { AppError, isAppError } from "@/lib/errors";
+
+/** The JSON body of every API error: a code a client can switch on and a message a person can read. */
+export interface ApiErrorBody {
+  error: { code: string; message: string; fieldErrors?: Record<string, string[]>; details?: Record<string, unknown> };
+}
+
+export function errorResponse(error: AppError): Response {
+  const body: ApiErrorBody = { error: { code: error.code, message: error.message, fieldErrors: error.fieldErrors, details: error.details } };
+  return Response.json(body, { status: error.status });
+}
+
+/** Wraps a route handler: typed errors become their status, anything else a 500 without internals. */
+export function route<C>(handler: (request: Request, context: C) => Promise<Response>) {
+  return async (request: Request, context: C): Promise<Response> => {
+    try {
+      return await handler(request, context);
+    } catch (error) {
+      if (isAppError(error)) return errorResponse(error);
+      console.error("[ionleaf] route failed", request.method, new URL(request.url).pathname, error);
+      return Response.json(
+        { error: { code: "internal", message: "Something went wrong on our side; nothing was changed." } },
+        { status: 500 },
+      );
+    }
+  };
+}
+
+/** Reads a JSON body or answers 400-class with a clear message. */
+export async function readJson(request: Request): Promise<unknown> {
+  try {
+    return await request.json();
+  } catch {
+    throw new AppError("invalid_input", "The request body is not valid JSON.");
+  }
+}

@@ -1,0 +1,27 @@
+import "server-only";
+import { z } from "zod";
+import { getEnv } from "@/lib/env";
+
+const caughtMessageSchema = z.object({
+  id: z.string(),
+  from: z.string(),
+  to: z.array(z.string()),
+  subject: z.string(),
+  text: z.string(),
+  html: z.string().nullable(),
+  receivedAt: z.string(),
+});
+export type CaughtMessage = z.infer<typeof caughtMessageSchema>;
+
+/** True when mail goes to the local mail catcher (demo and tests), so its inbox can be shown. */
+export function mailCatcherConfigured(): boolean {
+  return Boolean(getEnv().MAIL_CATCHER_URL);
+}
+
+export async function listCaughtMessages(): Promise<CaughtMessage[]> {
+  const base = getEnv().MAIL_CATCHER_URL;
+  if (!base) return [];
+  const response = await fetch(new URL("/messages", base), { cache: "no-store" });
+  if (!response.ok) throw new Error(`mail catcher answered ${response.status}`);
+  return z.array(caughtMessageSchema).parse(await response.json());
+}

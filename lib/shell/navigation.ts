@@ -1,0 +1,19 @@
+import type { Role } from "@/db/schema/enums";
+import { roleCan } from "@/lib/access/policy";
+
+export interface NavEntry {
+  href: string;
+  label: string;
+}
+
+/** The main navigation for a role: everyone writes and searches; review and lab settings by role. */
+export function navigationFor(role: Role): NavEntry[] {
+  const items: NavEntry[] = [
+    { href: "/", label: "Bench" },
+    { href: "/entries", label: "Entries" },
+    { href: "/solutions", label: "Solution finder" },
+  ];
+  if (roleCan(role, "review.read")) items.push({ href: "/review", label: "Review queue" });
+  if (roleCan(role, "lab.manage")) items.push({ href: "/lab", label: "Lab settings" });
+  return items;
+}

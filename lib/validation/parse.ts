@@ -1,0 +1,20 @@
+import type { z } from "zod";
+import { AppError, fieldErrorsFromZod } from "@/lib/errors";
+
+/** Parses untrusted input with a shared schema, or throws a 422 AppError with field errors. */
+export function parseInput<S extends z.ZodType>(schema: S, input: unknown): z.infer<S> {
+  const result = schema.safeParse(input);
+  if (!result.success) {
+    throw new AppError("invalid_input", "Some fields need attention.", { fieldErrors: fieldErrorsFromZod(result.error.issues) });
+  }
+  return result.data;
+}
+
+/** FormData → plain object (last value wins; empty strings kept so schemas can say "required"). */
+export function formDataToObject(form: FormData): Record<string, string> {
+  const out: Record<string, string> = {};
+  form.forEach((value, key) => {
+    if (typeof value === "string") out[key] = value;
+  });
+  return out;
+}
