@@ -6,3 +6,6 @@ export { debyeHuckelConstants, debyeHuckelConstantsFrom } from "./debye-huckel-c
 export { waterRelativePermittivity, waterDensityGPerMl } from "./solvents/water";
 export { listSolvents } from "./solvents/catalogue";
 export type { ActivityModelId, DebyeHuckelConstants } from "./models/types";
+export { searchSpecies } from "./species/catalogue";
+export { resolveSpecies } from "./species/resolve";
+export type { ResolvedSpecies } from "./species/resolve";

@@ -70,7 +70,7 @@ export const IONS: readonly IonData[] = [
   { formula: "Fe(CN)6^4-", name: "hexacyanoferrate(II)", aliases: ["ferrocyanide", "[Fe(CN)6]4-"] },
   { formula: "PF6-", name: "hexafluorophosphate", hazards: ["Hexafluorophosphate hydrolyses (moisture, acid, heat) to HF."] },
   { formula: "BF4-", name: "tetrafluoroborate", hazards: ["Tetrafluoroborate hydrolyses slowly in water and acid to HF."] },
-  { formula: "N(SO2CF3)2-", name: "bis(trifluoromethanesulfonyl)imide", aliases: ["TFSI-", "NTf2-", "TFSA-"] },
+  { formula: "N(SO2CF3)2^-", name: "bis(trifluoromethanesulfonyl)imide", aliases: ["TFSI-", "NTf2-", "TFSA-"] },
   { formula: "CF3SO3-", name: "trifluoromethanesulfonate", aliases: ["OTf-", "triflate"] },
   { formula: "AsF6-", name: "hexafluoroarsenate", hazards: ["Arsenic compound: toxic; hydrolyses to HF."] },
 ];

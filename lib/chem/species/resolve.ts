@@ -1,0 +1,89 @@
+/**
+ * Turns what a chemist typed for a component into a species: its ions per formula unit,
+ * its molar mass as weighed (hydrate included), water of crystallisation, hazards, notes.
+ */
+import { ChemInputError } from "../errors";
+import { parseFormula, type ParsedFormula } from "../formula";
+import { compositionMolarMass } from "../formula/molar-mass";
+import { saltByAlias, saltByKey } from "./catalogue";
+import type { IonCount } from "./dissociation";
+import { inferDissociation } from "./infer";
+import { ionByKey } from "./ion-index";
+import type { SpeciesKind } from "./salts";
+
+export interface ResolvedSpecies {
+  /** Canonical formula as weighed ("CuSO4·5H2O"). */
+  formula: string;
+  /** Formula of the dissolved electrolyte ("CuSO4"). */
+  saltFormula: string;
+  name?: string;
+  kind: SpeciesKind;
+  ions: IonCount[];
+  /** g/mol of the weighed form, hydrate water included. */
+  molarMassGPerMol: number;
+  /** g/mol without water of crystallisation. */
+  anhydrousMolarMassGPerMol: number;
+  hydrateWater: number;
+  hazards: string[];
+  notes: string[];
+  warnings: string[];
+}
+
+const cache = new Map<string, ResolvedSpecies>();
+
+function fromParsed(parsed: ParsedFormula, field: string): ResolvedSpecies {
+  const base = {
+    formula: parsed.formula,
+    saltFormula: parsed.anhydrousFormula,
+    molarMassGPerMol: compositionMolarMass(parsed.elements),
+    anhydrousMolarMassGPerMol: compositionMolarMass(parsed.anhydrousElements),
+    hydrateWater: parsed.hydrateWater,
+    hazards: [] as string[],
+    notes: [] as string[],
+    warnings: [] as string[],
+  };
+  if (parsed.charge !== 0) {
+    const known = ionByKey(parsed.anhydrousKey);
+    const ion: IonCount = { formula: parsed.anhydrousFormula, charge: parsed.charge, count: 1, key: parsed.anhydrousKey };
+    if (!known) base.warnings.push(`${parsed.anhydrousFormula} is not in the ion catalogue; it is taken as an ion of charge ${parsed.charge > 0 ? "+" : ""}${parsed.charge}.`);
+    return { ...base, name: known?.name, kind: "ion", ions: [ion], hazards: known?.hazards ?? [] };
+  }
+  const salt = saltByKey(parsed.anhydrousKey);
+  if (salt) {
+    return {
+      ...base, saltFormula: salt.formula, name: salt.name, kind: salt.kind, ions: salt.ions,
+      hazards: [...salt.hazards], notes: salt.note ? [salt.note] : [],
+    };
+  }
+  const inferred = inferDissociation(parsed.anhydrousElements);
+  if (inferred) {
+    const text = inferred.map((i) => `${i.count > 1 ? i.count + " " : ""}${i.formula}`).join(" + ");
+    base.warnings.push(`${parsed.anhydrousFormula} is not in the catalogue; its dissociation was inferred from ionic charges as ${text}.`);
+    return { ...base, kind: "salt", ions: inferred };
+  }
+  throw new ChemInputError(
+    `"${parsed.input}" is not in the species catalogue and its ions cannot be inferred from their charges. Enter its ions separately (for example "Na+" and "Cl-").`,
+    { field, code: "unknown_species" },
+  );
+}
+
+export function resolveSpecies(text: string, field = "formula"): ResolvedSpecies {
+  const hit = cache.get(text);
+  if (hit) return hit;
+  let resolved: ResolvedSpecies;
+  const alias = typeof text === "string" ? saltByAlias(text) : undefined;
+  try {
+    resolved = fromParsed(parseFormula(alias ? alias.formula : text), field);
+  } catch (error) {
+    if (error instanceof ChemInputError && error.field !== field) {
+      throw new ChemInputError(error.message, { field, code: error.code });
+    }
+    throw error;
+  }
+  for (const ion of resolved.ions) {
+    for (const h of ionByKey(ion.key)?.hazards ?? []) if (!resolved.hazards.includes(h)) resolved.hazards.push(h);
+  }
+  if (cache.size > 2000) cache.clear();
+  cache.set(text, resolved);
+  return resolved;
+}
