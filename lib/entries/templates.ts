@@ -1,5 +1,5 @@
 import { defaultCellBlockInput, defaultSolutionBlockInput } from "./block-defaults";
-import type { EntryDocument } from "./document-schema";
+import type { EntryDocument, EntryNode } from "./document-schema";
 
 /**
  * Starting documents for a new entry. `build()` returns a fresh document each time, with new
@@ -12,7 +12,7 @@ export interface EntryTemplate {
   build(): EntryDocument;
 }
 
-type Json = Record<string, unknown>;
+type Json = EntryNode;
 
 const text = (value: string): Json => ({ type: "text", text: value });
 const heading = (level: number, value: string): Json => ({ type: "heading", attrs: { level }, content: [text(value)] });
@@ -75,7 +75,7 @@ function buildCellPreparation(): EntryDocument {
       heading(2, "Observations"),
       paragraph(),
     ],
-  } as EntryDocument;
+  };
 }
 
 function buildElectrolyteStock(): EntryDocument {
@@ -102,7 +102,7 @@ function buildElectrolyteStock(): EntryDocument {
       heading(2, "Storage"),
       paragraph("Where it is kept and until when it is used."),
     ],
-  } as EntryDocument;
+  };
 }
 
 export const entryTemplates: EntryTemplate[] = [

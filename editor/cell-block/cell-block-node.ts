@@ -1,0 +1,59 @@
+import { Node, mergeAttributes } from "@tiptap/core";
+import { ReactNodeViewRenderer } from "@tiptap/react";
+import { defaultCellBlockInput } from "@/lib/entries/block-defaults";
+import { newBlockId } from "@/lib/entries/block-id";
+import { cellBlockInputSchema, type CellBlockInput } from "@/lib/entries/block-schemas";
+import { blockAttributes } from "../block-node-html";
+import { CellBlockView } from "./cell-block-view";
+
+declare module "@tiptap/core" {
+  interface Commands<ReturnType> {
+    cellBlock: {
+      /** Inserts a cell block; its electrolyte defaults to the entry's last solution block. */
+      insertCellBlock: (input?: Partial<CellBlockInput>) => ReturnType;
+    };
+  }
+}
+
+/** A cell preparation block: electrodes, reference, electrolyte link, purge, instrument. */
+export const CellBlock = Node.create({
+  name: "cellBlock",
+  group: "block",
+  atom: true,
+  selectable: true,
+  draggable: true,
+
+  addAttributes() {
+    return blockAttributes(() => defaultCellBlockInput(), cellBlockInputSchema);
+  },
+
+  parseHTML() {
+    return [{ tag: 'div[data-type="cell-block"]' }];
+  },
+
+  renderHTML({ node, HTMLAttributes }) {
+    return ["div", mergeAttributes(HTMLAttributes, { "data-type": "cell-block", "data-block": JSON.stringify(node.attrs) })];
+  },
+
+  addCommands() {
+    return {
+      insertCellBlock:
+        (input = {}) =>
+        ({ commands, state }) => {
+          let lastSolution: string | null = null;
+          state.doc.descendants((node) => {
+            if (node.type.name === "solutionBlock") lastSolution = node.attrs.blockId as string;
+            return node.isBlock;
+          });
+          return commands.insertContent({
+            type: this.name,
+            attrs: defaultCellBlockInput({ electrolyteBlockId: lastSolution, ...input, blockId: newBlockId() }),
+          });
+        },
+    };
+  },
+
+  addNodeView() {
+    return ReactNodeViewRenderer(CellBlockView);
+  },
+});

@@ -1,0 +1,67 @@
+"use client";
+
+import { useMemo } from "react";
+import type { CellBlockInput, SolutionBlockInput } from "@/lib/entries/block-schemas";
+import { formatPotentialV } from "@/lib/ui/format-number";
+import { coupleOptions, referenceElectrodeLabel } from "../chem-catalogue";
+import { NumberField } from "../ui/number-field";
+import { SafetyCaution } from "../ui/safety-caution";
+import { SelectField } from "../ui/select-field";
+import { computeCellPotential } from "./compute-cell-potential";
+
+interface CellPotentialProps {
+  cell: CellBlockInput;
+  electrolyte: SolutionBlockInput | null;
+  editable: boolean;
+  onChange: (patch: Partial<CellBlockInput>) => void;
+}
+
+/** Couple choice and the computed equilibrium potential, against the reference and against SHE. */
+export function CellPotential({ cell, electrolyte, editable, onChange }: CellPotentialProps) {
+  const potential = useMemo(() => computeCellPotential(cell, electrolyte), [cell, electrolyte]);
+  const couples = coupleOptions();
+  const needsPh = cell.referenceElectrode.type === "RHE";
+  const phError = potential.status === "error" && potential.field === "pH" ? potential.message : undefined;
+  return (
+    <div className="space-y-2">
+      <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
+        <SelectField
+          label="Couple"
+          className="col-span-2"
+          value={cell.couple ?? ""}
+          options={[{ value: "", label: "— choose a couple —" }, ...couples]}
+          disabled={!editable}
+          error={potential.status === "error" && potential.field === "couple" ? potential.message : undefined}
+          onValueChange={(couple) => onChange({ couple: couple === "" ? null : couple })}
+        />
+        {needsPh || cell.pH !== null ? (
+          <NumberField label="pH (for RHE)" value={cell.pH} disabled={!editable} error={phError} onValueChange={(pH) => onChange({ pH })} />
+        ) : null}
+      </div>
+      {potential.status === "ok" ? (
+        <dl className="grid grid-cols-2 gap-3 sm:grid-cols-3" aria-live="polite">
+          <div className="rounded-md border border-lagoon-100 bg-lagoon-50/60 px-3 py-1.5">
+            <dt className="text-[11px] font-medium uppercase tracking-wide text-ink-soft">E vs {referenceElectrodeLabel(potential.reference)}</dt>
+            <dd className="font-mono text-base tabular-nums text-lagoon-700" data-testid="potential-vs-reference">
+              {formatPotentialV(potential.vsReference)} <span className="font-sans text-xs text-ink-soft">V</span>
+            </dd>
+          </div>
+          <div className="rounded-md border border-lagoon-100 bg-lagoon-50/60 px-3 py-1.5">
+            <dt className="text-[11px] font-medium uppercase tracking-wide text-ink-soft">E vs SHE</dt>
+            <dd className="font-mono text-base tabular-nums text-lagoon-700" data-testid="potential-vs-she">
+              {formatPotentialV(potential.vsShe)} <span className="font-sans text-xs text-ink-soft">V</span>
+            </dd>
+          </div>
+          <p className="col-span-2 self-center text-xs text-ink-soft sm:col-span-1">
+            Nernst equation at {potential.temperatureC} °C with the activities computed for the linked solution.
+          </p>
+        </dl>
+      ) : potential.status === "error" && potential.field !== "couple" && potential.field !== "pH" ? (
+        <p role="alert" className="rounded-md border border-red-300 bg-red-50 px-3 py-2 text-sm text-red-900">{potential.message}</p>
+      ) : potential.status === "idle" ? (
+        <p className="text-sm text-ink-soft">{potential.message}</p>
+      ) : null}
+      <SafetyCaution />
+    </div>
+  );
+}

@@ -1,0 +1,36 @@
+import { convertPotential, isChemInputError, nernstPotential } from "@/lib/chem";
+import type { CellBlockInput, SolutionBlockInput } from "@/lib/entries/block-schemas";
+import { evaluateSolutionBlockCached } from "../solution-block/evaluate-solution-block";
+
+export type CellPotentialResult =
+  | { status: "idle"; message: string }
+  | { status: "error"; field?: string; message: string }
+  | { status: "ok"; vsShe: number; vsReference: number; reference: string; temperatureC: number; activities: Record<string, number> };
+
+/**
+ * Equilibrium potential of the chosen couple at the linked electrolyte's computed activities
+ * (lib/chem's nernstPotential), then on the chosen reference scale (convertPotential).
+ * The cell's temperature wins over the solution's when both are given.
+ */
+export function computeCellPotential(cell: CellBlockInput, electrolyte: SolutionBlockInput | null): CellPotentialResult {
+  if (!cell.couple) return { status: "idle", message: "Choose a couple to see its equilibrium potential." };
+  if (!electrolyte) return { status: "idle", message: "Link the electrolyte to a solution block of this entry." };
+  const evaluation = evaluateSolutionBlockCached(electrolyte);
+  if (evaluation.status === "empty") return { status: "idle", message: "The linked solution has no components yet." };
+  if (evaluation.status === "error") {
+    return { status: "error", message: `The linked solution cannot be computed: ${evaluation.message}` };
+  }
+  const temperatureC = cell.temperatureC ?? electrolyte.temperatureC ?? 25;
+  const activities: Record<string, number> = {};
+  for (const ion of evaluation.result.ions) activities[ion.formula] = ion.activity;
+  try {
+    const vsShe = nernstPotential({ couple: cell.couple, activities, temperatureC });
+    const reference = cell.referenceElectrode.type;
+    const options = cell.pH === null ? { temperatureC } : { temperatureC, pH: cell.pH };
+    const vsReference = convertPotential(vsShe, "SHE", reference, options);
+    return { status: "ok", vsShe, vsReference, reference, temperatureC, activities };
+  } catch (error) {
+    if (!isChemInputError(error)) throw error;
+    return { status: "error", field: error.field, message: error.message };
+  }
+}

@@ -1,0 +1,81 @@
+"use client";
+
+import "katex/dist/katex.min.css";
+import "./notebook-editor.css";
+import type { JSONContent } from "@tiptap/core";
+import { EditorContent, useEditor } from "@tiptap/react";
+import { useEffect, useMemo, useRef, useState } from "react";
+import { cx } from "@/lib/ui/class-names";
+import { buildEditorExtensions } from "./extensions";
+import { EditorPrompts } from "./toolbar/editor-prompts";
+import { EditorToolbar, type ToolbarPrompt } from "./toolbar/editor-toolbar";
+
+export interface NotebookEditorProps {
+  /** The entry's tiptap JSON as saved (a revision's document). Read once, at mount. */
+  initialContent?: JSONContent;
+  /** False for submitted or countersigned entries: text and blocks are read-only. */
+  editable?: boolean;
+  /** Called with the whole document after every change (debounce in the caller for autosave). */
+  onChange?: (doc: JSONContent) => void;
+  placeholder?: string;
+  /** Accessible name of the editing area, e.g. the entry title. */
+  ariaLabel?: string;
+  className?: string;
+}
+
+/**
+ * The notebook editor: rich text with tables, checklists, links and TeX equations, plus the
+ * live solution and cell blocks. It owns no saving: the page passes the saved document in
+ * and receives every change through `onChange`.
+ */
+export function NotebookEditor({ initialContent, editable = true, onChange, placeholder, ariaLabel = "Entry text", className }: NotebookEditorProps) {
+  const [prompt, setPrompt] = useState<ToolbarPrompt | null>(null);
+  const onChangeRef = useRef(onChange);
+  onChangeRef.current = onChange;
+  const promptRef = useRef(setPrompt);
+
+  const extensions = useMemo(
+    () =>
+      buildEditorExtensions({
+        placeholder,
+        onEditMath: (kind, latex, pos) => promptRef.current({ kind: "math", display: kind === "block", latex, pos }),
+      }),
+    // The schema is fixed for the editor's lifetime.
+    [],
+  );
+
+  const editor = useEditor({
+    immediatelyRender: false,
+    extensions,
+    content: initialContent ?? { type: "doc", content: [{ type: "paragraph" }] },
+    editable,
+    editorProps: {
+      attributes: { "aria-label": ariaLabel, "aria-multiline": "true", role: "textbox", class: "ionleaf-prose" },
+      handleKeyDown: (_view, event) => {
+        if ((event.ctrlKey || event.metaKey) && event.key.toLowerCase() === "k") {
+          event.preventDefault();
+          promptRef.current({ kind: "link" });
+          return true;
+        }
+        return false;
+      },
+    },
+    onUpdate: ({ editor: e }) => onChangeRef.current?.(e.getJSON()),
+  });
+
+  useEffect(() => {
+    if (editor && editor.isEditable !== editable) editor.setEditable(editable, false);
+  }, [editor, editable]);
+
+  return (
+    <div className={cx("ionleaf-editor relative rounded-lg border border-ink-faint/40 bg-paper text-ink", className)}>
+      {editor && editable ? (
+        <div className="sticky top-0 z-10 rounded-t-lg">
+          <EditorToolbar editor={editor} onPrompt={setPrompt} />
+          {prompt ? <EditorPrompts editor={editor} prompt={prompt} onClose={() => setPrompt(null)} /> : null}
+        </div>
+      ) : null}
+      <EditorContent editor={editor} className="px-6 py-4" />
+    </div>
+  );
+}

@@ -1,0 +1,94 @@
+"use client";
+
+import { useEffect, useRef, useState, type KeyboardEvent } from "react";
+import type { SolutionComponentInput } from "@/lib/entries/block-schemas";
+import { actionButtonClass } from "../ui/field-styles";
+import { ComponentRow } from "./component-row";
+import type { FieldMessages } from "./field-messages";
+
+interface ComponentsTableProps {
+  components: SolutionComponentInput[];
+  errors: FieldMessages;
+  editable: boolean;
+  onChange: (components: SolutionComponentInput[]) => void;
+}
+
+const emptyRow = (): SolutionComponentInput => ({ formula: "", amount: null, unit: "mol/kg" });
+
+/**
+ * The components of a solution, one row each. Keyboard: Enter on the last row adds a row;
+ * Ctrl/Cmd+Backspace on an empty row removes it; focus follows to the row a person expects.
+ */
+export function ComponentsTable({ components, errors, editable, onChange }: ComponentsTableProps) {
+  const speciesInputs = useRef<(HTMLInputElement | null)[]>([]);
+  const [focusRow, setFocusRow] = useState<number | null>(null);
+
+  useEffect(() => {
+    if (focusRow === null) return;
+    speciesInputs.current[focusRow]?.focus();
+    setFocusRow(null);
+  }, [focusRow, components.length]);
+
+  const update = (index: number, patch: Partial<SolutionComponentInput>) =>
+    onChange(components.map((row, i) => (i === index ? { ...row, ...patch } : row)));
+  const addRow = () => {
+    // A new row copies the unit above it: stocks are usually written in one unit.
+    const last = components[components.length - 1];
+    onChange([...components, { ...emptyRow(), unit: last?.unit ?? "mol/kg", perAmount: last?.perAmount, perUnit: last?.perUnit }]);
+    setFocusRow(components.length);
+  };
+  const removeRow = (index: number) => {
+    onChange(components.filter((_, i) => i !== index));
+    setFocusRow(Math.max(0, index - 1));
+  };
+
+  const rowKeyDown = (index: number) => (event: KeyboardEvent<HTMLInputElement>) => {
+    const row = components[index];
+    if (event.key === "Enter" && index === components.length - 1) {
+      event.preventDefault();
+      addRow();
+    } else if (event.key === "Backspace" && (event.ctrlKey || event.metaKey) && row.formula.trim() === "" && row.amount === null) {
+      event.preventDefault();
+      if (components.length > 1) removeRow(index);
+    }
+  };
+
+  return (
+    <div>
+      <table className="w-full border-collapse text-sm">
+        <caption className="sr-only">Components</caption>
+        <thead>
+          <tr className="text-left text-[11px] uppercase tracking-wide text-ink-soft">
+            <th scope="col" className="pb-1 font-medium">Species</th>
+            <th scope="col" className="pb-1 text-right font-medium">Amount</th>
+            <th scope="col" className="pb-1 font-medium">Unit</th>
+            <th scope="col" className="pb-1 font-medium">Basis</th>
+            <th scope="col" className="pb-1"><span className="sr-only">Remove</span></th>
+          </tr>
+        </thead>
+        <tbody>
+          {components.map((component, index) => (
+            <ComponentRow
+              key={index}
+              index={index}
+              component={component}
+              errors={errors}
+              editable={editable}
+              onChange={(patch) => update(index, patch)}
+              onRemove={() => removeRow(index)}
+              onKeyDown={rowKeyDown(index)}
+              speciesRef={(element) => {
+                speciesInputs.current[index] = element;
+              }}
+            />
+          ))}
+        </tbody>
+      </table>
+      {editable ? (
+        <button type="button" className={`${actionButtonClass} mt-1`} onClick={addRow}>
+          <span aria-hidden>+</span> Add component
+        </button>
+      ) : null}
+    </div>
+  );
+}

@@ -1,0 +1,9 @@
+/** Messages keyed by input path ("temperatureC", "components[1].amount"). */
+export type FieldMessages = ReadonlyMap<string, string>;
+
+export const NO_MESSAGES: FieldMessages = new Map();
+
+/** Normalises "components.1.amount" and "components[1].amount" to the bracket form the UI uses. */
+export function normaliseFieldPath(field: string): string {
+  return field.replace(/\.(\d+)(?=\.|$)/g, "[$1]");
+}

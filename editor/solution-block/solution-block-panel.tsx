@@ -1,0 +1,64 @@
+"use client";
+
+import { useMemo } from "react";
+import type { SolutionBlockInput } from "@/lib/entries/block-schemas";
+import { TextField } from "../ui/text-field";
+import { ComponentsTable } from "./components-table";
+import { evaluateSolutionBlockCached } from "./evaluate-solution-block";
+import { NO_MESSAGES, type FieldMessages } from "./field-messages";
+import { SolutionResults } from "./solution-results";
+import { SolutionSettings } from "./solution-settings";
+
+interface SolutionBlockPanelProps {
+  value: SolutionBlockInput;
+  onChange: (next: SolutionBlockInput) => void;
+  editable?: boolean;
+}
+
+/**
+ * The solution block's form and live results. Independent of tiptap: the node view passes the
+ * node's attributes in and writes changes back with updateAttributes.
+ */
+export function SolutionBlockPanel({ value, onChange, editable = true }: SolutionBlockPanelProps) {
+  const evaluation = useMemo(() => evaluateSolutionBlockCached(value), [value]);
+  const errors: FieldMessages = useMemo(
+    () => (evaluation.status === "error" && evaluation.field ? new Map([[evaluation.field, evaluation.message]]) : NO_MESSAGES),
+    [evaluation],
+  );
+  const patch = (changes: Partial<SolutionBlockInput>) => onChange({ ...value, ...changes });
+  const formulas = value.components.map((row) => row.formula).filter((formula) => formula.trim() !== "");
+
+  return (
+    <section
+      data-live-block="solution"
+      aria-label={`Solution block ${value.name || "(unnamed)"}`}
+      className="my-4 rounded-lg border border-ink-faint/40 bg-white/70 shadow-sm"
+    >
+      <header className="flex items-center gap-2 border-b border-ink-faint/30 bg-paper-deep/60 px-3 py-1.5">
+        <span data-drag-handle title="Drag to move" className="cursor-grab select-none text-ink-faint" aria-hidden>
+          ⠿
+        </span>
+        <span className="rounded bg-lagoon-600 px-1.5 py-0.5 text-[10px] font-semibold uppercase tracking-wider text-white">Solution</span>
+        <TextField
+          label="Solution name"
+          hideLabel
+          className="flex-1"
+          placeholder="Name, e.g. Supporting electrolyte A"
+          value={value.name}
+          disabled={!editable}
+          onValueChange={(name) => patch({ name })}
+        />
+        <span className="hidden font-mono text-[10px] text-ink-faint sm:inline" title={`Block id ${value.blockId ?? ""}`}>
+          #{String(value.blockId ?? "").slice(0, 8)}
+        </span>
+      </header>
+      <div className="space-y-4 px-3 py-3">
+        <SolutionSettings value={value} errors={errors} editable={editable} onChange={patch} />
+        <ComponentsTable components={value.components} errors={errors} editable={editable} onChange={(components) => patch({ components })} />
+        <div className="border-t border-dashed border-ink-faint/40 pt-3">
+          <SolutionResults evaluation={evaluation} formulas={formulas} />
+        </div>
+      </div>
+    </section>
+  );
+}

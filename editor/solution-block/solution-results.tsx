@@ -1,0 +1,69 @@
+"use client";
+
+import { lazy, Suspense, useState } from "react";
+import { actionButtonClass } from "../ui/field-styles";
+import { SafetyCaution } from "../ui/safety-caution";
+import { hazardNotesFor, modelLabel } from "../chem-catalogue";
+import type { SolutionEvaluation } from "./evaluate-solution-block";
+import { FormulaApplied } from "./formula-applied";
+import { IonTable, SaltList } from "./ion-table";
+import { MessagesList } from "./messages-list";
+import { ResultsSummary } from "./results-summary";
+
+// recharts is only fetched when a researcher opens a chart, so the editor's first load stays light.
+const GammaChart = lazy(() => import("./gamma-chart"));
+
+interface SolutionResultsProps {
+  evaluation: SolutionEvaluation;
+  /** Species typed in the block, for hazard notes even while the engine refuses the input. */
+  formulas: string[];
+}
+
+export function SolutionResults({ evaluation, formulas }: SolutionResultsProps) {
+  const [chartOpen, setChartOpen] = useState(false);
+  const [chartSalt, setChartSalt] = useState<string | null>(null);
+  const hazards = hazardNotesFor(formulas, evaluation.status === "ok" ? evaluation.result : undefined);
+
+  if (evaluation.status === "empty") {
+    return <p className="text-sm text-ink-soft">Add a species and an amount to see ionic strength and activities.</p>;
+  }
+
+  return (
+    <div className="space-y-3" aria-live="polite">
+      {evaluation.status === "error" ? (
+        <p role="status" className="rounded-md border border-red-300 bg-red-50 px-3 py-2 text-sm text-red-900">
+          {evaluation.field ? "Results paused: fix the marked field." : evaluation.message}
+        </p>
+      ) : (
+        <>
+          <ResultsSummary result={evaluation.result} />
+          <p className="text-xs text-ink-soft">
+            <span className="font-medium text-ink">Model: {modelLabel(evaluation.result.model.used)}</span>
+            {evaluation.result.model.reason ? <> — {evaluation.result.model.reason}</> : null}
+          </p>
+          <div className="grid gap-4 lg:grid-cols-[2fr_1fr]">
+            <IonTable result={evaluation.result} />
+            <SaltList result={evaluation.result} />
+          </div>
+          <FormulaApplied input={evaluation.input} result={evaluation.result} saltFormula={chartSalt} />
+          <MessagesList title="Outside the model's range" tone="validity" messages={evaluation.result.validity.messages} />
+          <MessagesList title="Warnings" tone="warning" messages={evaluation.result.warnings} />
+          {evaluation.result.salts.length > 0 ? (
+            <div>
+              <button type="button" className={actionButtonClass} aria-expanded={chartOpen} onClick={() => setChartOpen((open) => !open)}>
+                {chartOpen ? "Hide" : "Show"} γ± against √I for each model
+              </button>
+              {chartOpen ? (
+                <Suspense fallback={<p className="mt-2 text-xs text-ink-soft">Loading chart…</p>}>
+                  <GammaChart input={evaluation.input} result={evaluation.result} salt={chartSalt} onSaltChange={setChartSalt} />
+                </Suspense>
+              ) : null}
+            </div>
+          ) : null}
+        </>
+      )}
+      <MessagesList title="Hazard notes" tone="hazard" messages={hazards} />
+      <SafetyCaution />
+    </div>
+  );
+}

@@ -1,0 +1,60 @@
+"use client";
+
+import type { SolutionBlockInput } from "@/lib/entries/block-schemas";
+import { MODEL_CHOICES } from "@/lib/entries/block-schemas";
+import { modelLabel, solventOptions } from "../chem-catalogue";
+import { NumberField } from "../ui/number-field";
+import { SelectField } from "../ui/select-field";
+import type { FieldMessages } from "./field-messages";
+
+interface SolutionSettingsProps {
+  value: SolutionBlockInput;
+  errors: FieldMessages;
+  editable: boolean;
+  onChange: (patch: Partial<SolutionBlockInput>) => void;
+}
+
+const MODEL_OPTIONS = MODEL_CHOICES.map((id) => ({ value: id, label: id === "auto" ? "Auto (chosen for the composition)" : modelLabel(id) }));
+
+/** Solvent, temperature, optional density and activity model of one solution. */
+export function SolutionSettings({ value, errors, editable, onChange }: SolutionSettingsProps) {
+  const solvents = solventOptions();
+  const known = solvents.some((option) => option.value === value.solvent);
+  return (
+    <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
+      <SelectField
+        label="Solvent"
+        value={value.solvent}
+        options={known ? solvents : [{ value: value.solvent, label: value.solvent }, ...solvents]}
+        disabled={!editable}
+        error={errors.get("solvent")}
+        onValueChange={(solvent) => onChange({ solvent })}
+      />
+      <NumberField
+        label="Temperature"
+        unit="°C"
+        value={value.temperatureC}
+        disabled={!editable}
+        error={errors.get("temperatureC")}
+        onValueChange={(temperatureC) => onChange({ temperatureC })}
+      />
+      <NumberField
+        label="Density (optional)"
+        unit="g/mL"
+        placeholder="estimated"
+        value={value.densityGPerMl ?? null}
+        disabled={!editable}
+        error={errors.get("densityGPerMl")}
+        onValueChange={(densityGPerMl) => onChange({ densityGPerMl })}
+      />
+      <SelectField
+        label="Activity model"
+        value={value.model}
+        options={MODEL_OPTIONS}
+        disabled={!editable}
+        error={errors.get("model")}
+        onValueChange={(model) => onChange({ model: model as SolutionBlockInput["model"] })}
+      />
+    </div>
+  );
+}
