@@ -31,12 +31,19 @@ export interface DebyeHuckelConstants {
   aPhi: number;
 }
 
+/** Model switches a user may set (added by part 1; models ignore what they do not use). */
+export interface ActivityModelOptions {
+  /** Coefficient of the linear term in the Davies equation: 0.3 (Davies 1962) or 0.2 (earlier form). */
+  daviesCoefficient?: 0.2 | 0.3;
+}
+
 export interface ActivityModelInput {
   ions: ModelIon[];
   ionicStrengthMolal: number;
   temperatureC: number;
   solvent: string;
   constants: DebyeHuckelConstants;
+  options?: ActivityModelOptions;
 }
 
 export interface ActivityModelOutput {
@@ -56,4 +63,10 @@ export interface ActivityModel {
   /** LaTeX of the equation applied, for the solution block (KaTeX). */
   formulaTex: string;
   compute(input: ActivityModelInput): ActivityModelOutput;
+  /** Range of validity in words, with its source (added by part 1). */
+  validityNote?: string;
+  /** Upper ionic strength (mol/kg) of the model's documented range (added by part 1). */
+  maxIonicStrengthMolal?: number;
+  /** The equation with this solution's A, B, I (and options) substituted, for KaTeX (added by part 1). */
+  substitutedTex?(input: ActivityModelInput): string;
 }

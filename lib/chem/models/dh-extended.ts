@@ -1,0 +1,39 @@
+/**
+ * Extended Debye–Hückel equation with Kielland's (1937) ion sizes:
+ *   log10 γi = −A zi² √I / (1 + B åi √I)
+ * Ion sizes å: Kielland (1937) J. Am. Chem. Soc. 59, 1675 (data/ion-size-kielland.ts).
+ * Range: I ≤ 0.1 mol/kg, the range of Kielland's table. The sizes are for water.
+ */
+import type { ActivityModel, ActivityModelInput } from "./types";
+import { ionicStrengthMessage, log10ToLn, substitutedCore, waterOnlyNote } from "./dh-common";
+import { assumedIonSize, kiellandIonSize } from "./ion-parameters";
+
+const LABEL = "Extended Debye–Hückel (Kielland ion sizes)";
+const MAX_I = 0.1;
+
+export const dhExtendedModel: ActivityModel = {
+  id: "dh-extended",
+  label: LABEL,
+  formulaTex: String.raw`\log_{10}\gamma_i = -\frac{A z_i^2 \sqrt{I}}{1 + B \mathring{a}_i \sqrt{I}}`,
+  validityNote: "I ≤ 0.1 mol/kg, the range of Kielland's (1937) table; ion sizes for water.",
+  maxIonicStrengthMolal: MAX_I,
+  compute(input: ActivityModelInput) {
+    const sqrtI = Math.sqrt(input.ionicStrengthMolal);
+    const { aLog10: A, bPerAngstrom: B } = input.constants;
+    const notes: string[] = [];
+    const lnGamma = input.ions.map((ion) => {
+      let a = kiellandIonSize(ion.formula);
+      if (a === undefined) {
+        a = assumedIonSize(ion.charge);
+        notes.push(`No Kielland ion size for ${ion.formula}; å = ${a} Å assumed.`);
+      }
+      return log10ToLn((-A * ion.charge * ion.charge * sqrtI) / (1 + B * a * sqrtI));
+    });
+    notes.push(...waterOnlyNote(LABEL, "Kielland's ion sizes", input.solvent));
+    return { lnGamma, validityMessages: ionicStrengthMessage(LABEL, MAX_I, input), notes };
+  },
+  substitutedTex(input) {
+    const { A, B, sqrtI } = substitutedCore(input);
+    return String.raw`\log_{10}\gamma_i = -\frac{${A}\,z_i^2 \times ${sqrtI}}{1 + ${B}\,\mathring{a}_i \times ${sqrtI}}`;
+  },
+};

@@ -1,0 +1,39 @@
+/**
+ * Debye–Hückel limiting law (Debye & Hückel 1923, Phys. Z. 24, 185):
+ *   log10 γi = −A zi² √I
+ * Holds only in the dilute limit: for 1:1 electrolytes up to √I ≈ 0.1, and to lower √I the
+ * higher the charges (common practice, no single source); this engine takes
+ * √I ≤ 0.1 / |z+ z−| with the largest charges present. A is computed from the solvent's
+ * εr and ρ, so the law applies to any solvent.
+ */
+import type { ActivityModel, ActivityModelInput } from "./types";
+import { chargeProductMagnitude, log10ToLn, substitutedCore, texNumber } from "./dh-common";
+
+export const DH_LIMITING_SQRT_I_MAX_1_1 = 0.1;
+
+export function limitingLawSqrtIMax(chargeProduct: number): number {
+  return DH_LIMITING_SQRT_I_MAX_1_1 / chargeProduct;
+}
+
+export const dhLimitingModel: ActivityModel = {
+  id: "dh-limiting",
+  label: "Debye–Hückel limiting law",
+  formulaTex: String.raw`\log_{10}\gamma_i = -A z_i^2 \sqrt{I}`,
+  validityNote: "Dilute solutions only: √I ≤ 0.1 for 1:1 electrolytes, √I ≤ 0.1/|z₊z₋| for higher charges (common practice).",
+  maxIonicStrengthMolal: DH_LIMITING_SQRT_I_MAX_1_1 ** 2,
+  compute(input: ActivityModelInput) {
+    const sqrtI = Math.sqrt(input.ionicStrengthMolal);
+    const A = input.constants.aLog10;
+    const lnGamma = input.ions.map((ion) => log10ToLn(-A * ion.charge * ion.charge * sqrtI));
+    const product = chargeProductMagnitude(input.ions);
+    const limit = limitingLawSqrtIMax(product);
+    const validityMessages = sqrtI > limit
+      ? [`The Debye–Hückel limiting law holds for ${product === 1 ? "1:1 electrolytes" : `charge product |z₊z₋| = ${product}`} only up to √I ≈ ${texNumber(limit)} (here √I = ${texNumber(sqrtI)}); use the extended equation, Davies or Truesdell–Jones.`]
+      : [];
+    return { lnGamma, validityMessages, notes: [] };
+  },
+  substitutedTex(input) {
+    const { A, sqrtI } = substitutedCore(input);
+    return String.raw`\log_{10}\gamma_i = -${A}\,z_i^2 \times ${sqrtI}`;
+  },
+};

@@ -1,0 +1,33 @@
+/**
+ * Güntelberg equation (Güntelberg 1926, Z. Phys. Chem. 123, 199):
+ *   log10 γi = −A zi² √I / (1 + √I)
+ * The extended equation with B å = 1 (kg/mol)^½ (å ≈ 3 Å in water at 25 °C), used for
+ * mixtures where no single ion size fits. Range: I ≤ 0.1 mol/kg.
+ */
+import type { ActivityModel, ActivityModelInput } from "./types";
+import { ionicStrengthMessage, log10ToLn, substitutedCore, waterOnlyNote } from "./dh-common";
+
+const LABEL = "Güntelberg";
+const MAX_I = 0.1;
+
+export const guntelbergModel: ActivityModel = {
+  id: "guntelberg",
+  label: LABEL,
+  formulaTex: String.raw`\log_{10}\gamma_i = -\frac{A z_i^2 \sqrt{I}}{1 + \sqrt{I}}`,
+  validityNote: "I ≤ 0.1 mol/kg (Güntelberg 1926); B·å = 1 is a water value.",
+  maxIonicStrengthMolal: MAX_I,
+  compute(input: ActivityModelInput) {
+    const sqrtI = Math.sqrt(input.ionicStrengthMolal);
+    const A = input.constants.aLog10;
+    const lnGamma = input.ions.map((ion) => log10ToLn((-A * ion.charge * ion.charge * sqrtI) / (1 + sqrtI)));
+    return {
+      lnGamma,
+      validityMessages: ionicStrengthMessage(LABEL, MAX_I, input),
+      notes: waterOnlyNote(LABEL, "the product B·å = 1", input.solvent),
+    };
+  },
+  substitutedTex(input) {
+    const { A, sqrtI } = substitutedCore(input);
+    return String.raw`\log_{10}\gamma_i = -\frac{${A}\,z_i^2 \times ${sqrtI}}{1 + ${sqrtI}}`;
+  },
+};

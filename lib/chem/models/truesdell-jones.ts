@@ -1,0 +1,63 @@
+/**
+ * Truesdell–Jones equation (Truesdell & Jones 1974, J. Res. U.S. Geol. Surv. 2, 233):
+ *   log10 γi = −A zi² √I / (1 + B åi √I) + bi I
+ * with the ion-specific å and b of WATEQ4F (Ball & Nordstrom 1991). For ions WATEQ4F does
+ * not fit, the b-dot form of Helgeson (1969) is used: the EQ3/6 ion size and Ḃ(T).
+ * Range: I ≤ 2 mol/kg for the fitted ions (chloride-dominated waters); parameters for water.
+ */
+import { bDot } from "../data/ion-size-bdot";
+import type { ActivityModel, ActivityModelInput } from "./types";
+import { ionicStrengthMessage, log10ToLn, substitutedCore, texNumber, waterOnlyNote } from "./dh-common";
+import { assumedIonSize, bDotIonSize, kiellandIonSize, truesdellJonesParameters } from "./ion-parameters";
+
+const LABEL = "Truesdell–Jones (b-dot)";
+const MAX_I = 2;
+/** Above this, b-dot ions (no fitted b) are outside Helgeson's well-tested range. */
+const BDOT_MAX_I = 1;
+
+export interface TruesdellJonesIonParameters {
+  aAngstrom: number;
+  b: number;
+  source: "WATEQ4F" | "b-dot" | "assumed";
+}
+
+export function truesdellJonesIon(formula: string, charge: number, temperatureC: number): TruesdellJonesIonParameters {
+  const fitted = truesdellJonesParameters(formula);
+  if (fitted) return { ...fitted, source: "WATEQ4F" };
+  const size = bDotIonSize(formula) ?? kiellandIonSize(formula);
+  return { aAngstrom: size ?? assumedIonSize(charge), b: bDot(temperatureC), source: size === undefined ? "assumed" : "b-dot" };
+}
+
+export const truesdellJonesModel: ActivityModel = {
+  id: "truesdell-jones",
+  label: LABEL,
+  formulaTex: String.raw`\log_{10}\gamma_i = -\frac{A z_i^2 \sqrt{I}}{1 + B \mathring{a}_i \sqrt{I}} + b_i I`,
+  validityNote: "I ≤ 2 mol/kg with WATEQ4F-fitted ions (Truesdell & Jones 1974); b-dot ions (Helgeson 1969) to about 1 mol/kg; water.",
+  maxIonicStrengthMolal: MAX_I,
+  compute(input: ActivityModelInput) {
+    const I = input.ionicStrengthMolal;
+    const sqrtI = Math.sqrt(I);
+    const { aLog10: A, bPerAngstrom: B } = input.constants;
+    const bDotIons: string[] = [];
+    const assumed: string[] = [];
+    const lnGamma = input.ions.map((ion) => {
+      const p = truesdellJonesIon(ion.formula, ion.charge, input.temperatureC);
+      if (p.source !== "WATEQ4F") bDotIons.push(ion.formula);
+      if (p.source === "assumed") assumed.push(`${ion.formula} (å = ${p.aAngstrom} Å)`);
+      return log10ToLn((-A * ion.charge * ion.charge * sqrtI) / (1 + B * p.aAngstrom * sqrtI) + p.b * I);
+    });
+    const notes: string[] = [];
+    if (bDotIons.length) notes.push(`No fitted Truesdell–Jones b for ${bDotIons.join(", ")}: b-dot form used (Ḃ = ${texNumber(bDot(input.temperatureC))} kg/mol).`);
+    if (assumed.length) notes.push(`No tabulated ion size for ${assumed.join(", ")}: assumed.`);
+    notes.push(...waterOnlyNote(LABEL, "the å and b parameters", input.solvent));
+    const validityMessages = ionicStrengthMessage(LABEL, MAX_I, input);
+    if (bDotIons.length && I > BDOT_MAX_I && validityMessages.length === 0) {
+      validityMessages.push(`Ions without fitted b (${bDotIons.join(", ")}) use the b-dot form, tested to about I = ${BDOT_MAX_I} mol/kg.`);
+    }
+    return { lnGamma, validityMessages, notes };
+  },
+  substitutedTex(input) {
+    const { A, B, I, sqrtI } = substitutedCore(input);
+    return String.raw`\log_{10}\gamma_i = -\frac{${A}\,z_i^2 \times ${sqrtI}}{1 + ${B}\,\mathring{a}_i \times ${sqrtI}} + b_i \times ${I}`;
+  },
+};

@@ -1,0 +1,106 @@
+/**
+ * computeSolution: species → amounts → ions → ionic strength and screening → activity
+ * model → ion and mean-salt activities, osmotic coefficient, validity, warnings, hazards.
+ */
+import { solveAmounts } from "../amounts/solve";
+import { debyeHuckelConstantsFrom } from "../debye-huckel-constants";
+import { ChemInputError } from "../errors";
+import { chooseModel } from "../models/auto";
+import { getModel } from "../models/registry";
+import type { ActivityModelInput, ModelIon } from "../models/types";
+import { ionByKey } from "../species/ion-index";
+import { resolveSpecies } from "../species/resolve";
+import { solventState } from "../solvents/properties";
+import { solutionHazards } from "./hazards";
+import { meanSaltResults } from "./mean-salt";
+import { osmoticCoefficientByGibbsDuhem, waterActivityFromOsmotic } from "./osmotic";
+import { chargeBalance, ionicStrength, kappaPerNm, type IonAmount } from "./screening";
+import type { IonResult, SolutionInput, SolutionResult } from "./types";
+import { validateSolutionInput } from "./validate";
+
+export function computeSolution(input: SolutionInput): SolutionResult {
+  const { temperatureC, solventId, requested, density } = validateSolutionInput(input);
+  const state = solventState(solventId, temperatureC);
+  const species = input.components.map((c, i) => resolveSpecies(c.formula, `components[${i}].formula`));
+  const amounts = solveAmounts(input.components, species, density, state.densityGPerMl);
+  const V = amounts.litresPerKgSolvent;
+
+  // Ions, merged over components, in order of first appearance.
+  const byFormula = new Map<string, IonAmount & { key: string }>();
+  let neutralMolality = 0;
+  species.forEach((s, i) => {
+    const m = amounts.components[i].molality;
+    if (s.ions.length === 0) neutralMolality += m;
+    for (const ion of s.ions) {
+      const entry = byFormula.get(ion.formula) ?? { formula: ion.formula, charge: ion.charge, molality: 0, molarity: 0, key: ion.key };
+      entry.molality += m * ion.count;
+      entry.molarity = entry.molality / V;
+      byFormula.set(ion.formula, entry);
+    }
+  });
+  const ions = [...byFormula.values()];
+  const I = ionicStrength(ions);
+  const balance = chargeBalance(ions);
+  const kappa = kappaPerNm(I.molar, state.relativePermittivity, temperatureC);
+
+  const constants = debyeHuckelConstantsFrom(state.relativePermittivity, state.densityGPerMl, temperatureC);
+  const modelIons: ModelIon[] = ions.map(({ formula, charge, molality }) => ({ formula, charge, molality }));
+  const context = { ions: modelIons, ionicStrengthMolal: I.molal, temperatureC, solvent: state.solvent.id };
+  const choice = requested === "auto" ? chooseModel(context) : null;
+  const model = getModel(choice ? choice.id : requested);
+  const modelInput: ActivityModelInput = { ...context, constants, options: input.modelOptions };
+  const output = model.compute(modelInput);
+
+  const ionResults: IonResult[] = ions.map((ion, i) => {
+    const lnGamma = output.lnGamma[i];
+    if (!Number.isFinite(lnGamma)) {
+      throw new ChemInputError(`The ${model.label} model gives no finite activity coefficient for ${ion.formula} in this solution.`, { field: "model", code: "model_failed" });
+    }
+    const gamma = Math.exp(lnGamma);
+    return {
+      formula: ion.formula, name: ionByKey(ion.key)?.name, charge: ion.charge, molality: ion.molality, molarity: ion.molarity,
+      gamma, activity: gamma * ion.molality, lnGamma, log10Gamma: lnGamma / Math.LN10,
+    };
+  });
+  const lnGammaByFormula = new Map(ionResults.map((r) => [r.formula, r.lnGamma]));
+  const salts = meanSaltResults(species, amounts.components, lnGammaByFormula);
+
+  const totalMolality = neutralMolality + ions.reduce((sum, ion) => sum + ion.molality, 0);
+  const phi = output.osmoticCoefficient ?? osmoticCoefficientByGibbsDuhem(model, modelInput, output.lnGamma, neutralMolality);
+  const aw = state.solvent.id === "water" ? output.waterActivity ?? waterActivityFromOsmotic(phi, totalMolality) : undefined;
+
+  const messages = [...output.validityMessages];
+  if (choice && !choice.covered) messages.unshift(`No model covers this composition: ${choice.reason}.`);
+  const warnings = [...species.flatMap((s) => s.warnings), ...amounts.warnings, ...state.notes];
+  if (balance.warning) warnings.push(balance.warning);
+  const notes = [...new Set([...species.flatMap((s) => s.notes), ...output.notes])];
+
+  return {
+    temperatureC,
+    solvent: { id: state.solvent.id, name: state.solvent.name, relativePermittivity: state.relativePermittivity, densityGPerMl: state.densityGPerMl },
+    ionicStrength: I,
+    debyeLengthNm: kappa > 0 ? 1 / kappa : null,
+    kappaPerNm: kappa,
+    ions: ionResults,
+    salts,
+    components: species.map((s, i) => ({
+      formula: s.formula, name: s.name, kind: s.kind, molarMassGPerMol: s.molarMassGPerMol, hydrateWater: s.hydrateWater,
+      molality: amounts.components[i].molality, molarity: amounts.components[i].molarity,
+      ions: s.ions.map((ion) => ({ formula: ion.formula, count: ion.count })),
+    })),
+    ...(Number.isFinite(phi) ? { osmoticCoefficient: phi } : {}),
+    ...(aw !== undefined && Number.isFinite(aw) ? { waterActivity: aw } : {}),
+    chargeExcessEqPerKg: balance.excessEqPerKg,
+    constants,
+    model: {
+      requested, used: model.id, label: model.label,
+      reason: choice ? choice.reason : `${model.label} was requested`,
+    },
+    formulaTex: model.substitutedTex ? model.substitutedTex(modelInput) : model.formulaTex,
+    formulaTexGeneral: model.formulaTex,
+    validity: { ok: messages.length === 0, messages },
+    warnings,
+    notes,
+    hazards: solutionHazards(species, state.solvent.id),
+  };
+}

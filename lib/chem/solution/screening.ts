@@ -1,0 +1,51 @@
+/**
+ * Ionic strength on both scales, charge balance, and Debye screening:
+ *   I = ½ Σ mi zi²  (mol/kg),  I_c = ½ Σ ci zi²  (mol/L)
+ *   κ² = 2 N_A e² I_c / (ε0 εr k T)   with I_c in mol/m³;  Debye length λ_D = 1/κ
+ * (the general expression for any solvent; CODATA 2018 constants).
+ */
+import { AVOGADRO_PER_MOL, BOLTZMANN_J_PER_K, ELEMENTARY_CHARGE_C, VACUUM_PERMITTIVITY_F_PER_M, kelvin } from "../constants";
+
+export interface IonAmount {
+  formula: string;
+  charge: number;
+  molality: number;
+  molarity: number;
+}
+
+export function ionicStrength(ions: readonly IonAmount[]): { molal: number; molar: number } {
+  let molal = 0;
+  let molar = 0;
+  for (const ion of ions) {
+    const z2 = ion.charge * ion.charge;
+    molal += ion.molality * z2;
+    molar += ion.molarity * z2;
+  }
+  return { molal: molal / 2, molar: molar / 2 };
+}
+
+/** κ in nm⁻¹ from the molar ionic strength. */
+export function kappaPerNm(ionicStrengthMolar: number, relativePermittivity: number, temperatureC: number): number {
+  const molPerM3 = ionicStrengthMolar * 1000;
+  const kappaPerM = Math.sqrt(
+    (2 * AVOGADRO_PER_MOL * ELEMENTARY_CHARGE_C ** 2 * molPerM3) /
+      (VACUUM_PERMITTIVITY_F_PER_M * relativePermittivity * BOLTZMANN_J_PER_K * kelvin(temperatureC)),
+  );
+  return kappaPerM * 1e-9;
+}
+
+/** Charge excess in equivalents per kg (Σ mi zi) and a warning when it is not ~0. */
+export function chargeBalance(ions: readonly IonAmount[]): { excessEqPerKg: number; warning?: string } {
+  let sum = 0;
+  let scale = 0;
+  for (const ion of ions) {
+    sum += ion.molality * ion.charge;
+    scale += ion.molality * Math.abs(ion.charge);
+  }
+  if (scale === 0 || Math.abs(sum) <= 1e-9 * scale) return { excessEqPerKg: 0 };
+  const sign = sum > 0 ? "positive" : "negative";
+  return {
+    excessEqPerKg: sum,
+    warning: `The ions do not balance: ${Math.abs(sum).toPrecision(3)} mol/kg of excess ${sign} charge (${((100 * Math.abs(sum)) / scale).toPrecision(2)} % of all charge). Add the counter-ions, or check the formulas.`,
+  };
+}
