@@ -1,0 +1,60 @@
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import type { BrowserContext } from "playwright-core";
+import { DEMO_LABS, DEMO_PASSWORD } from "@/lib/demo/scenario";
+import { BASE_URL, openBrowser, screenshot, signIn } from "./support/browser";
+
+const lab = DEMO_LABS[0];
+const byRole = (role: string) => lab.members.find((m) => m.role === role)!;
+
+const EXPECTED_NAV: Record<string, string[]> = {
+  researcher: ["Bench", "Entries", "Solution finder"],
+  supervisor: ["Bench", "Entries", "Solution finder", "Review queue"],
+  admin: ["Bench", "Entries", "Solution finder", "Lab settings"],
+};
+
+describe("signing in as each demo role", () => {
+  let context: BrowserContext;
+  let close: () => Promise<void>;
+
+  beforeAll(async () => {
+    ({ context, close } = await openBrowser());
+  });
+  afterAll(async () => {
+    await close();
+  });
+
+  it("sends a visitor without a session to sign-in", async () => {
+    const page = await context.newPage();
+    await page.goto(`${BASE_URL}/lab`);
+    await page.waitForURL(/\/sign-in/);
+    expect(await page.getByRole("heading", { name: "Sign in to your lab" }).isVisible()).toBe(true);
+    await page.close();
+  });
+
+  it("refuses a wrong password without saying whether the address exists", async () => {
+    const page = await context.newPage();
+    await signIn(page, byRole("researcher").email, "not-the-password-1");
+    // (Next.js's route announcer is also role=alert, so the form's message is found by its text.)
+    const message = "That e-mail and password do not match an active account.";
+    await page.getByRole("alert").filter({ hasText: message }).waitFor();
+    await signIn(page, "nobody@saltmarsh.example", "not-the-password-1");
+    await page.getByRole("alert").filter({ hasText: message }).waitFor();
+    expect(await page.getByTestId("current-user").count()).toBe(0);
+    await page.close();
+  });
+
+  for (const role of ["researcher", "supervisor", "admin"] as const) {
+    it(`shows a ${role} the ${role}'s navigation`, async () => {
+      const page = await context.newPage();
+      await context.clearCookies();
+      const member = byRole(role);
+      await signIn(page, member.email, DEMO_PASSWORD);
+      await page.getByTestId("current-role").waitFor();
+      expect(await page.getByTestId("current-role").textContent()).toBe(role);
+      const links = await page.getByRole("navigation", { name: "Main" }).getByRole("link").allTextContents();
+      expect(links.map((l) => l.replace(/\d+$/, "").trim())).toEqual(EXPECTED_NAV[role]);
+      await screenshot(page, `bench-${role}`);
+      await page.close();
+    });
+  }
+});

@@ -1,0 +1,36 @@
+import { mkdtempSync, rmSync } from "node:fs";
+import { tmpdir } from "node:os";
+import path from "node:path";
+import { chromium, type BrowserContext, type Page } from "playwright-core";
+
+export const BASE_URL = process.env.E2E_BASE_URL ?? "http://localhost:3000";
+
+/** Debian's Chromium, headless, with the flags this closed network needs. */
+export async function openBrowser(): Promise<{ context: BrowserContext; close: () => Promise<void> }> {
+  const profile = mkdtempSync(path.join(tmpdir(), "ionleaf-e2e-"));
+  const context = await chromium.launchPersistentContext(profile, {
+    executablePath: process.env.CHROMIUM_PATH ?? "/usr/bin/chromium",
+    headless: true,
+    viewport: { width: 1360, height: 900 },
+    args: ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"],
+  });
+  return {
+    context,
+    close: async () => {
+      await context.close();
+      rmSync(profile, { recursive: true, force: true });
+    },
+  };
+}
+
+export async function signIn(page: Page, email: string, password: string): Promise<void> {
+  await page.goto(`${BASE_URL}/sign-in`);
+  await page.getByLabel("E-mail").fill(email);
+  await page.getByLabel("Password").fill(password);
+  await page.getByRole("button", { name: "Sign in" }).click();
+}
+
+export async function screenshot(page: Page, name: string): Promise<void> {
+  const dir = process.env.E2E_SCREENSHOT_DIR;
+  if (dir) await page.screenshot({ path: path.join(dir, `${name}.png`), fullPage: true });
+}
