@@ -16,3 +16,7 @@ export type { ActivityModelSummary, RequestedModel } from "./models/registry";
 export { chooseModel, AUTO_CANDIDATES } from "./models/auto";
 export type { AutoCandidate, AutoContext, AutoChoice } from "./models/auto";
 export type { ActivityModel, ActivityModelInput, ActivityModelOutput, ActivityModelOptions, ModelIon } from "./models/types";
+export { nernstPotential, nernstPotentialDetailed, nernstSlopeV, listCouples } from "./electrochem/nernst";
+export type { NernstInput, NernstResult } from "./electrochem/nernst";
+export { convertPotential, convertPotentialDetailed, listReferenceElectrodes, referencePotentialVsShe } from "./electrochem/reference-electrodes";
+export type { ReferenceElectrodeId, PotentialOptions } from "./electrochem/reference-electrodes";
