@@ -2,7 +2,7 @@
 
 import "katex/dist/katex.min.css";
 import "./notebook-editor.css";
-import type { JSONContent } from "@tiptap/core";
+import type { Editor, JSONContent } from "@tiptap/core";
 import { EditorContent, useEditor } from "@tiptap/react";
 import { useEffect, useMemo, useRef, useState } from "react";
 import { cx } from "@/lib/ui/class-names";
@@ -21,6 +21,8 @@ export interface NotebookEditorProps {
   /** Accessible name of the editing area, e.g. the entry title. */
   ariaLabel?: string;
   className?: string;
+  /** Receives the tiptap editor once it exists (focus, tests); most pages do not need it. */
+  onEditorReady?: (editor: Editor) => void;
 }
 
 /**
@@ -28,7 +30,7 @@ export interface NotebookEditorProps {
  * live solution and cell blocks. It owns no saving: the page passes the saved document in
  * and receives every change through `onChange`.
  */
-export function NotebookEditor({ initialContent, editable = true, onChange, placeholder, ariaLabel = "Entry text", className }: NotebookEditorProps) {
+export function NotebookEditor({ initialContent, editable = true, onChange, placeholder, ariaLabel = "Entry text", className, onEditorReady }: NotebookEditorProps) {
   const [prompt, setPrompt] = useState<ToolbarPrompt | null>(null);
   const onChangeRef = useRef(onChange);
   onChangeRef.current = onChange;
@@ -62,6 +64,11 @@ export function NotebookEditor({ initialContent, editable = true, onChange, plac
     },
     onUpdate: ({ editor: e }) => onChangeRef.current?.(e.getJSON()),
   });
+
+  useEffect(() => {
+    if (editor) onEditorReady?.(editor);
+    // Once per editor instance; a new callback identity must not re-announce it.
+  }, [editor]);
 
   useEffect(() => {
     if (editor && editor.isEditable !== editable) editor.setEditable(editable, false);

@@ -4,6 +4,7 @@ import { defaultCellBlockInput } from "@/lib/entries/block-defaults";
 import { newBlockId } from "@/lib/entries/block-id";
 import { cellBlockInputSchema, type CellBlockInput } from "@/lib/entries/block-schemas";
 import { blockAttributes } from "../block-node-html";
+import { insertBlockContent } from "../insert-block";
 import { CellBlockView } from "./cell-block-view";
 
 declare module "@tiptap/core" {
@@ -39,13 +40,13 @@ export const CellBlock = Node.create({
     return {
       insertCellBlock:
         (input = {}) =>
-        ({ commands, state }) => {
+        (props) => {
           let lastSolution: string | null = null;
-          state.doc.descendants((node) => {
+          props.state.doc.descendants((node) => {
             if (node.type.name === "solutionBlock") lastSolution = node.attrs.blockId as string;
             return node.isBlock;
           });
-          return commands.insertContent({
+          return insertBlockContent(props, {
             type: this.name,
             attrs: defaultCellBlockInput({ electrolyteBlockId: lastSolution, ...input, blockId: newBlockId() }),
           });

@@ -4,6 +4,7 @@ import { defaultSolutionBlockInput } from "@/lib/entries/block-defaults";
 import { newBlockId } from "@/lib/entries/block-id";
 import { solutionBlockInputSchema, type SolutionBlockInput } from "@/lib/entries/block-schemas";
 import { blockAttributes } from "../block-node-html";
+import { insertBlockContent } from "../insert-block";
 import { SolutionBlockView } from "./solution-block-view";
 
 declare module "@tiptap/core" {
@@ -43,8 +44,8 @@ export const SolutionBlock = Node.create({
     return {
       insertSolutionBlock:
         (input = {}) =>
-        ({ commands }) =>
-          commands.insertContent({ type: this.name, attrs: defaultSolutionBlockInput({ ...input, blockId: newBlockId() }) }),
+        (props) =>
+          insertBlockContent(props, { type: this.name, attrs: defaultSolutionBlockInput({ ...input, blockId: newBlockId() }) }),
     };
   },
 

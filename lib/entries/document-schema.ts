@@ -38,11 +38,13 @@ const NODE_ATTRS = {
     colspan: z.number().int().min(1).max(100).optional(),
     rowspan: z.number().int().min(1).max(1000).optional(),
     colwidth: z.array(z.number().int().min(0).max(10000)).max(100).nullable().optional(),
+    align: z.enum(["left", "center", "right"]).nullable().optional(),
   }),
   tableHeader: z.strictObject({
     colspan: z.number().int().min(1).max(100).optional(),
     rowspan: z.number().int().min(1).max(1000).optional(),
     colwidth: z.array(z.number().int().min(0).max(10000)).max(100).nullable().optional(),
+    align: z.enum(["left", "center", "right"]).nullable().optional(),
   }),
   inlineMath: z.strictObject({ latex: z.string().max(LIMITS.maxLatex) }),
   blockMath: z.strictObject({ latex: z.string().max(LIMITS.maxLatex) }),
@@ -64,6 +66,7 @@ const MARK_ATTRS = {
     target: z.enum(["_blank", "_self"]).nullable().optional(),
     rel: z.string().max(100).nullable().optional(),
     class: z.string().max(100).nullable().optional(),
+    title: z.string().max(300).nullable().optional(),
   }),
 } as const;
 

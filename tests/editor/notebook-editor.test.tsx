@@ -1,0 +1,124 @@
+import { act, cleanup, render, screen, waitFor } from "@testing-library/react";
+import userEvent from "@testing-library/user-event";
+import type { Editor, JSONContent } from "@tiptap/core";
+import { afterEach, describe, expect, it, vi } from "vitest";
+import { NotebookEditor } from "@/editor/notebook-editor";
+import { sanitizePastedHtml } from "@/editor/paste-sanitizer";
+import { describeDocumentErrors, entryDocumentSchema } from "@/lib/entries/document-schema";
+
+afterEach(cleanup);
+
+// jsdom has no ClipboardEvent; the paste logic only passes the event on to paste hooks.
+const pasteEvent = () => new Event("paste") as ClipboardEvent;
+
+async function mountEditor(props: Partial<Parameters<typeof NotebookEditor>[0]> = {}) {
+  let editor: Editor | undefined;
+  const onChange = vi.fn<(doc: JSONContent) => void>();
+  render(<NotebookEditor onChange={onChange} onEditorReady={(e) => (editor = e)} {...props} />);
+  await waitFor(() => expect(editor).toBeDefined());
+  return { editor: editor as Editor, onChange };
+}
+
+function marksIn(doc: JSONContent): { type: string; attrs?: Record<string, unknown> }[] {
+  return [...(doc.marks ?? []), ...(doc.content ?? []).flatMap(marksIn)] as { type: string; attrs?: Record<string, unknown> }[];
+}
+function typesIn(doc: JSONContent): string[] {
+  return [doc.type ?? "", ...(doc.content ?? []).flatMap(typesIn)];
+}
+
+describe("NotebookEditor", () => {
+  it("shows the initial content and the toolbar", async () => {
+    await mountEditor({
+      initialContent: { type: "doc", content: [{ type: "heading", attrs: { level: 1 }, content: [{ type: "text", text: "Cyclic voltammetry, day 3" }] }] },
+    });
+    expect(await screen.findByText("Cyclic voltammetry, day 3")).toBeInTheDocument();
+    expect(screen.getByRole("toolbar", { name: "Entry formatting" })).toBeInTheDocument();
+  });
+
+  it("inserts a solution block from the toolbar and reports a document the server schema accepts", async () => {
+    const user = userEvent.setup();
+    const { onChange } = await mountEditor();
+    await user.click(screen.getByRole("button", { name: "Insert solution block" }));
+    await waitFor(() => expect(onChange).toHaveBeenCalled());
+    const doc = onChange.mock.lastCall![0];
+    const block = doc.content!.find((node) => node.type === "solutionBlock");
+    expect(block?.attrs?.blockId).toMatch(/^[0-9a-f-]{36}$/);
+    expect(entryDocumentSchema.safeParse(doc).success).toBe(true);
+  });
+
+  it("writes every kind of content in a form the server schema accepts", async () => {
+    const { editor } = await mountEditor();
+    act(() => {
+      editor
+        .chain()
+        .setContent("<h2>Setup</h2><p>text <strong>b</strong> <em>i</em> <s>s</s> <u>u</u> <code>c</code></p>")
+        .focus("end")
+        .insertContent("<blockquote><p>quoted</p></blockquote><ol start=\"3\"><li><p>three</p></li></ol><ul><li><p>dot</p></li></ul><pre><code class=\"language-python\">print(1)</code></pre><hr>")
+        .run();
+      editor.chain().focus("end").insertTable({ rows: 2, cols: 2, withHeaderRow: true }).run();
+      editor.chain().focus("end").insertContent("<p>task</p>").toggleTaskList().run();
+      editor.chain().focus("end").insertInlineMath({ latex: "E^\\circ" }).insertBlockMath({ latex: "I=\\tfrac12\\sum m_i z_i^2" }).run();
+      // Two in one chain: the second must land after the first, not replace the selected block.
+      editor.chain().focus("end").insertSolutionBlock().insertCellBlock().run();
+    });
+    const doc = editor.getJSON();
+    for (const type of ["heading", "blockquote", "orderedList", "codeBlock", "horizontalRule", "table", "tableHeader", "taskItem", "inlineMath", "blockMath", "cellBlock", "solutionBlock"]) {
+      expect(typesIn(doc)).toContain(type);
+    }
+    // A new cell block links to the entry's last solution block.
+    const solution = doc.content!.find((n) => n.type === "solutionBlock")!;
+    const cell = doc.content!.find((n) => n.type === "cellBlock")!;
+    expect(cell.attrs!.electrolyteBlockId).toBe(solution.attrs!.blockId);
+    const parsed = entryDocumentSchema.safeParse(doc);
+    expect(parsed.success ? [] : describeDocumentErrors(parsed.error)).toEqual([]);
+  });
+
+  it("hides the toolbar when read-only", async () => {
+    await mountEditor({ editable: false });
+    expect(screen.queryByRole("toolbar")).not.toBeInTheDocument();
+  });
+
+  it("drops scripts, handlers and javascript: links from pasted HTML", async () => {
+    const { editor } = await mountEditor();
+    act(() => {
+      editor.view.pasteHTML(
+        '<p>safe <a href="javascript:alert(1)">bad</a> <a href="https://example.org/sds">good</a><img src=x onerror="alert(2)"></p><script>alert(3)</script><iframe src="https://x"></iframe>',
+        pasteEvent(),
+      );
+    });
+    const doc = editor.getJSON();
+    const hrefs = marksIn(doc).filter((m) => m.type === "link").map((m) => m.attrs?.href);
+    expect(hrefs).toEqual(["https://example.org/sds"]);
+    expect(JSON.stringify(doc)).not.toMatch(/alert/);
+    expect(typesIn(doc)).not.toContain("image");
+    const parsed = entryDocumentSchema.safeParse(doc);
+    expect(parsed.success ? [] : describeDocumentErrors(parsed.error)).toEqual([]);
+  });
+
+  it("gives a pasted copy of a solution block its own id", async () => {
+    const { editor } = await mountEditor();
+    act(() => {
+      editor.commands.insertSolutionBlock({ name: "Stock" });
+    });
+    const original = editor.getJSON().content!.find((n) => n.type === "solutionBlock")!;
+    act(() => {
+      editor.commands.insertContentAt(editor.state.doc.content.size, original);
+    });
+    const ids = editor.getJSON().content!.filter((n) => n.type === "solutionBlock").map((n) => n.attrs!.blockId);
+    expect(ids).toHaveLength(2);
+    expect(new Set(ids).size).toBe(2);
+    expect(ids).toContain(original.attrs!.blockId);
+  });
+});
+
+describe("sanitizePastedHtml", () => {
+  it("keeps tables, lists and math markup but strips styles and event handlers", () => {
+    const html = sanitizePastedHtml(
+      '<table style="color:red"><tr><td onclick="x()">1</td></tr></table><ul data-type="taskList"><li data-checked="true">a</li></ul><span data-type="inline-math" data-latex="x^2"></span>',
+    );
+    expect(html).toContain("<td>1</td>");
+    expect(html).toContain('data-checked="true"');
+    expect(html).toContain('data-latex="x^2"');
+    expect(html).not.toMatch(/onclick|style=/);
+  });
+});
