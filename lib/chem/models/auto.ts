@@ -7,6 +7,8 @@
 import { DH_LIMITING_SQRT_I_MAX_1_1 } from "./dh-limiting";
 import { chargeProductMagnitude } from "./dh-common";
 import { bDotIonSize, kiellandIonSize, truesdellJonesParameters } from "./ion-parameters";
+import { PITZER_AUTO_CANDIDATE } from "./pitzer/auto-candidate";
+import { SIT_AUTO_CANDIDATE } from "./sit/auto-candidate";
 import type { ActivityModelId, ModelIon } from "./types";
 
 export interface AutoContext {
@@ -60,7 +62,7 @@ export const DH_FAMILY_CANDIDATES: readonly AutoCandidate[] = [
 ];
 
 /** Part 2: insert the Pitzer and SIT candidates before the Debye–Hückel family. */
-export const AUTO_CANDIDATES: AutoCandidate[] = [...DH_FAMILY_CANDIDATES];
+export const AUTO_CANDIDATES: AutoCandidate[] = [PITZER_AUTO_CANDIDATE, SIT_AUTO_CANDIDATE, ...DH_FAMILY_CANDIDATES];
 
 export interface AutoChoice {
   id: ActivityModelId;

@@ -7,6 +7,8 @@ import { daviesModel } from "./davies";
 import { dhExtendedModel } from "./dh-extended";
 import { dhLimitingModel } from "./dh-limiting";
 import { guntelbergModel } from "./guntelberg";
+import { pitzerModel } from "./pitzer";
+import { sitModel } from "./sit";
 import { truesdellJonesModel } from "./truesdell-jones";
 import type { ActivityModel, ActivityModelId } from "./types";
 
@@ -16,8 +18,8 @@ export const MODEL_REGISTRY: Partial<Record<ActivityModelId, ActivityModel>> = {
   guntelberg: guntelbergModel,
   davies: daviesModel,
   "truesdell-jones": truesdellJonesModel,
-  // pitzer: pitzerModel,  (part 2)
-  // sit: sitModel,        (part 2)
+  pitzer: pitzerModel,
+  sit: sitModel,
 };
 
 const PLANNED: Record<string, string> = { pitzer: "Pitzer", sit: "SIT (specific ion interaction theory)" };

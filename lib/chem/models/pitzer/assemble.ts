@@ -80,11 +80,11 @@ export function assemblePitzerSystem(
       }
       if (!present) return null;
       usedSources.add(row.source.split(",")[0]);
-      const maxI = saltIonicStrength(c.charge, a.charge, row.maxMolality);
+      const maxI = row.maxIonicStrengthMolal ?? saltIonicStrength(c.charge, a.charge, row.maxMolality);
       if (ionicStrengthMolal > maxI * (1 + 1e-9)) {
         validityMessages.push(
           `I = ${fmt(ionicStrengthMolal)} mol/kg is beyond the fitted range of the ${row.salt} parameters ` +
-            `(${row.salt} to ${fmt(row.maxMolality, 4)} mol/kg, I ≤ ${fmt(maxI)}; ${row.source}).`,
+            `(${row.maxIonicStrengthMolal ? "in mixtures" : `${row.salt} to ${fmt(row.maxMolality, 4)} mol/kg,`} I ≤ ${fmt(maxI)}; ${row.source}).`,
         );
       }
       const terms: PitzerBinaryTerms = { ...row };

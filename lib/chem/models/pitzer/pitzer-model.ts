@@ -84,4 +84,6 @@ export const pitzerModel: ActivityModel = {
   label: "Pitzer ion interaction",
   formulaTex: PITZER_FORMULA_TEX,
   compute: computePitzer,
+  validityNote:
+    "Aqueous solutions up to each salt's fitted molality (typically 2–6 mol/kg; May et al. 2011), at 25 °C or 10–40 °C where temperature derivatives are published (Silvester & Pitzer 1978; Pitzer 1991).",
 };

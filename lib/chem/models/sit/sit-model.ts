@@ -108,6 +108,8 @@ export const sitModel: ActivityModel = {
   label: "Specific ion interaction theory (SIT)",
   formulaTex: String.raw`\log_{10}\gamma_j = -z_j^2\,\frac{A\sqrt{I}}{1+1.5\sqrt{I}} + \sum_k \varepsilon(j,k)\,m_k`,
   compute: computeSit,
+  validityNote: "Aqueous solutions with I ≤ 3.5 mol/kg near 25 °C, for ion pairs with an NEA-TDB ε (Grenthe et al. 1992; Guillaumont et al. 2003).",
+  maxIonicStrengthMolal: SIT_MAX_IONIC_STRENGTH_MOLAL,
 };
 
 /** Whether SIT covers a composition, for the "auto" model choice. */

@@ -15,6 +15,12 @@ export interface PitzerBinaryRow {
   /** Where `maxMolality` comes from ("source" = stated in the publication). */
   maxMolalityBasis: string;
   source: string;
+  /**
+   * For parameters fitted in mixtures (sparingly soluble salts of HMW84), the ionic strength
+   * up to which they hold in a mixture; when absent, the ionic strength of the pure salt at
+   * `maxMolality` is the limit.
+   */
+  maxIonicStrengthMolal?: number;
 }
 
 export interface PitzerTemperatureRow {
