@@ -20,6 +20,8 @@ export default defineConfig({
     setupFiles: ["./tests/setup.ts"],
     // Integration tests share one database: run files one at a time, tests in order.
     fileParallelism: false,
+    // next-auth imports "next/server" without an extension; let Vite resolve it.
+    server: { deps: { inline: ["next-auth"] } },
     testTimeout: 20000,
     hookTimeout: 60000,
   },

@@ -1,0 +1,75 @@
+// @vitest-environment node
+import { eq } from "drizzle-orm";
+import { describe, expect, it } from "vitest";
+import { invitations } from "@/db/schema";
+import { verifyCredentials } from "@/lib/auth/verify-credentials";
+import { AppError } from "@/lib/errors";
+import { acceptInvitation, inspectInvitation, inviteMember } from "@/lib/labs/invitations";
+import { hashLinkToken } from "@/lib/labs/tokens";
+import { getDb } from "@/lib/server/database";
+import { caughtMessagesTo, createLabWithMembers } from "../support/db";
+
+const tokenOf = (link: string) => new URL(link).pathname.split("/").pop()!;
+
+describe("invitations", () => {
+  it("mails a link through the mail catcher; accepting it creates the member in the invited role", async () => {
+    const { members, lab, tag } = await createLabWithMembers(["admin"]);
+    const email = `newcomer.${tag}@lab.example`;
+    const { link } = await inviteMember(members.admin, { email, role: "supervisor" });
+
+    const mails = await caughtMessagesTo(email);
+    expect(mails).toHaveLength(1);
+    expect(mails[0].text).toContain(link);
+    expect(mails[0].subject).toContain(lab.name);
+
+    const token = tokenOf(link);
+    expect(await inspectInvitation(token)).toMatchObject({ kind: "open", email, role: "supervisor" });
+    await acceptInvitation({ token, name: "Newcomer Test", password: "glassy-carbon-3", confirmPassword: "glassy-carbon-3" });
+    const signedIn = await verifyCredentials(getDb(), { email, password: "glassy-carbon-3" });
+    expect(signedIn.kind).toBe("ok");
+    if (signedIn.kind === "ok") {
+      expect(signedIn.user.role).toBe("supervisor");
+      expect(signedIn.user.labId).toBe(lab.id);
+    }
+  });
+
+  it("refuses a reused link and says why", async () => {
+    const { members, tag } = await createLabWithMembers(["admin"]);
+    const { link } = await inviteMember(members.admin, { email: `twice.${tag}@lab.example`, role: "researcher" });
+    const input = { token: tokenOf(link), name: "Twice Test", password: "glassy-carbon-3", confirmPassword: "glassy-carbon-3" };
+    await acceptInvitation(input);
+    const error = await acceptInvitation(input).catch((e: unknown) => e);
+    expect(error).toBeInstanceOf(AppError);
+    expect((error as AppError).code).toBe("gone");
+    expect((error as AppError).message).toMatch(/already been used/);
+    expect(await inspectInvitation(input.token)).toEqual({ kind: "used" });
+  });
+
+  it("refuses an expired link and an unknown one", async () => {
+    const { members, tag } = await createLabWithMembers(["admin"]);
+    const { link } = await inviteMember(members.admin, { email: `late.${tag}@lab.example`, role: "researcher" });
+    const token = tokenOf(link);
+    await getDb().update(invitations).set({ expiresAt: new Date(Date.now() - 1000) }).where(eq(invitations.tokenHash, hashLinkToken(token)));
+    expect(await inspectInvitation(token)).toEqual({ kind: "expired" });
+    const error = await acceptInvitation({ token, name: "Late Test", password: "glassy-carbon-3", confirmPassword: "glassy-carbon-3" }).catch((e: unknown) => e);
+    expect((error as AppError).code).toBe("gone");
+    expect(await inspectInvitation("x".repeat(43))).toEqual({ kind: "unknown" });
+  });
+
+  it("only admins invite, and an address with an account cannot be invited again", async () => {
+    const { members } = await createLabWithMembers(["admin", "researcher"]);
+    const forbidden = await inviteMember(members.researcher, { email: "someone@lab.example", role: "admin" }).catch((e: unknown) => e);
+    expect((forbidden as AppError).code).toBe("forbidden");
+    const taken = await inviteMember(members.admin, { email: members.researcher.email, role: "researcher" }).catch((e: unknown) => e);
+    expect((taken as AppError).code).toBe("conflict");
+    expect((taken as AppError).fieldErrors?.email).toBeDefined();
+  });
+
+  it("stores only a hash of the link's token", async () => {
+    const { members, tag } = await createLabWithMembers(["admin"]);
+    const { link, invitationId } = await inviteMember(members.admin, { email: `hash.${tag}@lab.example`, role: "researcher" });
+    const [row] = await getDb().select().from(invitations).where(eq(invitations.id, invitationId));
+    expect(row.tokenHash).toBe(hashLinkToken(tokenOf(link)));
+    expect(row.tokenHash).not.toContain(tokenOf(link));
+  });
+});
