@@ -53,8 +53,16 @@ export function CellPotential({ cell, electrolyte, editable, onChange }: CellPot
             </dd>
           </div>
           <p className="col-span-2 self-center text-xs text-ink-soft sm:col-span-1">
-            Nernst equation at {potential.temperatureC} °C with the activities computed for the linked solution.
+            {potential.reaction}, E° = {formatPotentialV(potential.standardPotentialV)} V vs SHE. Nernst equation at{" "}
+            {potential.temperatureC} °C with the activities computed for the linked solution.
           </p>
+          {potential.notes.length > 0 ? (
+            <ul className="col-span-full list-disc pl-4 text-xs text-ink-soft">
+              {potential.notes.map((note) => (
+                <li key={note}>{note}</li>
+              ))}
+            </ul>
+          ) : null}
         </dl>
       ) : potential.status === "error" && potential.field !== "couple" && potential.field !== "pH" ? (
         <p role="alert" className="rounded-md border border-red-300 bg-red-50 px-3 py-2 text-sm text-red-900">{potential.message}</p>

@@ -1,11 +1,20 @@
-import { convertPotential, isChemInputError, nernstPotential } from "@/lib/chem";
+import { convertPotentialDetailed, isChemInputError, nernstPotentialDetailed } from "@/lib/chem";
 import type { CellBlockInput, SolutionBlockInput } from "@/lib/entries/block-schemas";
 import { evaluateSolutionBlockCached } from "../solution-block/evaluate-solution-block";
 
 export type CellPotentialResult =
   | { status: "idle"; message: string }
   | { status: "error"; field?: string; message: string }
-  | { status: "ok"; vsShe: number; vsReference: number; reference: string; temperatureC: number; activities: Record<string, number> };
+  | {
+      status: "ok";
+      vsShe: number;
+      vsReference: number;
+      reference: string;
+      temperatureC: number;
+      reaction: string;
+      standardPotentialV: number;
+      notes: string[];
+    };
 
 /**
  * Equilibrium potential of the chosen couple at the linked electrolyte's computed activities
@@ -24,11 +33,20 @@ export function computeCellPotential(cell: CellBlockInput, electrolyte: Solution
   const activities: Record<string, number> = {};
   for (const ion of evaluation.result.ions) activities[ion.formula] = ion.activity;
   try {
-    const vsShe = nernstPotential({ couple: cell.couple, activities, temperatureC });
+    const pH = cell.pH === null ? {} : { pH: cell.pH };
+    const nernst = nernstPotentialDetailed({ couple: cell.couple, activities, temperatureC, ...pH });
     const reference = cell.referenceElectrode.type;
-    const options = cell.pH === null ? { temperatureC } : { temperatureC, pH: cell.pH };
-    const vsReference = convertPotential(vsShe, "SHE", reference, options);
-    return { status: "ok", vsShe, vsReference, reference, temperatureC, activities };
+    const converted = convertPotentialDetailed(nernst.potentialV, "SHE", reference, { temperatureC, ...pH });
+    return {
+      status: "ok",
+      vsShe: nernst.potentialV,
+      vsReference: converted.potentialV,
+      reference,
+      temperatureC,
+      reaction: nernst.reaction,
+      standardPotentialV: nernst.standardPotentialV,
+      notes: [...nernst.notes, ...converted.notes],
+    };
   } catch (error) {
     if (!isChemInputError(error)) throw error;
     return { status: "error", field: error.field, message: error.message };

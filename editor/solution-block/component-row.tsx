@@ -16,6 +16,8 @@ const UNIT_LABELS: Record<string, string> = {
   "µmol/L": "µmol/L",
   g: "g (weighed)",
   mg: "mg (weighed)",
+  "g/L": "g/L solution",
+  "wt%": "wt% (mass percent)",
   "mass fraction": "mass fraction",
 };
 const UNIT_OPTIONS = AMOUNT_UNITS.map((unit) => ({ value: unit, label: UNIT_LABELS[unit] ?? unit }));

@@ -23,9 +23,13 @@ export function ComponentsTable({ components, errors, editable, onChange }: Comp
   const speciesInputs = useRef<(HTMLInputElement | null)[]>([]);
   const [focusRow, setFocusRow] = useState<number | null>(null);
 
+  // The new row arrives through the editor (updateAttributes), a render or two after the
+  // key press: wait until its input exists before moving focus.
   useEffect(() => {
     if (focusRow === null) return;
-    speciesInputs.current[focusRow]?.focus();
+    const target = speciesInputs.current[focusRow];
+    if (!target || focusRow >= components.length) return;
+    target.focus();
     setFocusRow(null);
   }, [focusRow, components.length]);
 

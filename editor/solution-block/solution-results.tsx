@@ -3,7 +3,7 @@
 import { lazy, Suspense, useState } from "react";
 import { actionButtonClass } from "../ui/field-styles";
 import { SafetyCaution } from "../ui/safety-caution";
-import { hazardNotesFor, modelLabel } from "../chem-catalogue";
+import { hazardNotesFor } from "../chem-catalogue";
 import type { SolutionEvaluation } from "./evaluate-solution-block";
 import { FormulaApplied } from "./formula-applied";
 import { IonTable, SaltList } from "./ion-table";
@@ -38,14 +38,14 @@ export function SolutionResults({ evaluation, formulas }: SolutionResultsProps) 
         <>
           <ResultsSummary result={evaluation.result} />
           <p className="text-xs text-ink-soft">
-            <span className="font-medium text-ink">Model: {modelLabel(evaluation.result.model.used)}</span>
+            <span className="font-medium text-ink">Model: {evaluation.result.model.label}</span>
             {evaluation.result.model.reason ? <> — {evaluation.result.model.reason}</> : null}
           </p>
           <div className="grid gap-4 lg:grid-cols-[2fr_1fr]">
             <IonTable result={evaluation.result} />
             <SaltList result={evaluation.result} />
           </div>
-          <FormulaApplied input={evaluation.input} result={evaluation.result} saltFormula={chartSalt} />
+          <FormulaApplied result={evaluation.result} />
           <MessagesList title="Outside the model's range" tone="validity" messages={evaluation.result.validity.messages} />
           <MessagesList title="Warnings" tone="warning" messages={evaluation.result.warnings} />
           {evaluation.result.salts.length > 0 ? (

@@ -1,8 +1,7 @@
 "use client";
 
 import type { SolutionBlockInput } from "@/lib/entries/block-schemas";
-import { MODEL_CHOICES } from "@/lib/entries/block-schemas";
-import { modelLabel, solventOptions } from "../chem-catalogue";
+import { modelOptions, solventOptions } from "../chem-catalogue";
 import { NumberField } from "../ui/number-field";
 import { SelectField } from "../ui/select-field";
 import type { FieldMessages } from "./field-messages";
@@ -13,8 +12,6 @@ interface SolutionSettingsProps {
   editable: boolean;
   onChange: (patch: Partial<SolutionBlockInput>) => void;
 }
-
-const MODEL_OPTIONS = MODEL_CHOICES.map((id) => ({ value: id, label: id === "auto" ? "Auto (chosen for the composition)" : modelLabel(id) }));
 
 /** Solvent, temperature, optional density and activity model of one solution. */
 export function SolutionSettings({ value, errors, editable, onChange }: SolutionSettingsProps) {
@@ -50,7 +47,7 @@ export function SolutionSettings({ value, errors, editable, onChange }: Solution
       <SelectField
         label="Activity model"
         value={value.model}
-        options={MODEL_OPTIONS}
+        options={modelOptions()}
         disabled={!editable}
         error={errors.get("model")}
         onValueChange={(model) => onChange({ model: model as SolutionBlockInput["model"] })}

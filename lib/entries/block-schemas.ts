@@ -19,6 +19,8 @@ export const AMOUNT_UNITS = [
   "µmol/L",
   "g",
   "mg",
+  "g/L",
+  "wt%",
   "mass fraction",
 ] as const;
 export type AmountUnit = (typeof AMOUNT_UNITS)[number];

@@ -54,7 +54,7 @@ function buildCellPreparation(): EntryDocument {
     purgeGas: "N2",
     purgeMinutes: 15,
     temperatureC: 25,
-    couple: "Fe(CN)6^3-/Fe(CN)6^4-",
+    couple: "Fe(CN)6 3-/4-",
   });
   return {
     type: "doc",
