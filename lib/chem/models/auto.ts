@@ -7,6 +7,7 @@
 import { DH_LIMITING_SQRT_I_MAX_1_1 } from "./dh-limiting";
 import { chargeProductMagnitude } from "./dh-common";
 import { bDotIonSize, kiellandIonSize, truesdellJonesParameters } from "./ion-parameters";
+import { truesdellJonesIon } from "./truesdell-jones";
 import { PITZER_AUTO_CANDIDATE } from "./pitzer/auto-candidate";
 import { SIT_AUTO_CANDIDATE } from "./sit/auto-candidate";
 import type { ActivityModelId, ModelIon } from "./types";
@@ -31,8 +32,8 @@ const sqrtILimit = (c: AutoContext) => DH_LIMITING_SQRT_I_MAX_1_1 / chargeProduc
 export const DH_FAMILY_CANDIDATES: readonly AutoCandidate[] = [
   {
     id: "truesdell-jones",
-    covers: (c) => isWater(c) && c.ionicStrengthMolal <= 2 && present(c).every((i) => truesdellJonesParameters(i.formula))
-      ? "every ion has Truesdell–Jones parameters in WATEQ4F and I ≤ 2 mol/kg" : null,
+    covers: (c) => isWater(c) && c.ionicStrengthMolal <= 2 && present(c).every((i) => truesdellJonesIon(i.formula, i.charge, c.temperatureC).source === "WATEQ4F")
+      ? "every ion has a fitted Truesdell–Jones b (WATEQ4F) and I ≤ 2 mol/kg" : null,
   },
   {
     id: "dh-extended",
@@ -41,9 +42,9 @@ export const DH_FAMILY_CANDIDATES: readonly AutoCandidate[] = [
   },
   {
     id: "truesdell-jones",
-    covers: (c) => isWater(c) && c.ionicStrengthMolal <= 1 &&
+    covers: (c) => isWater(c) && c.ionicStrengthMolal <= 0.5 &&
       present(c).every((i) => truesdellJonesParameters(i.formula) || bDotIonSize(i.formula) !== undefined || kiellandIonSize(i.formula) !== undefined)
-      ? "I ≤ 1 mol/kg and every ion has a tabulated size (b-dot form for ions without fitted b)" : null,
+      ? "I ≤ 0.5 mol/kg and every ion has a tabulated size (b-dot form for ions without a fitted b)" : null,
   },
   {
     id: "dh-limiting",

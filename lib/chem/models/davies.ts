@@ -1,11 +1,11 @@
 /**
  * Davies equation (Davies 1962, Ion Association, Butterworths, p. 41):
  *   log10 γi = −A zi² ( √I / (1 + √I) − c I ),  c = 0.3 (Davies 1962) or 0.2 (Davies 1938)
- * Empirical, fitted to aqueous data. Range: I ≤ 0.5 mol/kg (common practice; errors of a
- * few per cent already at 0.1 mol/kg for some salts).
+ * Empirical, fitted to aqueous data. Range: I ≤ 0.5 mol/kg (common practice); against CRC
+ * γ± the error is a few per cent at 0.1 mol/kg and grows to about 10 % at 0.5 (see tests).
  */
 import type { ActivityModel, ActivityModelInput } from "./types";
-import { ionicStrengthMessage, log10ToLn, substitutedCore, waterOnlyNote } from "./dh-common";
+import { ionAssociationMessage, ionicStrengthMessage, log10ToLn, substitutedCore, waterOnlyNote } from "./dh-common";
 
 const LABEL = "Davies";
 const MAX_I = 0.5;
@@ -18,7 +18,7 @@ export const daviesModel: ActivityModel = {
   id: "davies",
   label: LABEL,
   formulaTex: String.raw`\log_{10}\gamma_i = -A z_i^2 \left(\frac{\sqrt{I}}{1 + \sqrt{I}} - 0.3\,I\right)`,
-  validityNote: "I ≤ 0.5 mol/kg (common practice); empirical, for water. Coefficient 0.3 (Davies 1962) or 0.2.",
+  validityNote: "I ≤ 0.5 mol/kg (common practice; errors grow to about 10 % there); empirical, for water. Coefficient 0.3 (Davies 1962) or 0.2.",
   maxIonicStrengthMolal: MAX_I,
   compute(input: ActivityModelInput) {
     const I = input.ionicStrengthMolal;
@@ -28,7 +28,7 @@ export const daviesModel: ActivityModel = {
     const lnGamma = input.ions.map((ion) => log10ToLn(-A * ion.charge * ion.charge * bracket));
     return {
       lnGamma,
-      validityMessages: ionicStrengthMessage(LABEL, MAX_I, input),
+      validityMessages: [...ionicStrengthMessage(LABEL, MAX_I, input), ...ionAssociationMessage(input)],
       notes: waterOnlyNote(LABEL, "the empirical linear coefficient", input.solvent),
     };
   },

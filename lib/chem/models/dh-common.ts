@@ -46,3 +46,18 @@ export function substitutedCore(input: ActivityModelInput): { A: string; B: stri
     sqrtI: texNumber(Math.sqrt(input.ionicStrengthMolal)),
   };
 }
+
+/**
+ * Ions of charge ≥ 2 with counter-ions associate (NaSO4⁻, KSO4⁻, MgSO4⁰): free-ion models
+ * without speciation then overestimate stoichiometric γ± (CRC K2SO4 and Na2SO4 data are
+ * 5–15 % below the Debye–Hückel family at I = 0.05–0.3 mol/kg; see tests). Above this
+ * ionic strength the result says so.
+ */
+export const ION_ASSOCIATION_ONSET_MOLAL = 0.05;
+
+export function ionAssociationMessage(input: ActivityModelInput): string[] {
+  if (input.ionicStrengthMolal <= ION_ASSOCIATION_ONSET_MOLAL) return [];
+  const multivalentAnions = input.ions.filter((i) => i.charge <= -2 && i.molality > 0).map((i) => i.formula);
+  if (multivalentAnions.length === 0 || !input.ions.some((i) => i.charge > 0 && i.molality > 0)) return [];
+  return [`${multivalentAnions.join(", ")} form ion pairs with cations above I ≈ ${ION_ASSOCIATION_ONSET_MOLAL} mol/kg; without speciation these free-ion activity coefficients overestimate γ±.`];
+}

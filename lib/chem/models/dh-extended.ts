@@ -5,7 +5,7 @@
  * Range: I ≤ 0.1 mol/kg, the range of Kielland's table. The sizes are for water.
  */
 import type { ActivityModel, ActivityModelInput } from "./types";
-import { ionicStrengthMessage, log10ToLn, substitutedCore, waterOnlyNote } from "./dh-common";
+import { ionAssociationMessage, ionicStrengthMessage, log10ToLn, substitutedCore, waterOnlyNote } from "./dh-common";
 import { assumedIonSize, kiellandIonSize } from "./ion-parameters";
 
 const LABEL = "Extended Debye–Hückel (Kielland ion sizes)";
@@ -30,7 +30,7 @@ export const dhExtendedModel: ActivityModel = {
       return log10ToLn((-A * ion.charge * ion.charge * sqrtI) / (1 + B * a * sqrtI));
     });
     notes.push(...waterOnlyNote(LABEL, "Kielland's ion sizes", input.solvent));
-    return { lnGamma, validityMessages: ionicStrengthMessage(LABEL, MAX_I, input), notes };
+    return { lnGamma, validityMessages: [...ionicStrengthMessage(LABEL, MAX_I, input), ...ionAssociationMessage(input)], notes };
   },
   substitutedTex(input) {
     const { A, B, sqrtI } = substitutedCore(input);

@@ -7,7 +7,7 @@
  * εr and ρ, so the law applies to any solvent.
  */
 import type { ActivityModel, ActivityModelInput } from "./types";
-import { chargeProductMagnitude, log10ToLn, substitutedCore, texNumber } from "./dh-common";
+import { chargeProductMagnitude, ionAssociationMessage, log10ToLn, substitutedCore, texNumber } from "./dh-common";
 
 export const DH_LIMITING_SQRT_I_MAX_1_1 = 0.1;
 
@@ -30,7 +30,7 @@ export const dhLimitingModel: ActivityModel = {
     const validityMessages = sqrtI > limit
       ? [`The Debye–Hückel limiting law holds for ${product === 1 ? "1:1 electrolytes" : `charge product |z₊z₋| = ${product}`} only up to √I ≈ ${texNumber(limit)} (here √I = ${texNumber(sqrtI)}); use the extended equation, Davies or Truesdell–Jones.`]
       : [];
-    return { lnGamma, validityMessages, notes: [] };
+    return { lnGamma, validityMessages: [...validityMessages, ...ionAssociationMessage(input)], notes: [] };
   },
   substitutedTex(input) {
     const { A, sqrtI } = substitutedCore(input);

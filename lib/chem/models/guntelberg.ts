@@ -5,7 +5,7 @@
  * mixtures where no single ion size fits. Range: I ≤ 0.1 mol/kg.
  */
 import type { ActivityModel, ActivityModelInput } from "./types";
-import { ionicStrengthMessage, log10ToLn, substitutedCore, waterOnlyNote } from "./dh-common";
+import { ionAssociationMessage, ionicStrengthMessage, log10ToLn, substitutedCore, waterOnlyNote } from "./dh-common";
 
 const LABEL = "Güntelberg";
 const MAX_I = 0.1;
@@ -22,7 +22,7 @@ export const guntelbergModel: ActivityModel = {
     const lnGamma = input.ions.map((ion) => log10ToLn((-A * ion.charge * ion.charge * sqrtI) / (1 + sqrtI)));
     return {
       lnGamma,
-      validityMessages: ionicStrengthMessage(LABEL, MAX_I, input),
+      validityMessages: [...ionicStrengthMessage(LABEL, MAX_I, input), ...ionAssociationMessage(input)],
       notes: waterOnlyNote(LABEL, "the product B·å = 1", input.solvent),
     };
   },

@@ -3,17 +3,18 @@
  *   log10 γi = −A zi² √I / (1 + B åi √I) + bi I
  * with the ion-specific å and b of WATEQ4F (Ball & Nordstrom 1991). For ions WATEQ4F does
  * not fit, the b-dot form of Helgeson (1969) is used: the EQ3/6 ion size and Ḃ(T).
- * Range: I ≤ 2 mol/kg for the fitted ions (chloride-dominated waters); parameters for water.
+ * Range: I ≤ 2 mol/kg when every ion has a fitted b (chloride-dominated waters), about
+ * 0.5 mol/kg otherwise (checked against CRC γ± of HCl, LiCl, NaOH in the tests); water.
  */
 import { bDot } from "../data/ion-size-bdot";
 import type { ActivityModel, ActivityModelInput } from "./types";
-import { ionicStrengthMessage, log10ToLn, substitutedCore, texNumber, waterOnlyNote } from "./dh-common";
+import { ionAssociationMessage, ionicStrengthMessage, log10ToLn, substitutedCore, texNumber, waterOnlyNote } from "./dh-common";
 import { assumedIonSize, bDotIonSize, kiellandIonSize, truesdellJonesParameters } from "./ion-parameters";
 
 const LABEL = "Truesdell–Jones (b-dot)";
 const MAX_I = 2;
 /** Above this, b-dot ions (no fitted b) are outside Helgeson's well-tested range. */
-const BDOT_MAX_I = 1;
+const BDOT_MAX_I = 0.5;
 
 export interface TruesdellJonesIonParameters {
   aAngstrom: number;
@@ -22,8 +23,9 @@ export interface TruesdellJonesIonParameters {
 }
 
 export function truesdellJonesIon(formula: string, charge: number, temperatureC: number): TruesdellJonesIonParameters {
+  // WATEQ4F's b = 0 means "no b fitted": those ions take the b-dot form like untabulated ones.
   const fitted = truesdellJonesParameters(formula);
-  if (fitted) return { ...fitted, source: "WATEQ4F" };
+  if (fitted && fitted.b !== 0) return { ...fitted, source: "WATEQ4F" };
   const size = bDotIonSize(formula) ?? kiellandIonSize(formula);
   return { aAngstrom: size ?? assumedIonSize(charge), b: bDot(temperatureC), source: size === undefined ? "assumed" : "b-dot" };
 }
@@ -32,7 +34,7 @@ export const truesdellJonesModel: ActivityModel = {
   id: "truesdell-jones",
   label: LABEL,
   formulaTex: String.raw`\log_{10}\gamma_i = -\frac{A z_i^2 \sqrt{I}}{1 + B \mathring{a}_i \sqrt{I}} + b_i I`,
-  validityNote: "I ≤ 2 mol/kg with WATEQ4F-fitted ions (Truesdell & Jones 1974); b-dot ions (Helgeson 1969) to about 1 mol/kg; water.",
+  validityNote: "I ≤ 2 mol/kg with WATEQ4F-fitted ions (Truesdell & Jones 1974); b-dot ions (Helgeson 1969) to about 0.5 mol/kg; water.",
   maxIonicStrengthMolal: MAX_I,
   compute(input: ActivityModelInput) {
     const I = input.ionicStrengthMolal;
@@ -54,6 +56,7 @@ export const truesdellJonesModel: ActivityModel = {
     if (bDotIons.length && I > BDOT_MAX_I && validityMessages.length === 0) {
       validityMessages.push(`Ions without fitted b (${bDotIons.join(", ")}) use the b-dot form, tested to about I = ${BDOT_MAX_I} mol/kg.`);
     }
+    validityMessages.push(...ionAssociationMessage(input));
     return { lnGamma, validityMessages, notes };
   },
   substitutedTex(input) {
