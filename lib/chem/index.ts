@@ -20,3 +20,5 @@ export { nernstPotential, nernstPotentialDetailed, nernstSlopeV, listCouples } f
 export type { NernstInput, NernstResult } from "./electrochem/nernst";
 export { convertPotential, convertPotentialDetailed, listReferenceElectrodes, referencePotentialVsShe } from "./electrochem/reference-electrodes";
 export type { ReferenceElectrodeId, PotentialOptions } from "./electrochem/reference-electrodes";
+export { designBuffer, speciate } from "./acid-base";
+export type { DesignBufferInput, DesignBufferResult, SpeciateInput, SpeciateResult, SpeciateComponent, RecipeComponent, SpeciesResult, ActivityConvention, BufferSystemId } from "./acid-base";
