@@ -1,4 +1,5 @@
 import { redirect } from "next/navigation";
+import { QueryProvider } from "@/components/providers/query-provider";
 import { AppHeader } from "@/components/shell/app-header";
 import { getActor } from "@/lib/access/actor";
 import { signOut } from "@/lib/auth";
@@ -18,7 +19,7 @@ export default async function AppLayout({ children }: { children: React.ReactNod
   return (
     <div className="min-h-screen">
       <AppHeader labName={labName} userName={actor.name} role={actor.role} items={navigationFor(actor.role)} signOut={signOutAction} />
-      <main className="mx-auto max-w-7xl px-5 py-8">{children}</main>
+      <main className="mx-auto max-w-7xl px-5 py-8"><QueryProvider>{children}</QueryProvider></main>
       <footer className="mx-auto max-w-7xl px-5 pb-8 text-xs text-ink-faint">
         Computed activities are model estimates: verify against measurement, read the safety data sheet of every reagent and follow your institution&apos;s chemical hygiene plan.
       </footer>

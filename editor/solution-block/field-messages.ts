@@ -3,7 +3,4 @@ export type FieldMessages = ReadonlyMap<string, string>;
 
 export const NO_MESSAGES: FieldMessages = new Map();
 
-/** Normalises "components.1.amount" and "components[1].amount" to the bracket form the UI uses. */
-export function normaliseFieldPath(field: string): string {
-  return field.replace(/\.(\d+)(?=\.|$)/g, "[$1]");
-}
+export { normaliseFieldPath } from "@/lib/entries/field-path";

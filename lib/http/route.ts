@@ -1,4 +1,5 @@
 import "server-only";
+import { requireActor, type Actor } from "@/lib/access/actor";
 import { AppError, isAppError } from "@/lib/errors";
 
 /** The JSON body of every API error: a code a client can switch on and a message a person can read. */
@@ -34,4 +35,12 @@ export async function readJson(request: Request): Promise<unknown> {
   } catch {
     throw new AppError("invalid_input", "The request body is not valid JSON.");
   }
+}
+
+/** A route handler that needs a signed-in member: resolves the actor first (401 otherwise). */
+export function authedRoute<P>(handler: (request: Request, actor: Actor, params: P) => Promise<Response>) {
+  return route<{ params: Promise<P> }>(async (request, context) => {
+    const actor = await requireActor();
+    return handler(request, actor, await context.params);
+  });
 }

@@ -18,3 +18,11 @@ export function formDataToObject(form: FormData): Record<string, string> {
   });
   return out;
 }
+
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+/** A record id from a URL: anything but a UUID cannot exist, so it is simply "not found". */
+export function parseRecordId(id: string, what = "Record"): string {
+  if (!UUID.test(id)) throw new AppError("not_found", `${what} not found.`);
+  return id;
+}

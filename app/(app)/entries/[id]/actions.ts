@@ -1,0 +1,24 @@
+"use server";
+import { revalidatePath } from "next/cache";
+import { requireActor } from "@/lib/access/actor";
+import { runAction, type ActionState } from "@/lib/http/action";
+import { setEntryArchived, submitEntry } from "@/lib/notebook/entries";
+import { formDataToObject } from "@/lib/validation/parse";
+
+export async function submitEntryAction(_prev: ActionState, form: FormData): Promise<ActionState> {
+  const { entryId = "" } = formDataToObject(form);
+  return runAction(async () => {
+    await submitEntry(await requireActor(), entryId);
+    revalidatePath(`/entries/${entryId}`);
+    return { ok: true, message: "Submitted for countersignature." };
+  });
+}
+
+export async function archiveEntryAction(_prev: ActionState, form: FormData): Promise<ActionState> {
+  const { entryId = "", archived } = formDataToObject(form);
+  return runAction(async () => {
+    await setEntryArchived(await requireActor(), entryId, archived === "true");
+    revalidatePath(`/entries/${entryId}`);
+    return { ok: true, message: archived === "true" ? "Archived. It stays readable and searchable by link." : "Restored to the lists." };
+  });
+}

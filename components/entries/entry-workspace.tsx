@@ -1,0 +1,82 @@
+"use client";
+import type { JSONContent } from "@tiptap/core";
+import { useEffect, useState } from "react";
+import { NotebookEditor } from "@/editor/notebook-editor";
+import { ConflictPanel } from "./conflict-panel";
+import { readLocalDraft } from "./local-draft";
+import { SaveIndicator } from "./save-indicator";
+import { useAutosave, type AutosaveStart } from "./use-autosave";
+
+export interface EntryWorkspaceProps {
+  entryId: string;
+  title: string;
+  content: unknown;
+  revision: number;
+  editable: boolean;
+}
+
+/**
+ * The entry's editing surface. It first looks for edits this browser kept and the server
+ * does not have (a reload or a crashed tab), and starts from those when present.
+ */
+export function EntryWorkspace(props: EntryWorkspaceProps) {
+  const [start, setStart] = useState<AutosaveStart | null>(null);
+  const [restored, setRestored] = useState(false);
+
+  useEffect(() => {
+    const draft = props.editable ? readLocalDraft(props.entryId) : null;
+    if (draft && draft.baseRevision <= props.revision) {
+      setStart({ revision: draft.baseRevision, title: draft.title, content: draft.content, unsaved: true });
+      setRestored(true);
+    } else {
+      setStart({ revision: props.revision, title: props.title, content: props.content, unsaved: false });
+    }
+  }, [props.entryId, props.editable, props.revision, props.title, props.content]);
+
+  if (!start) return <div className="card h-96 animate-pulse bg-paper-deep" aria-label="Loading the editor" />;
+  return <EntrySession {...props} start={start} restored={restored} />;
+}
+
+function EntrySession({ entryId, editable, start, restored }: EntryWorkspaceProps & { start: AutosaveStart; restored: boolean }) {
+  const { state, change, keepMine, discardMine } = useAutosave(entryId, start);
+  const [title, setTitle] = useState(start.title);
+
+  return (
+    <div className="space-y-4">
+      <div className="flex flex-wrap items-center gap-3">
+        <label htmlFor="entry-title" className="sr-only">Entry title</label>
+        <input
+          id="entry-title"
+          className="min-w-0 flex-1 border-0 bg-transparent text-2xl font-semibold tracking-tight focus:outline-none focus:ring-0 disabled:text-ink"
+          value={title}
+          disabled={!editable}
+          maxLength={200}
+          onChange={(e) => {
+            setTitle(e.target.value);
+            if (e.target.value.trim()) change({ title: e.target.value });
+          }}
+        />
+        {editable ? <SaveIndicator state={state} /> : null}
+      </div>
+      {restored ? (
+        <p role="status" className="rounded-md border border-copper-100 bg-copper-50 px-3 py-2 text-xs text-copper-700">
+          Restored edits this browser kept from your last visit; they are being saved now.
+        </p>
+      ) : null}
+      {!title.trim() && editable ? <p role="alert" className="text-xs text-red-700">An entry needs a title; the last title is kept until you type one.</p> : null}
+      {state.status === "conflict" ? <ConflictPanel onKeepMine={() => void keepMine()} onDiscardMine={discardMine} /> : null}
+      {state.status === "refused" ? (
+        <div role="alert" className="rounded-md border border-red-200 bg-red-50 px-3 py-2 text-sm text-red-800">
+          <p>{state.message} Your edits stay in this browser.</p>
+          {state.problems?.length ? <ul className="mt-1 list-disc pl-5 text-xs">{state.problems.map((p) => <li key={p}>{p}</li>)}</ul> : null}
+        </div>
+      ) : null}
+      <NotebookEditor
+        initialContent={start.content as JSONContent}
+        editable={editable}
+        ariaLabel={`Text of ${start.title}`}
+        onChange={(doc) => change({ content: doc })}
+      />
+    </div>
+  );
+}

@@ -1,0 +1,107 @@
+import "server-only";
+import { insertAuditEvent } from "@/db/queries/audit";
+import {
+  countEntriesByStatus, findEntryHeader, findLabEntry, insertEntry, insertRevision, listEntries as queryEntries, updateEntry,
+} from "@/db/queries/entries";
+import { findLabProject } from "@/db/queries/projects";
+import type { EntryStatus } from "@/db/schema/enums";
+import { assertCan, type Actor } from "@/lib/access/actor";
+import { canonicalHash } from "@/lib/entries/canonical-hash";
+import { findTemplate } from "@/lib/entries/templates";
+import { AppError } from "@/lib/errors";
+import { getDb } from "@/lib/server/database";
+import { createEntrySchema, entryListQuerySchema } from "@/lib/validation/entries";
+import { parseInput, parseRecordId } from "@/lib/validation/parse";
+import { documentPlainText } from "./plain-text";
+import { writeSolutionRecords } from "./write-solutions";
+
+export const EMPTY_DOCUMENT = { type: "doc", content: [{ type: "paragraph" }] };
+
+export interface EntryListItem {
+  id: string;
+  title: string;
+  status: EntryStatus;
+  revision: number;
+  projectId: string;
+  projectName: string;
+  authorId: string;
+  authorName: string;
+  createdAt: string;
+  updatedAt: string;
+  archived: boolean;
+}
+
+export async function listEntries(actor: Actor, rawQuery: unknown): Promise<EntryListItem[]> {
+  assertCan(actor, "entry.read");
+  const q = parseInput(entryListQuerySchema, rawQuery);
+  const rows = await queryEntries(getDb(), {
+    labId: actor.labId, projectId: q.projectId, status: q.status, authorId: q.author === "me" ? actor.userId : undefined,
+    search: q.q || undefined, archived: q.archived, sort: q.sort, order: q.order, limit: q.limit,
+  });
+  return rows.map((r) => ({
+    id: r.id, title: r.title, status: r.status as EntryStatus, revision: r.revision, projectId: r.projectId, projectName: r.projectName,
+    authorId: r.authorId, authorName: r.authorName, createdAt: r.createdAt.toISOString(), updatedAt: r.updatedAt.toISOString(), archived: r.archivedAt !== null,
+  }));
+}
+
+export async function countReviewQueue(actor: Actor): Promise<number> {
+  if (actor.role !== "supervisor") return 0;
+  return countEntriesByStatus(getDb(), actor.labId, "submitted");
+}
+
+/** Creates an entry and, from a template, its first revision, in one transaction. */
+export async function createEntry(actor: Actor, raw: unknown): Promise<{ id: string }> {
+  assertCan(actor, "entry.write");
+  const input = parseInput(createEntrySchema, raw);
+  const template = input.template ? findTemplate(input.template) : undefined;
+  if (input.template && !template) throw new AppError("invalid_input", "Unknown template.", { fieldErrors: { template: ["Choose one of the listed templates."] } });
+  return getDb().transaction(async (tx) => {
+    const project = await findLabProject(tx, actor.labId, input.projectId);
+    if (!project || project.archivedAt) throw new AppError("invalid_input", "Choose a project of your lab.", { fieldErrors: { projectId: ["Choose a project of your lab."] } });
+    const entry = await insertEntry(tx, { labId: actor.labId, projectId: project.id, title: input.title, authorId: actor.userId, template: template?.id ?? null });
+    if (template) {
+      const content = template.build();
+      const revision = await insertRevision(tx, {
+        entryId: entry.id, number: 1, title: input.title, content: content as unknown as Record<string, unknown>,
+        contentText: documentPlainText(content), contentHash: canonicalHash({ title: input.title, content }), authorId: actor.userId,
+      });
+      await writeSolutionRecords(tx, { labId: actor.labId, entryId: entry.id, revisionId: revision.id }, content);
+      await updateEntry(tx, actor.labId, entry.id, { currentRevisionNumber: 1 });
+    }
+    await insertAuditEvent(tx, { labId: actor.labId, actorId: actor.userId, action: "entry.created", targetType: "entry", targetId: entry.id, details: { template: template?.id ?? null } });
+    return { id: entry.id };
+  });
+}
+
+/** Archive or restore: the entry and every revision stay; it leaves the default lists. */
+export async function setEntryArchived(actor: Actor, entryId: string, archived: boolean): Promise<void> {
+  assertCan(actor, "entry.write");
+  await getDb().transaction(async (tx) => {
+    const entry = await findLabEntry(tx, actor.labId, parseRecordId(entryId, "Entry"), true);
+    if (!entry) throw new AppError("not_found", "Entry not found.");
+    if (entry.authorId !== actor.userId && actor.role !== "admin") throw new AppError("forbidden", "Only the author or a lab admin can archive an entry.");
+    await updateEntry(tx, actor.labId, entryId, { archivedAt: archived ? new Date() : null });
+    await insertAuditEvent(tx, { labId: actor.labId, actorId: actor.userId, action: archived ? "entry.archived" : "entry.restored", targetType: "entry", targetId: entryId });
+  });
+}
+
+/** draft/returned → submitted: the author asks for a countersignature. */
+export async function submitEntry(actor: Actor, entryId: string): Promise<void> {
+  assertCan(actor, "entry.write");
+  await getDb().transaction(async (tx) => {
+    const entry = await findLabEntry(tx, actor.labId, parseRecordId(entryId, "Entry"), true);
+    if (!entry) throw new AppError("not_found", "Entry not found.");
+    if (entry.authorId !== actor.userId) throw new AppError("forbidden", "Only the author submits an entry.");
+    if (entry.status !== "draft" && entry.status !== "returned") throw new AppError("conflict", `This entry is ${entry.status}; only a draft can be submitted.`);
+    if (entry.currentRevisionNumber === 0) throw new AppError("conflict", "Write something before submitting: the entry has no saved revision.");
+    await updateEntry(tx, actor.labId, entryId, { status: "submitted", updatedAt: new Date() });
+    await insertAuditEvent(tx, { labId: actor.labId, actorId: actor.userId, action: "entry.submitted", targetType: "entry", targetId: entryId, details: { revision: entry.currentRevisionNumber } });
+  });
+}
+
+export async function getEntryHeader(actor: Actor, entryId: string) {
+  assertCan(actor, "entry.read");
+  const found = await findEntryHeader(getDb(), actor.labId, parseRecordId(entryId, "Entry"));
+  if (!found) throw new AppError("not_found", "Entry not found.");
+  return found;
+}

@@ -1,0 +1,58 @@
+import "server-only";
+import { findLabEntry, findRevision, listRevisions } from "@/db/queries/entries";
+import { listComponentsOf, listRevisionSolutions } from "@/db/queries/solutions";
+import { assertCan, type Actor } from "@/lib/access/actor";
+import { AppError } from "@/lib/errors";
+import { getDb } from "@/lib/server/database";
+import { parseRecordId } from "@/lib/validation/parse";
+import { EMPTY_DOCUMENT } from "./entries";
+
+export interface RevisionDto {
+  number: number;
+  title: string;
+  content: unknown;
+  contentHash: string;
+  authorName: string;
+  createdAt: string;
+}
+
+async function entryOf(actor: Actor, entryId: string) {
+  assertCan(actor, "entry.read");
+  const entry = await findLabEntry(getDb(), actor.labId, parseRecordId(entryId, "Entry"));
+  if (!entry) throw new AppError("not_found", "Entry not found.");
+  return entry;
+}
+
+export async function getRevision(actor: Actor, entryId: string, number: number): Promise<RevisionDto> {
+  const entry = await entryOf(actor, entryId);
+  if (!Number.isInteger(number) || number < 1) throw new AppError("not_found", "Revision not found.");
+  const found = await findRevision(getDb(), entry.id, number);
+  if (!found) throw new AppError("not_found", "Revision not found.");
+  const r = found.revision;
+  return { number: r.number, title: r.title, content: r.content, contentHash: r.contentHash, authorName: found.authorName, createdAt: r.createdAt.toISOString() };
+}
+
+/** The newest revision, or an empty document at revision 0 for a new entry. */
+export async function getCurrentContent(actor: Actor, entryId: string): Promise<RevisionDto> {
+  const entry = await entryOf(actor, entryId);
+  if (entry.currentRevisionNumber === 0) {
+    return { number: 0, title: entry.title, content: EMPTY_DOCUMENT, contentHash: "", authorName: "", createdAt: entry.createdAt.toISOString() };
+  }
+  return getRevision(actor, entryId, entry.currentRevisionNumber);
+}
+
+export async function getRevisionHistory(actor: Actor, entryId: string) {
+  const entry = await entryOf(actor, entryId);
+  const rows = await listRevisions(getDb(), entry.id);
+  return rows.map((r) => ({ number: r.number, title: r.title, contentHash: r.contentHash, authorName: r.authorName, createdAt: r.createdAt.toISOString() }));
+}
+
+/** The server-computed solution rows of one revision (what the solution finder searches). */
+export async function getRevisionSolutions(actor: Actor, entryId: string, number: number) {
+  const entry = await entryOf(actor, entryId);
+  const found = await findRevision(getDb(), entry.id, number);
+  if (!found) throw new AppError("not_found", "Revision not found.");
+  const rows = await listRevisionSolutions(getDb(), actor.labId, found.revision.id);
+  const components = await listComponentsOf(getDb(), rows.map((r) => r.id));
+  return rows.map((r) => ({ ...r, components: components.filter((c) => c.solutionId === r.id) }));
+}

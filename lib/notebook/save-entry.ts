@@ -1,0 +1,68 @@
+import "server-only";
+import { insertAuditEvent } from "@/db/queries/audit";
+import { findLabEntry, findRevision, insertRevision, updateEntry } from "@/db/queries/entries";
+import { assertCan, type Actor } from "@/lib/access/actor";
+import { canonicalHash } from "@/lib/entries/canonical-hash";
+import { describeDocumentErrors, entryDocumentSchema } from "@/lib/entries/document-schema";
+import { AppError } from "@/lib/errors";
+import { getDb } from "@/lib/server/database";
+import { saveEntrySchema } from "@/lib/validation/entries";
+import { parseInput, parseRecordId } from "@/lib/validation/parse";
+import { documentPlainText } from "./plain-text";
+import { writeSolutionRecords } from "./write-solutions";
+
+export interface SaveResult {
+  revision: number;
+  contentHash: string;
+  /** False when the document was identical to the current revision: nothing was written. */
+  created: boolean;
+  solutions: number;
+}
+
+const EDITABLE = new Set(["draft", "returned"]);
+
+/**
+ * Autosave. The editor sends the revision number it started from; a save against an older
+ * one is refused with 409, so nothing is ever silently overwritten. A save that changes the
+ * content writes a new immutable revision and the server-computed solution rows, in one
+ * transaction; a save that changes nothing writes nothing.
+ */
+export async function saveEntryContent(actor: Actor, entryId: string, raw: unknown): Promise<SaveResult> {
+  assertCan(actor, "entry.write");
+  const input = parseInput(saveEntrySchema, raw);
+  const parsedDoc = entryDocumentSchema.safeParse(input.content);
+  if (!parsedDoc.success) {
+    throw new AppError("invalid_input", "The document was refused; the previous revision is unchanged.", {
+      details: { problems: describeDocumentErrors(parsedDoc.error).slice(0, 20) },
+    });
+  }
+  const content = parsedDoc.data;
+  const contentHash = canonicalHash({ title: input.title, content });
+
+  return getDb().transaction(async (tx) => {
+    const entry = await findLabEntry(tx, actor.labId, parseRecordId(entryId, "Entry"), true);
+    if (!entry) throw new AppError("not_found", "Entry not found.");
+    if (entry.authorId !== actor.userId) throw new AppError("forbidden", "Only the author edits this entry.");
+    if (!EDITABLE.has(entry.status)) throw new AppError("conflict", `This entry is ${entry.status}; it cannot be edited now.`, { details: { status: entry.status } });
+    if (entry.currentRevisionNumber !== input.baseRevision) {
+      throw new AppError("conflict", "This entry was saved elsewhere since you opened it.", {
+        details: { currentRevision: entry.currentRevisionNumber, baseRevision: input.baseRevision },
+      });
+    }
+    if (entry.currentRevisionNumber > 0) {
+      const current = await findRevision(tx, entry.id, entry.currentRevisionNumber);
+      if (current?.revision.contentHash === contentHash) {
+        return { revision: entry.currentRevisionNumber, contentHash, created: false, solutions: 0 };
+      }
+    }
+    const number = entry.currentRevisionNumber + 1;
+    const revision = await insertRevision(tx, {
+      entryId: entry.id, number, title: input.title, content: content as unknown as Record<string, unknown>,
+      contentText: documentPlainText(content), contentHash, authorId: actor.userId,
+    });
+    const solutions = await writeSolutionRecords(tx, { labId: actor.labId, entryId: entry.id, revisionId: revision.id }, content);
+    await updateEntry(tx, actor.labId, entry.id, { currentRevisionNumber: number, title: input.title, updatedAt: new Date() });
+    if (number === 1) await insertAuditEvent(tx, { labId: actor.labId, actorId: actor.userId, action: "entry.first_saved", targetType: "entry", targetId: entry.id });
+    return { revision: number, contentHash, created: true, solutions };
+  });
+}
