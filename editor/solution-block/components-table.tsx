@@ -62,11 +62,11 @@ export function ComponentsTable({ components, errors, editable, onChange }: Comp
       <table className="w-full border-collapse text-sm">
         <caption className="sr-only">Components</caption>
         <thead>
-          <tr className="text-left text-[11px] uppercase tracking-wide text-ink-soft">
-            <th scope="col" className="pb-1 font-medium">Species</th>
-            <th scope="col" className="pb-1 text-right font-medium">Amount</th>
-            <th scope="col" className="pb-1 font-medium">Unit</th>
-            <th scope="col" className="pb-1 font-medium">Basis</th>
+          <tr className="border-b border-ink-faint/30 text-left text-[11px] uppercase tracking-wide text-ink-soft">
+            <th scope="col" className="pb-1 pr-2 font-medium">Species</th>
+            <th scope="col" className="pb-1 pr-2 text-right font-medium">Amount</th>
+            <th scope="col" className="pb-1 pl-1 pr-2 font-medium">Unit</th>
+            <th scope="col" className="pb-1 pr-2 font-medium">Basis</th>
             <th scope="col" className="pb-1"><span className="sr-only">Remove</span></th>
           </tr>
         </thead>

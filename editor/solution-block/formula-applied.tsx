@@ -16,7 +16,7 @@ export function FormulaApplied({ result }: { result: SolutionResult }) {
       </figcaption>
       <div className="overflow-x-auto text-ink">
         {result.formulaTexGeneral ? <Tex tex={result.formulaTexGeneral} display /> : null}
-        {result.formulaTex ? <Tex tex={result.formulaTex} display className="text-lagoon-700" /> : null}
+        {result.formulaTex && result.formulaTex !== result.formulaTexGeneral ? <Tex tex={result.formulaTex} display className="text-lagoon-700" /> : null}
       </div>
       <p className="mt-1 font-mono text-xs tabular-nums text-ink-soft">
         A = {formatSignificant(result.constants.aLog10)} kg^½ mol^−½ · I = {formatSignificant(result.ionicStrength.molal)} mol/kg

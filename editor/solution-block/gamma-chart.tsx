@@ -49,9 +49,9 @@ export default function GammaChart({ input, result, salt, onSaltChange }: GammaC
           />
         ) : null}
       </div>
-      <div className="h-56 w-full" role="img" aria-label={`γ± of ${saltFormula} against the square root of ionic strength for ${curves.models.length} models`}>
+      <div className="h-64 w-full" role="img" aria-label={`γ± of ${saltFormula} against the square root of ionic strength for ${curves.models.length} models`}>
         <ResponsiveContainer width="100%" height="100%">
-          <LineChart data={curves.points} margin={{ top: 8, right: 16, bottom: 18, left: 0 }}>
+          <LineChart data={curves.points} margin={{ top: 4, right: 16, bottom: 20, left: 4 }}>
             <CartesianGrid stroke="#e4e7eb" strokeDasharray="2 4" />
             <XAxis
               dataKey="sqrtI"
@@ -73,7 +73,7 @@ export default function GammaChart({ input, result, salt, onSaltChange }: GammaC
               labelFormatter={(label) => `√I = ${Number(label).toFixed(3)}`}
               contentStyle={{ fontSize: 12 }}
             />
-            <Legend wrapperStyle={{ fontSize: 11 }} formatter={(value) => modelLabel(String(value))} />
+            <Legend verticalAlign="top" height={28} wrapperStyle={{ fontSize: 11 }} formatter={(value) => modelLabel(String(value))} />
             {curves.models.flatMap((model) => [
               <Line key={model} dataKey={model} name={model} stroke={MODEL_COLOURS[model]} strokeWidth={1.75} dot={false} isAnimationActive={false} connectNulls={false} />,
               <Line key={`${model}:outside`} dataKey={`${model}:outside`} stroke={MODEL_COLOURS[model]} strokeWidth={1.25} strokeDasharray="4 3" dot={false} isAnimationActive={false} legendType="none" connectNulls={false} />,

@@ -1,3 +1,4 @@
+import { ChemFormula } from "@/lib/ui/chem-formula";
 import { formatSignificant } from "@/lib/ui/format-number";
 import type { SolutionResult } from "./evaluate-solution-block";
 
@@ -21,10 +22,12 @@ export function IonTable({ result }: { result: SolutionResult }) {
           <th scope="col" className="py-1 font-medium">a</th>
         </tr>
       </thead>
-      <tbody className="font-mono tabular-nums">
+      <tbody className="whitespace-nowrap font-mono tabular-nums">
         {result.ions.map((ion) => (
           <tr key={ion.formula} className="border-b border-ink-faint/15 text-right last:border-0">
-            <th scope="row" className="py-0.5 text-left font-normal text-ink">{ion.formula}</th>
+            <th scope="row" className="whitespace-nowrap py-0.5 pr-3 text-left font-sans font-normal text-ink">
+              <ChemFormula formula={ion.formula} />
+            </th>
             <td className="py-0.5 text-ink-soft">{chargeLabel(ion.charge)}</td>
             <td className="py-0.5">{formatSignificant(ion.molality)}</td>
             <td className="py-0.5">{formatSignificant(ion.molarity)}</td>
@@ -50,10 +53,12 @@ export function SaltList({ result }: { result: SolutionResult }) {
           <th scope="col" className="py-1 font-medium">a±</th>
         </tr>
       </thead>
-      <tbody className="font-mono tabular-nums">
+      <tbody className="whitespace-nowrap font-mono tabular-nums">
         {result.salts.map((salt) => (
           <tr key={salt.formula} className="border-b border-ink-faint/15 text-right last:border-0">
-            <th scope="row" className="py-0.5 text-left font-normal text-ink">{salt.formula}</th>
+            <th scope="row" className="whitespace-nowrap py-0.5 pr-3 text-left font-sans font-normal text-ink">
+              <ChemFormula formula={salt.formula} />
+            </th>
             <td className="py-0.5 text-lagoon-700" data-testid={`mean-gamma-${salt.formula}`}>{formatSignificant(salt.meanGamma)}</td>
             <td className="py-0.5 text-lagoon-700">{formatSignificant(salt.meanActivity)}</td>
           </tr>

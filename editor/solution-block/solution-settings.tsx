@@ -18,7 +18,7 @@ export function SolutionSettings({ value, errors, editable, onChange }: Solution
   const solvents = solventOptions();
   const known = solvents.some((option) => option.value === value.solvent);
   return (
-    <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
+    <div className="grid grid-cols-2 gap-3 sm:grid-cols-[1fr_0.8fr_0.8fr_1.4fr]">
       <SelectField
         label="Solvent"
         value={value.solvent}
