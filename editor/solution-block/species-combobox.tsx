@@ -28,6 +28,9 @@ export function SpeciesCombobox({ value, onValueChange, label, error, disabled, 
   const [active, setActive] = useState(0);
   const options = useMemo<SpeciesOption[]>(() => (open ? searchSpeciesOptions(value, 8) : []), [open, value]);
   const showList = open && options.length > 0 && !disabled;
+  // While suggestions are open the person is still choosing: the engine's "unknown species"
+  // for a half-typed name would only be noise. It shows as soon as the list closes.
+  const shownError = showList ? undefined : error;
 
   const pick = (option: SpeciesOption) => {
     onValueChange(option.formula);
@@ -66,14 +69,14 @@ export function SpeciesCombobox({ value, onValueChange, label, error, disabled, 
         aria-controls={`${id}-list`}
         aria-autocomplete="list"
         aria-activedescendant={showList ? `${id}-opt-${active}` : undefined}
-        aria-invalid={error ? true : undefined}
-        aria-describedby={error ? `${id}-error` : undefined}
+        aria-invalid={shownError ? true : undefined}
+        aria-describedby={shownError ? `${id}-error` : undefined}
         autoComplete="off"
         spellCheck={false}
         placeholder="e.g. KCl or potassium chloride"
         disabled={disabled}
         value={value}
-        className={cx(inputClass, "font-mono", error && invalidClass)}
+        className={cx(inputClass, "font-mono", shownError && invalidClass)}
         onChange={(event) => {
           onValueChange(event.target.value);
           setOpen(true);
@@ -112,7 +115,7 @@ export function SpeciesCombobox({ value, onValueChange, label, error, disabled, 
           ))}
         </ul>
       ) : null}
-      <FieldError id={`${id}-error`} message={error} />
+      <FieldError id={`${id}-error`} message={shownError} />
     </div>
   );
 }
