@@ -47,6 +47,13 @@ describe("worked examples (reference worked_examples.md §9, evaluated from publ
     expect(one.phi).toBeCloseTo(0.528, 2);
   });
 
+  it("pure water: ln γ = 0, φ = 1, ln a_w = 0 (no division by I = 0)", () => {
+    const nacl = { beta0: 0.0765, beta1: 0.2664, beta2: 0, alpha1: 2, alpha2: 12, cPhi: 0.00127 };
+    const r = single(nacl, 1, -1, 1, 1, 0);
+    expect(r.gamma).toBe(1);
+    expect(r.phi).toBe(1);
+  });
+
   it("reduces to the Debye–Hückel limiting law at high dilution: ln γ± → −|z+z−| A_γ √I", () => {
     const nacl = { beta0: 0.0765, beta1: 0.2664, beta2: 0, alpha1: 2, alpha2: 12, cPhi: 0.00127 };
     const m = 1e-6;

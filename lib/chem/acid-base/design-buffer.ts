@@ -229,6 +229,9 @@ export function designBuffer(input: DesignBufferInput): DesignBufferResult {
   });
   const check = equilibrate(new Map([[system.id, totalMolal]]), [...fixedIons].map(([formula, v]) => ({ formula, ...v })), conditions, kgPerL);
 
+  if (!Number.isFinite(check.pH) || components.some((c) => !Number.isFinite(c.amountMol) || (c.massG ?? 0) < 0 || !Number.isFinite(c.massG ?? 0) || !Number.isFinite(c.volumeMl ?? 0))) {
+    throw new ChemInputError("No finite recipe exists for this buffer, pH and concentration.", { field: "pH", code: "model_failed" });
+  }
   const warnings = [...check.warnings];
   if (Math.abs(input.pH - pKa[step]) > 1) {
     warnings.push(`pH ${input.pH} is more than 1 unit from the nearest pKa of ${system.name} (${pKa[step].toFixed(2)} at ${conditions.temperatureC} °C): buffer capacity is low.`);
