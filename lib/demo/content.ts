@@ -1,10 +1,114 @@
 import "server-only";
-import type { Database } from "@/db/client";
+import { eq } from "drizzle-orm";
+import { users } from "@/db/schema";
+import type { Role } from "@/db/schema/enums";
+import type { Actor } from "@/lib/access/actor";
+import { defaultCellBlockInput, defaultSolutionBlockInput } from "@/lib/entries/block-defaults";
+import type { SolutionBlockInput } from "@/lib/entries/block-schemas";
+import { createEntry, submitEntry } from "@/lib/notebook/entries";
+import { saveEntryContent } from "@/lib/notebook/save-entry";
+import { listProjects } from "@/lib/projects/service";
+import { getDb } from "@/lib/server/database";
 
 /**
- * Demo notebook content for a freshly seeded lab. Entries with solution blocks are added
- * here once the notebook service exists; until then a lab starts with its projects only.
+ * Demo notebook pages for a freshly seeded lab, written through the same services a
+ * researcher's browser uses (so the solution rows are the server's own recomputation).
+ * The people, projects and experiments are invented.
  */
-export async function demoContent(_db: Database, _lab: { id: string; slug: string }, _members: Record<string, string>): Promise<void> {
-  // Intentionally empty for now: see lib/entries for the notebook service.
+const text = (value: string) => ({ type: "text", text: value });
+const paragraph = (value: string) => ({ type: "paragraph", content: [text(value)] });
+const heading = (value: string) => ({ type: "heading", attrs: { level: 2 }, content: [text(value)] });
+const solution = (attrs: SolutionBlockInput) => ({ type: "solutionBlock", attrs });
+
+async function actorsOf(labId: string): Promise<Record<string, Actor>> {
+  const rows = await getDb().select().from(users).where(eq(users.labId, labId));
+  return Object.fromEntries(rows.map((u) => [u.email, { userId: u.id, labId: u.labId, role: u.role as Role, name: u.name, email: u.email }]));
+}
+
+async function write(actor: Actor, projectName: string, title: string, nodes: unknown[] | { template: string }, submit = false) {
+  const project = (await listProjects(actor)).find((p) => p.name === projectName);
+  if (!project) throw new Error(`demo project missing: ${projectName}`);
+  if (!Array.isArray(nodes)) {
+    const { id } = await createEntry(actor, { projectId: project.id, title, template: nodes.template });
+    if (submit) await submitEntry(actor, id);
+    return id;
+  }
+  const { id } = await createEntry(actor, { projectId: project.id, title });
+  await saveEntryContent(actor, id, { baseRevision: 0, title, content: { type: "doc", content: nodes } });
+  if (submit) await submitEntry(actor, id);
+  return id;
+}
+
+async function saltmarsh(labId: string) {
+  const a = await actorsOf(labId);
+  const tobin = a["tobin.bench@saltmarsh.example"];
+  const mira = a["mira.bench@saltmarsh.example"];
+
+  await write(tobin, "Copper corrosion in chloride media", "Cu disc in 0.1 m NaCl — polarisation run 1", { template: "cell-preparation" });
+
+  const mixed = defaultSolutionBlockInput({
+    name: "Chloride–sulfate mix, I ≈ 0.3",
+    components: [
+      { formula: "NaCl", amount: 0.1, unit: "mol/kg" },
+      { formula: "Na2SO4", amount: 0.0667, unit: "mol/kg" },
+    ],
+  });
+  await write(tobin, "Copper corrosion in chloride media", "Mixed chloride–sulfate electrolyte at I = 0.3 mol/kg", [
+    heading("Aim"),
+    paragraph("Hold the ionic strength near 0.3 mol/kg while the chloride fraction changes, so that activity effects do not masquerade as a chloride effect."),
+    solution(mixed),
+    paragraph("Weighed on the analytical balance; dissolved in 18 MΩ·cm water."),
+  ], true);
+
+  const redox = defaultSolutionBlockInput({
+    name: "Ferri/ferro 5 mM in 1 M KCl",
+    components: [
+      { formula: "K3Fe(CN)6", amount: 5, unit: "mmol/L" },
+      { formula: "K4Fe(CN)6", amount: 5, unit: "mmol/L" },
+      { formula: "KCl", amount: 1, unit: "mol/L" },
+    ],
+  });
+  const cell = defaultCellBlockInput({
+    name: "Glassy carbon RDE cell",
+    electrolyteBlockId: redox.blockId,
+    couple: "Fe(CN)6 3-/4-",
+    workingElectrode: { material: "glassy carbon disc", areaCm2: 0.0707, pretreatment: ["0.05 µm alumina polish, 2 min", "sonicate in water, 5 min"] },
+    counterElectrode: { material: "Pt coil", areaCm2: null, pretreatment: ["flame-annealed"] },
+    referenceElectrode: { material: "Ag/AgCl", areaCm2: null, pretreatment: [], type: "Ag/AgCl-3MKCl" },
+    purgeMinutes: 15,
+    instrument: "bench potentiostat B",
+    channel: "2",
+  });
+  await write(mira, "Ferrocyanide kinetics", "Hexacyanoferrate couple on glassy carbon, 5 mM", [
+    heading("Electrolyte"),
+    solution(redox),
+    heading("Cell"),
+    { type: "cellBlock", attrs: cell },
+    paragraph("Hexacyanoferrates release hydrogen cyanide with strong acid: keep acids away from these solutions."),
+  ]);
+  await write(mira, "Ferrocyanide kinetics", "KCl stock for the reference compartment", { template: "electrolyte-stock" }, true);
+}
+
+async function ridgeback(labId: string) {
+  const a = await actorsOf(labId);
+  const juno = a["juno.bench@ridgeback.example"];
+  const litfsi = defaultSolutionBlockInput({
+    name: "1 M LiTFSI in PC",
+    solvent: "propylene-carbonate",
+    components: [{ formula: "LiN(SO2CF3)2", amount: 1, unit: "mol/L" }],
+  });
+  await write(juno, "LiTFSI electrolytes", "1 M LiTFSI in propylene carbonate — batch 4", [
+    paragraph("Dried salt 12 h at 120 °C under vacuum; mixed in the glovebox (H2O < 1 ppm)."),
+    solution(litfsi),
+    paragraph("Far outside the Debye–Hückel range: the block says so. Conductivity measured separately."),
+  ]);
+}
+
+const BY_SLUG: Record<string, (labId: string) => Promise<void>> = {
+  "saltmarsh-interfaces": saltmarsh,
+  "ridgeback-cells": ridgeback,
+};
+
+export async function demoContent(lab: { id: string; slug: string }): Promise<void> {
+  await BY_SLUG[lab.slug]?.(lab.id);
 }

@@ -9,8 +9,8 @@ import { hashPassword } from "@/lib/auth/password";
 import { DEMO_LABS, DEMO_PASSWORD } from "./scenario";
 
 export interface SeedHooks {
-  /** Extra demo content per lab (entries, solutions), added by later features. */
-  afterLab?: (db: Database, lab: { id: string; slug: string }, members: Record<string, string>) => Promise<void>;
+  /** Demo notebook content for a lab, run after the lab, its members and projects are committed. */
+  afterLab?: (lab: { id: string; slug: string }) => Promise<void>;
 }
 
 /** Seeds the demo scenario once; labs that already exist are left exactly as they are. */
@@ -23,7 +23,7 @@ export async function seedDemo(db: Database, hooks: SeedHooks = {}): Promise<{ c
       skipped.push(demo.slug);
       continue;
     }
-    await db.transaction(async (tx) => {
+    const lab = await db.transaction(async (tx) => {
       const lab = await insertLab(tx, { slug: demo.slug, name: demo.name });
       const memberIds: Record<string, string> = {};
       for (const m of demo.members) {
@@ -35,8 +35,9 @@ export async function seedDemo(db: Database, hooks: SeedHooks = {}): Promise<{ c
         await tx.insert(projects).values({ labId: lab.id, name: p.name, description: p.description, createdById: creator });
       }
       await insertAuditEvent(tx, { labId: lab.id, actorId: null, action: "lab.seeded", targetType: "lab", targetId: lab.id });
-      if (hooks.afterLab) await hooks.afterLab(tx as unknown as Database, { id: lab.id, slug: lab.slug }, memberIds);
+      return lab;
     });
+    if (hooks.afterLab) await hooks.afterLab({ id: lab.id, slug: lab.slug });
     created.push(demo.slug);
   }
   return { created, skipped };

@@ -1,0 +1,30 @@
+// @vitest-environment node
+import { eq } from "drizzle-orm";
+import { describe, expect, it } from "vitest";
+import { entries, labs, solutions } from "@/db/schema";
+import { demoContent } from "@/lib/demo/content";
+import { DEMO_LABS, DEMO_PASSWORD } from "@/lib/demo/scenario";
+import { seedDemo } from "@/lib/demo/seed";
+import { verifyCredentials } from "@/lib/auth/verify-credentials";
+import { getDb } from "@/lib/server/database";
+
+describe("demo scenario seed", () => {
+  it("creates two labs with members in every role and notebook content, once", async () => {
+    const first = await seedDemo(getDb(), { afterLab: demoContent });
+    expect(first.created.sort()).toEqual(DEMO_LABS.map((l) => l.slug).sort());
+    const again = await seedDemo(getDb(), { afterLab: demoContent });
+    expect(again.created).toEqual([]);
+    expect(again.skipped.sort()).toEqual(DEMO_LABS.map((l) => l.slug).sort());
+
+    for (const lab of DEMO_LABS) {
+      expect(new Set(lab.members.map((m) => m.role))).toEqual(new Set(["admin", "supervisor", "researcher"]));
+      const signIn = await verifyCredentials(getDb(), { email: lab.members[0].email, password: DEMO_PASSWORD });
+      expect(signIn.kind).toBe("ok");
+      const [row] = await getDb().select().from(labs).where(eq(labs.slug, lab.slug));
+      const labEntries = await getDb().select().from(entries).where(eq(entries.labId, row.id));
+      expect(labEntries.length).toBeGreaterThan(0);
+      const labSolutions = await getDb().select().from(solutions).where(eq(solutions.labId, row.id));
+      expect(labSolutions.length).toBeGreaterThan(0);
+    }
+  });
+});
