@@ -8,7 +8,7 @@
 import { pathToFileURL } from "node:url";
 import { defaultSolutionBlockInput } from "@/lib/entries/block-defaults";
 import type { SolutionBlockInput, SolutionComponentInput } from "@/lib/entries/block-schemas";
-import { evaluateSolutionBlock, evaluateSolutionBlockCached } from "@/editor/solution-block/evaluate-solution-block";
+import { evaluateSolutionBlock, evaluateSolutionBlockCached } from "@/lib/entries/evaluate-solution-block";
 
 // Typical electrochemistry electrolytes: supporting electrolytes, redox probes, buffers,
 // weighed stocks, a non-aqueous one. Amounts are what a lab would write.

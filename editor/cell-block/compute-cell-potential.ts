@@ -1,6 +1,6 @@
 import { convertPotentialDetailed, isChemInputError, nernstPotentialDetailed } from "@/lib/chem";
 import type { CellBlockInput, SolutionBlockInput } from "@/lib/entries/block-schemas";
-import { evaluateSolutionBlockCached } from "../solution-block/evaluate-solution-block";
+import { evaluateSolutionBlockCached } from "@/lib/entries/evaluate-solution-block";
 
 export type CellPotentialResult =
   | { status: "idle"; message: string }

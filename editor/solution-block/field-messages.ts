@@ -2,5 +2,3 @@
 export type FieldMessages = ReadonlyMap<string, string>;
 
 export const NO_MESSAGES: FieldMessages = new Map();
-
-export { normaliseFieldPath } from "@/lib/entries/field-path";

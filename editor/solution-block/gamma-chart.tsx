@@ -5,7 +5,7 @@ import { CartesianGrid, Legend, Line, LineChart, ReferenceDot, ResponsiveContain
 import { formatSignificant } from "@/lib/ui/format-number";
 import { modelLabel } from "../chem-catalogue";
 import { SelectField } from "../ui/select-field";
-import type { ChemInput, SolutionResult } from "./evaluate-solution-block";
+import type { ChemInput, SolutionResult } from "@/lib/entries/evaluate-solution-block";
 import { computeGammaCurves } from "./gamma-curves";
 
 // One hue per model, from the palette's family of inks, lagoons and coppers, so lines stay

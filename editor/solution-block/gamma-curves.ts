@@ -1,5 +1,5 @@
 import { computeSolution, isChemInputError } from "@/lib/chem";
-import type { ChemInput, SolutionResult } from "./evaluate-solution-block";
+import type { ChemInput, SolutionResult } from "@/lib/entries/evaluate-solution-block";
 
 /** Models drawn in the γ± against √I chart, in the order of their range of validity. */
 export const CHART_MODELS = ["dh-limiting", "dh-extended", "davies", "truesdell-jones", "sit", "pitzer"] as const;

@@ -4,7 +4,7 @@ import { lazy, Suspense, useState } from "react";
 import { actionButtonClass } from "../ui/field-styles";
 import { SafetyCaution } from "../ui/safety-caution";
 import { hazardNotesFor } from "../chem-catalogue";
-import type { SolutionEvaluation } from "./evaluate-solution-block";
+import type { SolutionEvaluation } from "@/lib/entries/evaluate-solution-block";
 import { FormulaApplied } from "./formula-applied";
 import { IonTable, SaltList } from "./ion-table";
 import { MessagesList } from "./messages-list";
