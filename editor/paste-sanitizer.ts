@@ -16,6 +16,8 @@ export function sanitizePastedHtml(html: string): string {
   return sanitizeHtml(html, {
     allowedTags: ALLOWED_TAGS,
     allowedAttributes: {
+      // ProseMirror's own clipboard marker: lets a copy within Ionleaf keep its structure.
+      "*": ["data-pm-slice"],
       a: ["href", "title"],
       th: ["colspan", "rowspan"],
       td: ["colspan", "rowspan"],
@@ -25,7 +27,8 @@ export function sanitizePastedHtml(html: string): string {
       li: ["data-type", "data-checked"],
       ul: ["data-type"],
       span: ["data-type", "data-latex"],
-      div: ["data-type", "data-latex"],
+      // Live blocks travel as one JSON attribute, validated by the block's zod schema on parse.
+      div: ["data-type", "data-latex", "data-block"],
       input: ["type", "checked"],
     },
     allowedSchemes: ["http", "https", "mailto"],

@@ -16,8 +16,9 @@ interface ComponentsTableProps {
 const emptyRow = (): SolutionComponentInput => ({ formula: "", amount: null, unit: "mol/kg" });
 
 /**
- * The components of a solution, one row each. Keyboard: Enter on the last row adds a row;
- * Ctrl/Cmd+Backspace on an empty row removes it; focus follows to the row a person expects.
+ * The components of a solution, one row each. Keyboard: Enter moves to the next row and, on
+ * the last row, adds one; Ctrl/Cmd+Backspace on an empty row removes it; focus follows to
+ * the row a person expects.
  */
 export function ComponentsTable({ components, errors, editable, onChange }: ComponentsTableProps) {
   const speciesInputs = useRef<(HTMLInputElement | null)[]>([]);
@@ -51,6 +52,9 @@ export function ComponentsTable({ components, errors, editable, onChange }: Comp
     if (event.key === "Enter" && index === components.length - 1) {
       event.preventDefault();
       addRow();
+    } else if (event.key === "Enter") {
+      event.preventDefault();
+      speciesInputs.current[index + 1]?.focus();
     } else if (event.key === "Backspace" && (event.ctrlKey || event.metaKey) && row.formula.trim() === "" && row.amount === null) {
       event.preventDefault();
       if (components.length > 1) removeRow(index);

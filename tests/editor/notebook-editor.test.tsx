@@ -1,10 +1,11 @@
-import { act, cleanup, render, screen, waitFor } from "@testing-library/react";
+import { act, cleanup, render, screen, waitFor, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import type { Editor, JSONContent } from "@tiptap/core";
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { NotebookEditor } from "@/editor/notebook-editor";
 import { sanitizePastedHtml } from "@/editor/paste-sanitizer";
 import { describeDocumentErrors, entryDocumentSchema } from "@/lib/entries/document-schema";
+import { findTemplate } from "@/lib/entries/templates";
 
 afterEach(cleanup);
 
@@ -108,6 +109,54 @@ describe("NotebookEditor", () => {
     expect(ids).toHaveLength(2);
     expect(new Set(ids).size).toBe(2);
     expect(ids).toContain(original.attrs!.blockId);
+  });
+});
+
+describe("copy and paste of live blocks", () => {
+  it("keeps a copied solution block's inputs through the clipboard and gives the copy a new id", async () => {
+    const { editor } = await mountEditor({ initialContent: findTemplate("electrolyte-stock")!.build() });
+    const original = editor.getJSON().content!.find((n) => n.type === "solutionBlock")!;
+    let clipboardHtml = "";
+    editor.state.doc.descendants((node, pos) => {
+      if (node.type.name !== "solutionBlock") return true;
+      const slice = editor.state.doc.slice(pos, pos + node.nodeSize);
+      const serialised = editor.view.serializeForClipboard(slice);
+      clipboardHtml = (serialised.dom as HTMLElement).innerHTML;
+      return false;
+    });
+    act(() => {
+      editor.commands.focus("end");
+      editor.view.pasteHTML(clipboardHtml, pasteEvent());
+    });
+    const blocks = editor.getJSON().content!.filter((n) => n.type === "solutionBlock");
+    expect(blocks).toHaveLength(2);
+    expect(blocks[1].attrs!.components).toEqual(original.attrs!.components);
+    expect(blocks[1].attrs!.name).toBe(original.attrs!.name);
+    expect(blocks[1].attrs!.blockId).not.toBe(original.attrs!.blockId);
+  });
+
+  it("refuses smuggled attributes in a pasted block", async () => {
+    const { editor } = await mountEditor();
+    const forged = JSON.stringify({ blockId: "forged-id-1", name: "x", solvent: "water", temperatureC: 25, model: "auto", components: [], computedIonicStrength: 99 });
+    act(() => {
+      editor.view.pasteHTML(`<div data-type="solution-block" data-block='${forged.replace(/'/g, "&#39;")}'></div>`, pasteEvent());
+    });
+    const block = editor.getJSON().content!.find((n) => n.type === "solutionBlock")!;
+    expect(block.attrs).not.toHaveProperty("computedIonicStrength");
+    // The forged inputs fail the block schema as a whole, so the pasted block starts empty.
+    expect(block.attrs!.name).toBe("");
+  });
+});
+
+describe("read-only", () => {
+  it("shows the blocks' numbers with every input disabled", async () => {
+    render(<NotebookEditor initialContent={findTemplate("cell-preparation")!.build()} editable={false} />);
+    const solution = await screen.findByRole("region", { name: /Solution block/ });
+    expect(within(solution).getByTestId("result-Ionic strength (molal)")).toHaveTextContent(/mol\/kg/);
+    for (const input of within(solution).getAllByRole("textbox")) expect(input).toBeDisabled();
+    expect(within(solution).queryByRole("button", { name: /Remove row/ })).not.toBeInTheDocument();
+    const cell = screen.getByRole("region", { name: /Cell block/ });
+    expect(within(cell).getByTestId("potential-vs-she")).toBeInTheDocument();
   });
 });
 
