@@ -5,7 +5,7 @@
  * γ± the error is a few per cent at 0.1 mol/kg and grows to about 10 % at 0.5 (see tests).
  */
 import type { ActivityModel, ActivityModelInput } from "./types";
-import { ionAssociationMessage, ionicStrengthMessage, log10ToLn, substitutedCore, waterOnlyNote } from "./dh-common";
+import { evaluateExtendedForm, ionAssociationMessage, ionicStrengthMessage, substitutedCore, waterOnlyNote } from "./dh-common";
 
 const LABEL = "Davies";
 const MAX_I = 0.5;
@@ -21,13 +21,13 @@ export const daviesModel: ActivityModel = {
   validityNote: "I ≤ 0.5 mol/kg (common practice; errors grow to about 10 % there); empirical, for water. Coefficient 0.3 (Davies 1962) or 0.2.",
   maxIonicStrengthMolal: MAX_I,
   compute(input: ActivityModelInput) {
-    const I = input.ionicStrengthMolal;
-    const sqrtI = Math.sqrt(I);
-    const A = input.constants.aLog10;
-    const bracket = sqrtI / (1 + sqrtI) - coefficient(input) * I;
-    const lnGamma = input.ions.map((ion) => log10ToLn(-A * ion.charge * ion.charge * bracket));
+    // −A z² (√I/(1+√I) − c I) is the common form with β = 1 and b = c A z².
+    const cA = coefficient(input) * input.constants.aLog10;
+    const b = input.ions.map((ion) => cA * ion.charge * ion.charge);
+    const { lnGamma, osmoticCoefficient } = evaluateExtendedForm(input, new Float64Array(b.length).fill(1), b);
     return {
       lnGamma,
+      osmoticCoefficient,
       validityMessages: [...ionicStrengthMessage(LABEL, MAX_I, input), ...ionAssociationMessage(input)],
       notes: waterOnlyNote(LABEL, "the empirical linear coefficient", input.solvent),
     };

@@ -5,7 +5,7 @@
  * Range: I ≤ 0.1 mol/kg, the range of Kielland's table. The sizes are for water.
  */
 import type { ActivityModel, ActivityModelInput } from "./types";
-import { ionAssociationMessage, ionicStrengthMessage, log10ToLn, substitutedCore, waterOnlyNote } from "./dh-common";
+import { evaluateExtendedForm, ionAssociationMessage, ionicStrengthMessage, substitutedCore, waterOnlyNote } from "./dh-common";
 import { assumedIonSize, kiellandIonSize } from "./ion-parameters";
 
 const LABEL = "Extended Debye–Hückel (Kielland ion sizes)";
@@ -18,19 +18,19 @@ export const dhExtendedModel: ActivityModel = {
   validityNote: "I ≤ 0.1 mol/kg, the range of Kielland's (1937) table; ion sizes for water.",
   maxIonicStrengthMolal: MAX_I,
   compute(input: ActivityModelInput) {
-    const sqrtI = Math.sqrt(input.ionicStrengthMolal);
-    const { aLog10: A, bPerAngstrom: B } = input.constants;
+    const B = input.constants.bPerAngstrom;
     const notes: string[] = [];
-    const lnGamma = input.ions.map((ion) => {
+    const beta = input.ions.map((ion) => {
       let a = kiellandIonSize(ion.formula);
       if (a === undefined) {
         a = assumedIonSize(ion.charge);
         notes.push(`No Kielland ion size for ${ion.formula}; å = ${a} Å assumed.`);
       }
-      return log10ToLn((-A * ion.charge * ion.charge * sqrtI) / (1 + B * a * sqrtI));
+      return B * a;
     });
+    const { lnGamma, osmoticCoefficient } = evaluateExtendedForm(input, beta, new Float64Array(beta.length));
     notes.push(...waterOnlyNote(LABEL, "Kielland's ion sizes", input.solvent));
-    return { lnGamma, validityMessages: [...ionicStrengthMessage(LABEL, MAX_I, input), ...ionAssociationMessage(input)], notes };
+    return { lnGamma, osmoticCoefficient, validityMessages: [...ionicStrengthMessage(LABEL, MAX_I, input), ...ionAssociationMessage(input)], notes };
   },
   substitutedTex(input) {
     const { A, B, sqrtI } = substitutedCore(input);

@@ -7,7 +7,7 @@
  * εr and ρ, so the law applies to any solvent.
  */
 import type { ActivityModel, ActivityModelInput } from "./types";
-import { chargeProductMagnitude, ionAssociationMessage, log10ToLn, substitutedCore, texNumber } from "./dh-common";
+import { chargeProductMagnitude, evaluateExtendedForm, ionAssociationMessage, substitutedCore, texNumber } from "./dh-common";
 
 export const DH_LIMITING_SQRT_I_MAX_1_1 = 0.1;
 
@@ -23,14 +23,14 @@ export const dhLimitingModel: ActivityModel = {
   maxIonicStrengthMolal: DH_LIMITING_SQRT_I_MAX_1_1 ** 2,
   compute(input: ActivityModelInput) {
     const sqrtI = Math.sqrt(input.ionicStrengthMolal);
-    const A = input.constants.aLog10;
-    const lnGamma = input.ions.map((ion) => log10ToLn(-A * ion.charge * ion.charge * sqrtI));
+    const zeros = new Float64Array(input.ions.length);
+    const { lnGamma, osmoticCoefficient } = evaluateExtendedForm(input, zeros, zeros);
     const product = chargeProductMagnitude(input.ions);
     const limit = limitingLawSqrtIMax(product);
     const validityMessages = sqrtI > limit
       ? [`The Debye–Hückel limiting law holds for ${product === 1 ? "1:1 electrolytes" : `charge product |z₊z₋| = ${product}`} only up to √I ≈ ${texNumber(limit)} (here √I = ${texNumber(sqrtI)}); use the extended equation, Davies or Truesdell–Jones.`]
       : [];
-    return { lnGamma, validityMessages: [...validityMessages, ...ionAssociationMessage(input)], notes: [] };
+    return { lnGamma, osmoticCoefficient, validityMessages: [...validityMessages, ...ionAssociationMessage(input)], notes: [] };
   },
   substitutedTex(input) {
     const { A, sqrtI } = substitutedCore(input);

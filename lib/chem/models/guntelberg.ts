@@ -5,7 +5,7 @@
  * mixtures where no single ion size fits. Range: I ≤ 0.1 mol/kg.
  */
 import type { ActivityModel, ActivityModelInput } from "./types";
-import { ionAssociationMessage, ionicStrengthMessage, log10ToLn, substitutedCore, waterOnlyNote } from "./dh-common";
+import { evaluateExtendedForm, ionAssociationMessage, ionicStrengthMessage, substitutedCore, waterOnlyNote } from "./dh-common";
 
 const LABEL = "Güntelberg";
 const MAX_I = 0.1;
@@ -17,11 +17,11 @@ export const guntelbergModel: ActivityModel = {
   validityNote: "I ≤ 0.1 mol/kg (Güntelberg 1926); B·å = 1 is a water value.",
   maxIonicStrengthMolal: MAX_I,
   compute(input: ActivityModelInput) {
-    const sqrtI = Math.sqrt(input.ionicStrengthMolal);
-    const A = input.constants.aLog10;
-    const lnGamma = input.ions.map((ion) => log10ToLn((-A * ion.charge * ion.charge * sqrtI) / (1 + sqrtI)));
+    const n = input.ions.length;
+    const { lnGamma, osmoticCoefficient } = evaluateExtendedForm(input, new Float64Array(n).fill(1), new Float64Array(n));
     return {
       lnGamma,
+      osmoticCoefficient,
       validityMessages: [...ionicStrengthMessage(LABEL, MAX_I, input), ...ionAssociationMessage(input)],
       notes: waterOnlyNote(LABEL, "the product B·å = 1", input.solvent),
     };

@@ -8,7 +8,7 @@
  */
 import { bDot } from "../data/ion-size-bdot";
 import type { ActivityModel, ActivityModelInput } from "./types";
-import { ionAssociationMessage, ionicStrengthMessage, log10ToLn, substitutedCore, texNumber, waterOnlyNote } from "./dh-common";
+import { evaluateExtendedForm, ionAssociationMessage, ionicStrengthMessage, substitutedCore, texNumber, waterOnlyNote } from "./dh-common";
 import { assumedIonSize, bDotIonSize, kiellandIonSize, truesdellJonesParameters } from "./ion-parameters";
 
 const LABEL = "Truesdell–Jones (b-dot)";
@@ -22,12 +22,21 @@ export interface TruesdellJonesIonParameters {
   source: "WATEQ4F" | "b-dot" | "assumed";
 }
 
+const ionCache = new Map<string, TruesdellJonesIonParameters>();
+
 export function truesdellJonesIon(formula: string, charge: number, temperatureC: number): TruesdellJonesIonParameters {
-  // WATEQ4F's b = 0 means "no b fitted": those ions take the b-dot form like untabulated ones.
-  const fitted = truesdellJonesParameters(formula);
-  if (fitted && fitted.b !== 0) return { ...fitted, source: "WATEQ4F" };
-  const size = bDotIonSize(formula) ?? kiellandIonSize(formula);
-  return { aAngstrom: size ?? assumedIonSize(charge), b: bDot(temperatureC), source: size === undefined ? "assumed" : "b-dot" };
+  let cached = ionCache.get(formula);
+  if (!cached) {
+    // WATEQ4F's b = 0 means "no b fitted": those ions take the b-dot form like untabulated ones.
+    const fitted = truesdellJonesParameters(formula);
+    if (fitted && fitted.b !== 0) cached = { ...fitted, source: "WATEQ4F" };
+    else {
+      const size = bDotIonSize(formula) ?? kiellandIonSize(formula);
+      cached = { aAngstrom: size ?? assumedIonSize(charge), b: Number.NaN, source: size === undefined ? "assumed" : "b-dot" };
+    }
+    ionCache.set(formula, cached);
+  }
+  return cached.source === "WATEQ4F" ? cached : { ...cached, b: bDot(temperatureC) };
 }
 
 export const truesdellJonesModel: ActivityModel = {
@@ -38,16 +47,20 @@ export const truesdellJonesModel: ActivityModel = {
   maxIonicStrengthMolal: MAX_I,
   compute(input: ActivityModelInput) {
     const I = input.ionicStrengthMolal;
-    const sqrtI = Math.sqrt(I);
-    const { aLog10: A, bPerAngstrom: B } = input.constants;
+    const B = input.constants.bPerAngstrom;
     const bDotIons: string[] = [];
     const assumed: string[] = [];
-    const lnGamma = input.ions.map((ion) => {
+    const n = input.ions.length;
+    const beta = new Float64Array(n);
+    const b = new Float64Array(n);
+    input.ions.forEach((ion, i) => {
       const p = truesdellJonesIon(ion.formula, ion.charge, input.temperatureC);
       if (p.source !== "WATEQ4F") bDotIons.push(ion.formula);
       if (p.source === "assumed") assumed.push(`${ion.formula} (å = ${p.aAngstrom} Å)`);
-      return log10ToLn((-A * ion.charge * ion.charge * sqrtI) / (1 + B * p.aAngstrom * sqrtI) + p.b * I);
+      beta[i] = B * p.aAngstrom;
+      b[i] = p.b;
     });
+    const { lnGamma, osmoticCoefficient } = evaluateExtendedForm(input, beta, b);
     const notes: string[] = [];
     if (bDotIons.length) notes.push(`No fitted Truesdell–Jones b for ${bDotIons.join(", ")}: b-dot form used (Ḃ = ${texNumber(bDot(input.temperatureC))} kg/mol).`);
     if (assumed.length) notes.push(`No tabulated ion size for ${assumed.join(", ")}: assumed.`);
@@ -57,7 +70,7 @@ export const truesdellJonesModel: ActivityModel = {
       validityMessages.push(`Ions without fitted b (${bDotIons.join(", ")}) use the b-dot form, tested to about I = ${BDOT_MAX_I} mol/kg.`);
     }
     validityMessages.push(...ionAssociationMessage(input));
-    return { lnGamma, validityMessages, notes };
+    return { lnGamma, osmoticCoefficient, validityMessages, notes };
   },
   substitutedTex(input) {
     const { A, B, I, sqrtI } = substitutedCore(input);

@@ -66,7 +66,11 @@ export function computeSolution(input: SolutionInput): SolutionResult {
   const salts = meanSaltResults(species, amounts.components, lnGammaByFormula);
 
   const totalMolality = neutralMolality + ions.reduce((sum, ion) => sum + ion.molality, 0);
-  const phi = output.osmoticCoefficient ?? osmoticCoefficientByGibbsDuhem(model, modelInput, output.lnGamma, neutralMolality);
+  // A model's φ covers its ions; neutral solutes (γ = 1) dilute the deviation from ideality.
+  const ionMolality = totalMolality - neutralMolality;
+  const phi = output.osmoticCoefficient === undefined
+    ? osmoticCoefficientByGibbsDuhem(model, modelInput, output.lnGamma, neutralMolality)
+    : totalMolality > 0 ? 1 + (ionMolality / totalMolality) * (output.osmoticCoefficient - 1) : 1;
   const aw = state.solvent.id === "water" ? output.waterActivity ?? waterActivityFromOsmotic(phi, totalMolality) : undefined;
 
   const messages = [...output.validityMessages];
