@@ -120,3 +120,24 @@ describe("designBuffer: errors", () => {
     expect(() => designBuffer(input)).toThrowError(expect.objectContaining({ name: "ChemInputError", field }));
   });
 });
+
+describe("designBuffer: sweep over every buffer, method and pH (no NaN, only typed errors)", () => {
+  const buffers = ["phosphate", "acetate", "citrate", "carbonate", "borate", "tris", "hepes", "mes", "mops"] as const;
+  it("every result is finite and re-speciates to its target, or is a ChemInputError", () => {
+    let designed = 0;
+    for (const buffer of buffers)
+      for (const method of ["two-forms", "titrate"] as const)
+        for (let pH = 2; pH <= 12; pH += 1)
+          for (const temperatureC of [4, 25, 37]) {
+            try {
+              const r = designBuffer({ buffer, pH, totalConcentrationMolar: 0.05, volumeMl: 250, method, temperatureC, targetIonicStrengthMolar: 0.2 });
+              for (const n of numbersIn(r)) expect(Number.isFinite(n), `${buffer} ${method} pH ${pH}`).toBe(true);
+              expect(Math.abs(r.pH - pH)).toBeLessThan(1e-6);
+              designed++;
+            } catch (e) {
+              expect(e).toMatchObject({ name: "ChemInputError" });
+            }
+          }
+    expect(designed).toBeGreaterThan(100);
+  });
+});
