@@ -170,4 +170,15 @@ describe("sanitizePastedHtml", () => {
     expect(html).toContain('data-latex="x^2"');
     expect(html).not.toMatch(/onclick|style=/);
   });
+
+  it("drops scripts with their content, unwraps unknown tags and disarms links", () => {
+    const html = sanitizePastedHtml(
+      '<div><font color="red">kept text</font><script>alert(1)</script><svg onload="alert(2)"><a href="javascript:x">s</a></svg>' +
+        '<a href=" javascript:alert(3)" onmouseover="x">link</a><a href="https://example.org">ok</a><!-- c --><img src=x onerror=alert(4)></div>',
+    );
+    expect(html).toContain("kept text");
+    expect(html).not.toMatch(/alert|script|svg|font|onmouseover|onerror|<img|<!--/);
+    expect(html).toContain("<a>link</a>");
+    expect(html).toContain('<a href="https://example.org">ok</a>');
+  });
 });
