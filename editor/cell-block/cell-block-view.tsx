@@ -1,9 +1,13 @@
 "use client";
 
 import { NodeViewWrapper, useEditorState, type ReactNodeViewProps } from "@tiptap/react";
+import { lazy, Suspense } from "react";
 import type { CellBlockInput } from "@/lib/entries/block-schemas";
-import { CellBlockPanel } from "./cell-block-panel";
+import { BlockLoading } from "../block-loading";
 import { useEntrySolutionBlocks } from "./use-entry-solution-blocks";
+
+// Fetched with the first block, like the solution panel (it needs lib/chem too).
+const CellBlockPanel = lazy(() => import("./cell-block-panel").then((m) => ({ default: m.CellBlockPanel })));
 
 /** tiptap node view of a cell block; it reads the entry's solution blocks for the electrolyte link. */
 export function CellBlockView({ node, editor, updateAttributes }: ReactNodeViewProps) {
@@ -11,7 +15,9 @@ export function CellBlockView({ node, editor, updateAttributes }: ReactNodeViewP
   const solutions = useEntrySolutionBlocks(editor);
   return (
     <NodeViewWrapper contentEditable={false}>
-      <CellBlockPanel value={node.attrs as CellBlockInput} solutions={solutions} editable={editable} onChange={(next) => updateAttributes(next)} />
+      <Suspense fallback={<BlockLoading kind="cell" />}>
+        <CellBlockPanel value={node.attrs as CellBlockInput} solutions={solutions} editable={editable} onChange={(next) => updateAttributes(next)} />
+      </Suspense>
     </NodeViewWrapper>
   );
 }

@@ -41,13 +41,13 @@ export function CellPotential({ cell, electrolyte, editable, onChange }: CellPot
       {potential.status === "ok" ? (
         <dl className="grid grid-cols-2 gap-3 sm:grid-cols-3" aria-live="polite">
           <div className="rounded-md border border-lagoon-100 bg-lagoon-50/60 px-3 py-1.5">
-            <dt className="text-[11px] font-medium uppercase tracking-wide text-ink-soft">E vs {referenceElectrodeLabel(potential.reference)}</dt>
+            <dt className="text-xs font-medium text-ink-soft">E vs {referenceElectrodeLabel(potential.reference)}</dt>
             <dd className="font-mono text-base tabular-nums text-lagoon-700" data-testid="potential-vs-reference">
               {formatPotentialV(potential.vsReference)} <span className="font-sans text-xs text-ink-soft">V</span>
             </dd>
           </div>
           <div className="rounded-md border border-lagoon-100 bg-lagoon-50/60 px-3 py-1.5">
-            <dt className="text-[11px] font-medium uppercase tracking-wide text-ink-soft">E vs SHE</dt>
+            <dt className="text-xs font-medium text-ink-soft">E vs SHE</dt>
             <dd className="font-mono text-base tabular-nums text-lagoon-700" data-testid="potential-vs-she">
               {formatPotentialV(potential.vsShe)} <span className="font-sans text-xs text-ink-soft">V</span>
             </dd>

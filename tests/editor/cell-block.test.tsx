@@ -1,10 +1,12 @@
 import { cleanup, render, screen, waitFor, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
-import { afterEach, describe, expect, it } from "vitest";
+import { afterEach, beforeAll, describe, expect, it } from "vitest";
 import { NotebookEditor } from "@/editor/notebook-editor";
 import { findTemplate } from "@/lib/entries/templates";
+import { preloadBlockPanels } from "./preload-blocks";
 
 afterEach(cleanup);
+beforeAll(preloadBlockPanels, 60000);
 
 const volts = (element: HTMLElement) => Number((element.textContent ?? "").replace("−", "-").replace(/[^\d.+-]/g, ""));
 

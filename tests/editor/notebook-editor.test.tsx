@@ -1,13 +1,15 @@
 import { act, cleanup, render, screen, waitFor, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import type { Editor, JSONContent } from "@tiptap/core";
-import { afterEach, describe, expect, it, vi } from "vitest";
+import { afterEach, beforeAll, describe, expect, it, vi } from "vitest";
 import { NotebookEditor } from "@/editor/notebook-editor";
 import { sanitizePastedHtml } from "@/editor/paste-sanitizer";
 import { describeDocumentErrors, entryDocumentSchema } from "@/lib/entries/document-schema";
 import { findTemplate } from "@/lib/entries/templates";
+import { preloadBlockPanels } from "./preload-blocks";
 
 afterEach(cleanup);
+beforeAll(preloadBlockPanels, 60000);
 
 // jsdom has no ClipboardEvent; the paste logic only passes the event on to paste hooks.
 const pasteEvent = () => new Event("paste") as ClipboardEvent;

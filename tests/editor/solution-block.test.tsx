@@ -1,13 +1,15 @@
 import { cleanup, render, screen, waitFor, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import type { Editor, JSONContent } from "@tiptap/core";
-import { afterEach, describe, expect, it, vi } from "vitest";
+import { afterEach, beforeAll, describe, expect, it, vi } from "vitest";
 import { NotebookEditor } from "@/editor/notebook-editor";
 import { defaultSolutionBlockInput } from "@/lib/entries/block-defaults";
 import { extractSolutionBlocks } from "@/lib/entries/extract-blocks";
 import { parseTypedNumber } from "@/lib/ui/format-number";
+import { preloadBlockPanels } from "./preload-blocks";
 
 afterEach(cleanup);
+beforeAll(preloadBlockPanels, 60000);
 
 const docWith = (attrs: object): JSONContent => ({
   type: "doc",
