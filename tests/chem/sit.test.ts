@@ -111,6 +111,23 @@ describe("SIT internals", () => {
     expect(Math.abs(lhs - rhs)).toBeLessThan(1e-7);
   });
 
+  it("outside 0–50 °C and above I = 3.5 mol/kg the result says so (NEA-TDB range)", () => {
+    const run = (t: number, m: number) =>
+      computeSit({
+        ions: [
+          { formula: "Na+", charge: 1, molality: m },
+          { formula: "Cl-", charge: -1, molality: m },
+        ],
+        ionicStrengthMolal: m,
+        temperatureC: t,
+        solvent: "water",
+        constants: C25,
+      }).validityMessages.join(" ");
+    expect(run(25, 1)).toBe("");
+    expect(run(70, 1)).toMatch(/25 °C/);
+    expect(run(25, 5)).toMatch(/above the SIT range/);
+  });
+
   it("coverage: NaCl is covered; Na+ with HEPES- is not, and says why", () => {
     expect(sitCoverage([{ formula: "Na+", charge: 1, molality: 1 }, { formula: "Cl-", charge: -1, molality: 1 }], 25, 1).covered).toBe(true);
     const c = sitCoverage([{ formula: "Na+", charge: 1, molality: 0.1 }, { formula: "HEPES-", charge: -1, molality: 0.1 }], 25, 0.1);
