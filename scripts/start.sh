@@ -31,7 +31,7 @@ PGDATA_DIR="$(pick_pg_data_dir "$STATE/postgres" "ionleaf-$(printf %s "$ROOT_DIR
 
 APP_PID=""; CATCHER_PID=""
 cleanup() {
-  trap - EXIT INT TERM
+  trap "" INT TERM; trap - EXIT
   set +e
   say "Shutting down"
   [ -n "$APP_PID" ] && kill "$APP_PID" 2>/dev/null && wait "$APP_PID" 2>/dev/null
@@ -57,7 +57,7 @@ export NEXT_TELEMETRY_DISABLED=1
 say "Applying migrations"
 node_modules/.bin/tsx scripts/migrate.ts
 say "Seeding the demo scenario (once)"
-node_modules/.bin/tsx --conditions=react-server scripts/seed.ts
+node_modules/.bin/tsx --tsconfig tsconfig.scripts.json scripts/seed.ts
 
 say "Starting the mail catcher (SMTP 127.0.0.1:$SMTP_PORT)"
 node_modules/.bin/tsx scripts/mail-catcher.ts --smtp-port "$SMTP_PORT" --http-port "$MAIL_HTTP_PORT" \

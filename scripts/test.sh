@@ -27,7 +27,7 @@ APP_PORT="$(free_port 3100)"
 APP_PID=""; CATCHER_PID=""
 cleanup() {
   local status=$?
-  trap - EXIT INT TERM
+  trap "" INT TERM; trap - EXIT
   set +e
   [ -n "$APP_PID" ] && kill "$APP_PID" 2>/dev/null && wait "$APP_PID" 2>/dev/null
   [ -n "$CATCHER_PID" ] && kill "$CATCHER_PID" 2>/dev/null && wait "$CATCHER_PID" 2>/dev/null
@@ -67,7 +67,7 @@ E2E_STATUS=0
 if [ "$RUN_E2E" = 1 ]; then
   say "Production build for the end-to-end tests"
   if node node_modules/next/dist/bin/next build >"$WORK/build.log" 2>&1; then
-    node_modules/.bin/tsx --conditions=react-server scripts/reset-and-seed.ts
+    node_modules/.bin/tsx --tsconfig tsconfig.scripts.json scripts/reset-and-seed.ts
     NODE_ENV=production node node_modules/next/dist/bin/next start -p "$APP_PORT" >"$WORK/app.log" 2>&1 &
     APP_PID=$!
     if wait_for_http "http://localhost:$APP_PORT/api/health" 90; then

@@ -5,16 +5,9 @@ import type { Role } from "@/db/schema/enums";
 import { auth } from "@/lib/auth";
 import { AppError } from "@/lib/errors";
 import { getDb } from "@/lib/server/database";
-import { roleCan, type Permission } from "./policy";
+import type { Actor } from "./authorize";
 
-/** The signed-in member as every server-side decision sees them, reloaded from the database. */
-export interface Actor {
-  userId: string;
-  labId: string;
-  role: Role;
-  name: string;
-  email: string;
-}
+export { assertCan, assertSameLab, type Actor } from "./authorize";
 
 /** Resolves a session user id to an Actor; null when the member is unknown or deactivated. */
 export async function actorForUserId(userId: string): Promise<Actor | null> {
@@ -34,15 +27,4 @@ export async function requireActor(): Promise<Actor> {
   const actor = await getActor();
   if (!actor) throw new AppError("unauthenticated", "Please sign in again.");
   return actor;
-}
-
-export function assertCan(actor: Actor, permission: Permission): void {
-  if (!roleCan(actor.role, permission)) {
-    throw new AppError("forbidden", "Your role in this lab does not allow that.");
-  }
-}
-
-/** Lab data belongs to one lab: anything else is reported as not found, not as forbidden. */
-export function assertSameLab(actor: Actor, labId: string | null | undefined): void {
-  if (!labId || labId !== actor.labId) throw new AppError("not_found", "Not found.");
 }

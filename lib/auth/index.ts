@@ -11,6 +11,13 @@ export class ThrottledSignIn extends CredentialsSignin {
 
 export const { handlers, auth, signIn, signOut } = NextAuth({
   ...authConfig,
+  logger: {
+    // A wrong password is an expected event, not a server error worth a stack trace.
+    error(error) {
+      if (error.name === "CredentialsSignin" || (error as { type?: string }).type === "CredentialsSignin") return;
+      console.error("[auth]", error);
+    },
+  },
   providers: [
     Credentials({
       credentials: { email: { label: "E-mail", type: "email" }, password: { label: "Password", type: "password" } },

@@ -4,7 +4,7 @@ import { findInvitationByTokenHash, insertInvitation, markInvitationAccepted, re
 import { findLabById } from "@/db/queries/labs";
 import { findUserByEmail, insertUser } from "@/db/queries/users";
 import type { Role } from "@/db/schema/enums";
-import { assertCan, type Actor } from "@/lib/access/actor";
+import { assertCan, type Actor } from "@/lib/access/authorize";
 import { hashPassword } from "@/lib/auth/password";
 import { getEnv } from "@/lib/env";
 import { AppError } from "@/lib/errors";

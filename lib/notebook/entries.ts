@@ -5,7 +5,7 @@ import {
 } from "@/db/queries/entries";
 import { findLabProject } from "@/db/queries/projects";
 import type { EntryStatus } from "@/db/schema/enums";
-import { assertCan, type Actor } from "@/lib/access/actor";
+import { assertCan, type Actor } from "@/lib/access/authorize";
 import { canonicalHash } from "@/lib/entries/canonical-hash";
 import { findTemplate } from "@/lib/entries/templates";
 import { AppError } from "@/lib/errors";

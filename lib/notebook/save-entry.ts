@@ -1,7 +1,7 @@
 import "server-only";
 import { insertAuditEvent } from "@/db/queries/audit";
 import { findLabEntry, findRevision, insertRevision, updateEntry } from "@/db/queries/entries";
-import { assertCan, type Actor } from "@/lib/access/actor";
+import { assertCan, type Actor } from "@/lib/access/authorize";
 import { canonicalHash } from "@/lib/entries/canonical-hash";
 import { describeDocumentErrors, entryDocumentSchema } from "@/lib/entries/document-schema";
 import { AppError } from "@/lib/errors";
