@@ -4,7 +4,7 @@
  * Their maximum molality is the top of the fitted range, as published.
  * Columns: salt, cation, anion, β0, β1, β2, α1, α2, Cφ (kg/mol units of the Pitzer equations,
  * 25 °C), maximum molality of the fit (mol/kg), where that limit comes from, source.
- * Transcribed from the publication's table; the test suite checks γ± computed from these
+ * Copied from the publication's table; the test suite checks γ± computed from these
  * rows against tabulated γ± (Robinson & Stokes 1959; CRC Handbook / Hamer & Wu 1972).
  */
 import { binaryRow as r, type PitzerBinaryRow } from "./binary-row";

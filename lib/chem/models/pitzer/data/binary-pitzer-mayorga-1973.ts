@@ -2,17 +2,17 @@
  * Pitzer binary parameters of Pitzer & Mayorga (1973), J. Phys. Chem. 77, 2300–2308,
  * doi:10.1021/j100638a009 (Tables I–IX; 2:1, 3:1, 4:1 and 5:1 values converted from the
  * scaled form in which the paper prints them). Only the ion pairs that neither May et al.
- * (2011) nor HMW84 cover are kept here. The paper's own max-m column is not transcribed,
+ * (2011) nor HMW84 cover are kept here. The paper's own max-m column is not copied here,
  * so Ionleaf applies a conservative 1 mol/kg limit and says so.
  * Columns: salt, cation, anion, β0, β1, β2, α1, α2, Cφ (kg/mol units of the Pitzer equations,
  * 25 °C), maximum molality of the fit (mol/kg), where that limit comes from, source.
- * Transcribed from the publication's table; the test suite checks γ± computed from these
+ * Copied from the publication's table; the test suite checks γ± computed from these
  * rows against tabulated γ± (Robinson & Stokes 1959; CRC Handbook / Hamer & Wu 1972).
  */
 import { binaryRow as r, type PitzerBinaryRow } from "./binary-row";
 
 const PM73 = "Pitzer & Mayorga (1973) J. Phys. Chem. 77, 2300-2308";
-const LIMIT = "Ionleaf conservative limit: PM73 max m not transcribed";
+const LIMIT = "Ionleaf conservative limit: PM73 max m not copied here";
 
 export const PITZER_MAYORGA_1973_BINARY: readonly PitzerBinaryRow[] = [
   r("NaClO3", "Na+", "ClO3-", 0.0249, 0.2455, 0, 2, 12, 0.0004, 1, LIMIT, `${PM73}, Table I`),
