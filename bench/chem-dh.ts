@@ -46,17 +46,18 @@ export interface DhBenchReport {
 }
 
 export function runDhBench(batches = 40, callsPerBatch = 250): DhBenchReport {
-  const perModelMedianMicroseconds: Record<string, number> = {};
-  for (const model of MODELS) {
-    for (let k = 0; k < 2000; k++) computeSolution(solutionFor(model, k)); // warm-up (JIT)
-    const batchMicroseconds: number[] = [];
-    for (let b = 0; b < batches; b++) {
+  // Warm every model first, then interleave the batches so that load from other processes
+  // on this shared machine falls on all models alike.
+  for (let k = 0; k < 3000; k++) computeSolution(solutionFor(MODELS[k % MODELS.length], k));
+  const samples: Record<string, number[]> = Object.fromEntries(MODELS.map((m) => [m, []]));
+  for (let b = 0; b < batches; b++) {
+    for (const model of MODELS) {
       const start = performance.now();
       for (let k = 0; k < callsPerBatch; k++) computeSolution(solutionFor(model, b * callsPerBatch + k));
-      batchMicroseconds.push(((performance.now() - start) * 1000) / callsPerBatch);
+      samples[model].push(((performance.now() - start) * 1000) / callsPerBatch);
     }
-    perModelMedianMicroseconds[model] = median(batchMicroseconds);
   }
+  const perModelMedianMicroseconds = Object.fromEntries(MODELS.map((m) => [m, median(samples[m])]));
 
   // A collection before each reading, so the figure is what stays allocated (caches, leaks).
   v8.setFlagsFromString("--expose-gc");

@@ -24,7 +24,8 @@ export interface TruesdellJonesIonParameters {
 
 const ionCache = new Map<string, TruesdellJonesIonParameters>();
 
-export function truesdellJonesIon(formula: string, charge: number, temperatureC: number): TruesdellJonesIonParameters {
+/** Ion size and source, cached by formula; `b` is NaN for b-dot ions (it depends on T). */
+function truesdellJonesIonStatic(formula: string, charge: number): TruesdellJonesIonParameters {
   let cached = ionCache.get(formula);
   if (!cached) {
     // WATEQ4F's b = 0 means "no b fitted": those ions take the b-dot form like untabulated ones.
@@ -36,7 +37,12 @@ export function truesdellJonesIon(formula: string, charge: number, temperatureC:
     }
     ionCache.set(formula, cached);
   }
-  return cached.source === "WATEQ4F" ? cached : { ...cached, b: bDot(temperatureC) };
+  return cached;
+}
+
+export function truesdellJonesIon(formula: string, charge: number, temperatureC: number): TruesdellJonesIonParameters {
+  const p = truesdellJonesIonStatic(formula, charge);
+  return p.source === "WATEQ4F" ? p : { ...p, b: bDot(temperatureC) };
 }
 
 export const truesdellJonesModel: ActivityModel = {
@@ -53,16 +59,18 @@ export const truesdellJonesModel: ActivityModel = {
     const n = input.ions.length;
     const beta = new Float64Array(n);
     const b = new Float64Array(n);
-    input.ions.forEach((ion, i) => {
-      const p = truesdellJonesIon(ion.formula, ion.charge, input.temperatureC);
+    const bDotHere = bDot(input.temperatureC);
+    for (let i = 0; i < n; i++) {
+      const ion = input.ions[i];
+      const p = truesdellJonesIonStatic(ion.formula, ion.charge);
       if (p.source !== "WATEQ4F") bDotIons.push(ion.formula);
       if (p.source === "assumed") assumed.push(`${ion.formula} (å = ${p.aAngstrom} Å)`);
       beta[i] = B * p.aAngstrom;
-      b[i] = p.b;
-    });
+      b[i] = p.source === "WATEQ4F" ? p.b : bDotHere;
+    }
     const { lnGamma, osmoticCoefficient } = evaluateExtendedForm(input, beta, b);
     const notes: string[] = [];
-    if (bDotIons.length) notes.push(`No fitted Truesdell–Jones b for ${bDotIons.join(", ")}: b-dot form used (Ḃ = ${texNumber(bDot(input.temperatureC))} kg/mol).`);
+    if (bDotIons.length) notes.push(`No fitted Truesdell–Jones b for ${bDotIons.join(", ")}: b-dot form used (Ḃ = ${texNumber(bDotHere)} kg/mol).`);
     if (assumed.length) notes.push(`No tabulated ion size for ${assumed.join(", ")}: assumed.`);
     notes.push(...waterOnlyNote(LABEL, "the å and b parameters", input.solvent));
     const validityMessages = ionicStrengthMessage(LABEL, MAX_I, input);

@@ -48,7 +48,9 @@ export function computeSolution(input: SolutionInput): SolutionResult {
   const context = { ions: modelIons, ionicStrengthMolal: I.molal, temperatureC, solvent: state.solvent.id };
   const choice = requested === "auto" ? chooseModel(context) : null;
   const model = getModel(choice ? choice.id : requested);
-  const modelInput: ActivityModelInput = { ...context, constants, options: input.modelOptions };
+  const modelInput: ActivityModelInput = {
+    ions: modelIons, ionicStrengthMolal: I.molal, temperatureC, solvent: state.solvent.id, constants, options: input.modelOptions,
+  };
   const output = model.compute(modelInput);
 
   const ionResults: IonResult[] = ions.map((ion, i) => {
@@ -75,9 +77,15 @@ export function computeSolution(input: SolutionInput): SolutionResult {
 
   const messages = [...output.validityMessages];
   if (choice && !choice.covered) messages.unshift(`No model covers this composition: ${choice.reason}.`);
-  const warnings = [...species.flatMap((s) => s.warnings), ...amounts.warnings, ...state.notes];
+  const warnings: string[] = [];
+  const notes: string[] = [];
+  for (const s of species) {
+    for (const w of s.warnings) warnings.push(w);
+    for (const n of s.notes) if (!notes.includes(n)) notes.push(n);
+  }
+  for (const n of output.notes) if (!notes.includes(n)) notes.push(n);
+  warnings.push(...amounts.warnings, ...state.notes);
   if (balance.warning) warnings.push(balance.warning);
-  const notes = [...new Set([...species.flatMap((s) => s.notes), ...output.notes])];
 
   return {
     temperatureC,
