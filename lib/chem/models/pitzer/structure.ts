@@ -1,0 +1,140 @@
+/**
+ * The part of a Pitzer system that depends only on which ions are present and on the
+ * temperature: the chosen parameter rows, their temperature correction, θ and ψ. Cached per
+ * ion set and temperature, because the editor re-evaluates the same solution on every keystroke.
+ */
+import type { ModelIon } from "../types";
+import type { PitzerBinaryRow } from "./data/binary-row";
+import type { PitzerBinaryTerms } from "./equations";
+import { ionKey } from "./ion-key";
+import { binaryParameters, psiParameter, temperatureDerivatives, thetaParameter } from "./parameter-tables";
+
+const REFERENCE_TEMPERATURE_C = 25;
+/** Within this many kelvin of 25 °C no correction is applied (common practice, no source). */
+const TEMPERATURE_TOLERANCE_K = 0.5;
+/**
+ * First-order derivative corrections hold within about ±15 K of 25 °C: measured against
+ * Pitzer, Peiper & Busey (1984) NaCl, γ± stays within 2 % at 10–40 °C but errs by up to 5 %
+ * at 0 °C and 3–5 mol/kg, where the curvature of β0(T) matters (tests/chem/pitzer-temperature).
+ */
+const DERIVATIVE_SPAN_K = 15;
+
+/** Ionic strength of a pure salt of these charges at molality m: ½ m (ν+ z+² + ν− z−²). */
+export function saltIonicStrength(zc: number, za: number, molality: number): number {
+  const a = Math.abs(zc);
+  const b = Math.abs(za);
+  const g = gcd(a, b);
+  const nuC = b / g;
+  const nuA = a / g;
+  return 0.5 * molality * (nuC * a * a + nuA * b * b);
+}
+
+function gcd(a: number, b: number): number {
+  return b === 0 ? a : gcd(b, a % b);
+}
+
+export function fmt(x: number, digits = 3): string {
+  return Number(x.toPrecision(digits)).toString();
+}
+
+/** Everything about a pair that does not depend on the molalities (cached per ion set and T). */
+export interface PairStructure {
+  row: PitzerBinaryRow;
+  terms: PitzerBinaryTerms;
+  maxI: number;
+  derivativeMaxI: number | null;
+  /** Temperature messages that hold whatever the composition. */
+  temperatureMessages: string[];
+  temperatureNote: string | null;
+}
+
+export interface Structure {
+  cations: { key: string; charge: number }[];
+  anions: { key: string; charge: number }[];
+  cationIndexOf: number[];
+  anionIndexOf: number[];
+  pairs: (PairStructure | null)[][];
+  thetaCations: number[][];
+  thetaAnions: number[][];
+  psiCations: number[][][];
+  psiAnions: number[][][];
+  thetaMissing: { cations: boolean[][]; anions: boolean[][] };
+}
+
+const structureCache = new Map<string, Structure>();
+const CACHE_LIMIT = 64;
+
+function pairStructure(c: { key: string; charge: number }, a: { key: string; charge: number }, temperatureC: number): PairStructure | null {
+  const row = binaryParameters(c.key, a.key);
+  if (!row) return null;
+  const dT = temperatureC - REFERENCE_TEMPERATURE_C;
+  const terms: PitzerBinaryTerms = { ...row };
+  const temperatureMessages: string[] = [];
+  let temperatureNote: string | null = null;
+  let derivativeMaxI: number | null = null;
+  if (Math.abs(dT) >= TEMPERATURE_TOLERANCE_K) {
+    const d = temperatureDerivatives(c.key, a.key);
+    if (!d) {
+      temperatureMessages.push(`Pitzer parameters for ${row.salt} exist at 25 °C only; the result at ${fmt(temperatureC)} °C uses them unchanged.`);
+    } else {
+      terms.beta0 += d.dBeta0 * dT;
+      terms.beta1 += d.dBeta1 * dT;
+      terms.beta2 += d.dBeta2 * dT;
+      terms.cPhi += d.dCPhi * dT;
+      temperatureNote = `${row.salt}: β and Cφ moved from 25 °C with the ∂P/∂T of ${d.source}.`;
+      derivativeMaxI = saltIonicStrength(c.charge, a.charge, d.maxMolality);
+      if (Math.abs(dT) > DERIVATIVE_SPAN_K) {
+        temperatureMessages.push(`${row.salt}: the first-order temperature correction from 25 °C holds for about 10–40 °C; ${fmt(temperatureC)} °C is outside it.`);
+      }
+    }
+  }
+  const maxI = row.maxIonicStrengthMolal ?? saltIonicStrength(c.charge, a.charge, row.maxMolality);
+  return { row, terms, maxI, derivativeMaxI, temperatureMessages, temperatureNote };
+}
+
+function mixingTerms(list: { key: string }[], others: { key: string }[]) {
+  const theta = list.map(() => new Array<number>(list.length).fill(0));
+  const missing = list.map(() => new Array<boolean>(list.length).fill(false));
+  const psi = list.map(() => list.map(() => new Array<number>(others.length).fill(0)));
+  for (let i = 0; i < list.length; i++)
+    for (let j = i + 1; j < list.length; j++) {
+      const t = thetaParameter(list[i].key, list[j].key);
+      if (t) theta[i][j] = t.value;
+      else missing[i][j] = true;
+      for (let k = 0; k < others.length; k++) psi[i][j][k] = psiParameter(list[i].key, list[j].key, others[k].key)?.value ?? 0;
+    }
+  return { theta, psi, missing };
+}
+
+export function structureFor(ions: readonly ModelIon[], temperatureC: number): Structure {
+  const cacheKey = ions.map((i) => `${i.formula}|${i.charge}`).join(";") + `@${temperatureC}`;
+  const hit = structureCache.get(cacheKey);
+  if (hit) return hit;
+  const cations: Structure["cations"] = [];
+  const anions: Structure["anions"] = [];
+  const cationIndexOf: number[] = [];
+  const anionIndexOf: number[] = [];
+  for (const ion of ions) {
+    const entry = { key: ionKey(ion.formula, ion.charge), charge: ion.charge };
+    cationIndexOf.push(ion.charge > 0 ? cations.push(entry) - 1 : -1);
+    anionIndexOf.push(ion.charge < 0 ? anions.push(entry) - 1 : -1);
+  }
+  const mc = mixingTerms(cations, anions);
+  const ma = mixingTerms(anions, cations);
+  const structure: Structure = {
+    cations,
+    anions,
+    cationIndexOf,
+    anionIndexOf,
+    pairs: cations.map((c) => anions.map((a) => pairStructure(c, a, temperatureC))),
+    thetaCations: mc.theta,
+    thetaAnions: ma.theta,
+    psiCations: mc.psi,
+    psiAnions: ma.psi,
+    thetaMissing: { cations: mc.missing, anions: ma.missing },
+  };
+  if (structureCache.size >= CACHE_LIMIT) structureCache.clear();
+  structureCache.set(cacheKey, structure);
+  return structure;
+}
+
