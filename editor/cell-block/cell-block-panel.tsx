@@ -44,12 +44,12 @@ export function CellBlockPanel({ value, onChange, solutions, editable = true }: 
           ⠿
         </span>
         <span className="rounded bg-copper-600 px-1.5 py-0.5 text-[10px] font-semibold uppercase tracking-wider text-white">Cell</span>
-        <TextField label="Cell name" hideLabel className="flex-1" placeholder="Name, e.g. Cell 1" value={value.name} disabled={!editable} onValueChange={(name) => patch({ name })} />
+        <TextField label="Cell name" hideLabel maxLength={120} className="flex-1" placeholder="Name, e.g. Cell 1" value={value.name} disabled={!editable} onValueChange={(name) => patch({ name })} />
       </header>
       <div className="space-y-4 px-3 py-3">
         <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
-          <TextField label="Cell type" className="col-span-2" value={value.cellType} disabled={!editable} onValueChange={(cellType) => patch({ cellType })} />
-          <NumberField label="Temperature" unit="°C" value={value.temperatureC} disabled={!editable} onValueChange={(temperatureC) => patch({ temperatureC })} />
+          <TextField label="Cell type" className="col-span-2" maxLength={80} value={value.cellType} disabled={!editable} onValueChange={(cellType) => patch({ cellType })} />
+          <NumberField label="Temperature" unit="°C" bounds={{ min: -273.15, max: 1000 }} value={value.temperatureC} disabled={!editable} onValueChange={(temperatureC) => patch({ temperatureC })} />
           <SelectField
             label="Electrolyte"
             value={value.electrolyteBlockId ?? ""}
@@ -73,8 +73,8 @@ export function CellBlockPanel({ value, onChange, solutions, editable = true }: 
             error={value.purgeMinutes !== null && value.purgeMinutes < 0 ? "A purge time cannot be negative." : undefined}
             onValueChange={(purgeMinutes) => patch({ purgeMinutes })}
           />
-          <TextField label="Instrument" value={value.instrument} placeholder="potentiostat model and serial" disabled={!editable} onValueChange={(instrument) => patch({ instrument })} />
-          <TextField label="Channel" value={value.channel} placeholder="e.g. 2" disabled={!editable} onValueChange={(channel) => patch({ channel })} />
+          <TextField label="Instrument" maxLength={120} value={value.instrument} placeholder="potentiostat model and serial" disabled={!editable} onValueChange={(instrument) => patch({ instrument })} />
+          <TextField label="Channel" maxLength={40} value={value.channel} placeholder="e.g. 2" disabled={!editable} onValueChange={(channel) => patch({ channel })} />
         </div>
         <div className="grid gap-3 md:grid-cols-3">
           <ElectrodeFieldset legend="Working electrode" value={value.workingElectrode} editable={editable} materialPlaceholder="e.g. glassy carbon disc, 3 mm" onChange={electrode("workingElectrode")} />

@@ -27,7 +27,7 @@ export function ElectrodeFieldset({ legend, value, editable, onChange, materialP
       <legend className="px-1 text-xs font-semibold text-ink">{legend}</legend>
       <div className="space-y-2">
         {children}
-        <TextField label="Material" value={value.material} placeholder={materialPlaceholder} disabled={!editable} onValueChange={(material) => onChange({ material })} />
+        <TextField label="Material" maxLength={80} value={value.material} placeholder={materialPlaceholder} disabled={!editable} onValueChange={(material) => onChange({ material })} />
         {showArea ? (
           <NumberField label="Geometric area" unit="cm²" value={value.areaCm2} disabled={!editable} onValueChange={(areaCm2) => onChange({ areaCm2 })} error={value.areaCm2 !== null && value.areaCm2 <= 0 ? "An area is greater than zero." : undefined} />
         ) : null}

@@ -13,6 +13,9 @@ interface ComponentsTableProps {
   onChange: (components: SolutionComponentInput[]) => void;
 }
 
+/** The document schema's limit on rows per block. */
+const MAX_ROWS = 40;
+
 const emptyRow = (): SolutionComponentInput => ({ formula: "", amount: null, unit: "mol/kg" });
 
 /**
@@ -37,6 +40,7 @@ export function ComponentsTable({ components, errors, editable, onChange }: Comp
   const update = (index: number, patch: Partial<SolutionComponentInput>) =>
     onChange(components.map((row, i) => (i === index ? { ...row, ...patch } : row)));
   const addRow = () => {
+    if (components.length >= MAX_ROWS) return;
     // A new row copies the unit above it: stocks are usually written in one unit.
     const last = components[components.length - 1];
     onChange([...components, { ...emptyRow(), unit: last?.unit ?? "mol/kg", perAmount: last?.perAmount, perUnit: last?.perUnit }]);
@@ -93,7 +97,7 @@ export function ComponentsTable({ components, errors, editable, onChange }: Comp
         </tbody>
       </table>
       {editable ? (
-        <button type="button" className={`${actionButtonClass} mt-1`} onClick={addRow}>
+        <button type="button" className={`${actionButtonClass} mt-1`} onClick={addRow} disabled={components.length >= MAX_ROWS}>
           <span aria-hidden>+</span> Add component
         </button>
       ) : null}

@@ -42,6 +42,7 @@ export function SolutionBlockPanel({ value, onChange, editable = true }: Solutio
         <TextField
           label="Solution name"
           hideLabel
+          maxLength={120}
           className="flex-1"
           placeholder="Name, e.g. Supporting electrolyte A"
           value={value.name}

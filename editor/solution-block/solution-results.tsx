@@ -5,6 +5,7 @@ import { actionButtonClass } from "../ui/field-styles";
 import { SafetyCaution } from "../ui/safety-caution";
 import { hazardNotesFor } from "../chem-catalogue";
 import type { SolutionEvaluation } from "@/lib/entries/evaluate-solution-block";
+import { describeField } from "./describe-field";
 import { FormulaApplied } from "./formula-applied";
 import { IonTable, SaltList } from "./ion-table";
 import { MessagesList } from "./messages-list";
@@ -32,7 +33,7 @@ export function SolutionResults({ evaluation, formulas }: SolutionResultsProps) 
     <div className="space-y-3" aria-live="polite">
       {evaluation.status === "error" ? (
         <p role="status" className="rounded-md border border-red-300 bg-red-50 px-3 py-2 text-sm text-red-900">
-          {evaluation.field ? "Results paused: fix the marked field." : evaluation.message}
+          {evaluation.field ? `Results paused until ${describeField(evaluation.field)} is corrected (marked above).` : evaluation.message}
         </p>
       ) : (
         <>

@@ -30,6 +30,7 @@ export function SolutionSettings({ value, errors, editable, onChange }: Solution
       <NumberField
         label="Temperature"
         unit="°C"
+        bounds={{ min: -273.15, max: 1000 }}
         value={value.temperatureC}
         disabled={!editable}
         error={errors.get("temperatureC")}
@@ -39,6 +40,7 @@ export function SolutionSettings({ value, errors, editable, onChange }: Solution
         label="Density (optional)"
         unit="g/mL"
         placeholder="estimated"
+        bounds={{ min: -100, max: 100 }}
         value={value.densityGPerMl ?? null}
         disabled={!editable}
         error={errors.get("densityGPerMl")}

@@ -73,6 +73,7 @@ export function SpeciesCombobox({ value, onValueChange, label, error, disabled, 
         aria-describedby={shownError ? `${id}-error` : undefined}
         autoComplete="off"
         spellCheck={false}
+        maxLength={80}
         placeholder="e.g. KCl or potassium chloride"
         disabled={disabled}
         value={value}

@@ -16,13 +16,17 @@ interface NumberFieldProps extends NativeProps {
   hideLabel?: boolean;
   unit?: string;
   error?: string;
+  /** What the document schema accepts; a value outside is kept as text and marked, not saved. */
+  bounds?: { min: number; max: number };
 }
+
+const DEFAULT_BOUNDS = { min: -1e9, max: 1e9 };
 
 /**
  * A number input that keeps what the person is typing ("0.", "1e-") as text and passes on a
  * number only when the text reads as one. Text that does not parse is kept and marked.
  */
-export function NumberField({ value, onValueChange, label, hideLabel, unit, error, className, ...rest }: NumberFieldProps) {
+export function NumberField({ value, onValueChange, label, hideLabel, unit, error, className, bounds = DEFAULT_BOUNDS, ...rest }: NumberFieldProps) {
   const id = useId();
   const [text, setText] = useState(() => (value === null || value === undefined ? "" : String(value)));
   // Follow outside changes (undo, a template) without fighting the person typing: the
@@ -30,8 +34,10 @@ export function NumberField({ value, onValueChange, label, hideLabel, unit, erro
   useEffect(() => {
     if (parseTypedNumber(text) !== (value ?? null)) setText(value === null || value === undefined ? "" : String(value));
   }, [value]);
-  const unparsable = text.trim() !== "" && parseTypedNumber(text) === null;
-  const message = unparsable ? "Not a number." : error;
+  const typed = parseTypedNumber(text);
+  const unparsable = text.trim() !== "" && typed === null;
+  const outOfBounds = typed !== null && (typed < bounds.min || typed > bounds.max);
+  const message = unparsable ? "Not a number." : outOfBounds ? `Out of the range this field takes (${bounds.min} to ${bounds.max}).` : error;
   return (
     <div className={className}>
       <label htmlFor={id} className={hideLabel ? "sr-only" : "mb-0.5 block text-[11px] font-medium uppercase tracking-wide text-ink-soft"}>
@@ -52,7 +58,8 @@ export function NumberField({ value, onValueChange, label, hideLabel, unit, erro
           onChange={(event) => {
             setText(event.target.value);
             const parsed = parseTypedNumber(event.target.value);
-            if (parsed !== null || event.target.value.trim() === "") onValueChange(parsed);
+            const inBounds = parsed !== null && parsed >= bounds.min && parsed <= bounds.max;
+            if (inBounds || event.target.value.trim() === "") onValueChange(parsed);
           }}
           {...rest}
         />

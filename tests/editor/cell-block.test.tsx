@@ -24,7 +24,7 @@ function shownActivity(row: HTMLElement): number {
 describe("cell block", () => {
   it("shows the couple's equilibrium potential at the linked solution's activities, vs the reference and vs SHE", async () => {
     render(<NotebookEditor initialContent={findTemplate("cell-preparation")!.build()} />);
-    const cell = await screen.findByRole("region", { name: "Cell block Cell 1" });
+    const cell = await screen.findByRole("region", { name: "Cell block Cell 1" }, { timeout: 10000 });
     const solution = screen.getByRole("region", { name: "Solution block Supporting electrolyte A" });
     expect(within(cell).getByRole("combobox", { name: "Electrolyte" })).toHaveDisplayValue("Supporting electrolyte A");
 
@@ -45,7 +45,7 @@ describe("cell block", () => {
   it("follows a change of reference electrode and says when the electrolyte link is missing", async () => {
     const user = userEvent.setup();
     render(<NotebookEditor initialContent={findTemplate("cell-preparation")!.build()} />);
-    const cell = await screen.findByRole("region", { name: "Cell block Cell 1" });
+    const cell = await screen.findByRole("region", { name: "Cell block Cell 1" }, { timeout: 10000 });
     const vsShe = volts(await within(cell).findByTestId("potential-vs-she"));
     await user.selectOptions(within(cell).getByRole("combobox", { name: "Type" }), "SCE");
     // SCE is +0.2412 V vs SHE at 25 °C (Bard & Faulkner, 2nd ed.).

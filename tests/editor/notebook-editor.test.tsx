@@ -153,7 +153,7 @@ describe("copy and paste of live blocks", () => {
 describe("read-only", () => {
   it("shows the blocks' numbers with every input disabled", async () => {
     render(<NotebookEditor initialContent={findTemplate("cell-preparation")!.build()} editable={false} />);
-    const solution = await screen.findByRole("region", { name: /Solution block/ });
+    const solution = await screen.findByRole("region", { name: /Solution block/ }, { timeout: 10000 });
     expect(within(solution).getByTestId("result-Ionic strength (molal)")).toHaveTextContent(/mol\/kg/);
     for (const input of within(solution).getAllByRole("textbox")) expect(input).toBeDisabled();
     expect(within(solution).queryByRole("button", { name: /Remove row/ })).not.toBeInTheDocument();

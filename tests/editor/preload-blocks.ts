@@ -1,3 +1,9 @@
+import { configure } from "@testing-library/react";
+
+// The machine these run on is shared: give findBy/waitFor room beyond the 1 s default, so a
+// busy moment is not mistaken for a broken editor. A real failure still fails, later.
+configure({ asyncUtilTimeout: 5000 });
+
 /**
  * The block panels are lazy chunks in the app. Tests import them once up front so the
  * first `findBy…` does not spend its whole timeout transforming lib/chem.
