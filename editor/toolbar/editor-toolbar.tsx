@@ -2,6 +2,7 @@
 
 import type { Editor } from "@tiptap/core";
 import { useEditorState } from "@tiptap/react";
+import type { KeyboardEvent } from "react";
 import { ToolbarButton, ToolbarDivider } from "./toolbar-button";
 
 export type ToolbarPrompt = { kind: "link" } | { kind: "math"; display: boolean; latex: string; pos?: number };
@@ -32,7 +33,7 @@ export function EditorToolbar({ editor, onPrompt }: EditorToolbarProps) {
   });
   const chain = () => editor.chain().focus();
   return (
-    <div role="toolbar" aria-label="Entry formatting" className="flex flex-wrap items-center gap-0.5 border-b border-ink-faint/30 bg-paper px-2 py-1">
+    <div role="toolbar" aria-label="Entry formatting" onKeyDown={moveFocusWithArrows} className="flex flex-wrap items-center gap-0.5 border-b border-ink-faint/30 bg-paper px-2 py-1">
       {([1, 2, 3] as const).map((level) => (
         <ToolbarButton key={level} label={`Heading ${level}`} shortcut={`Ctrl+Alt+${level}`} active={state[`h${level}`]} onClick={() => chain().toggleHeading({ level }).run()}>
           H{level}
@@ -86,4 +87,20 @@ export function EditorToolbar({ editor, onPrompt }: EditorToolbarProps) {
       </ToolbarButton>
     </div>
   );
+}
+
+/** Arrow keys, Home and End move between the toolbar's buttons (ARIA toolbar pattern). */
+function moveFocusWithArrows(event: KeyboardEvent<HTMLDivElement>) {
+  const buttons = Array.from(event.currentTarget.querySelectorAll<HTMLButtonElement>("button:not(:disabled)"));
+  const index = buttons.indexOf(document.activeElement as HTMLButtonElement);
+  if (index < 0) return;
+  const next =
+    event.key === "ArrowRight" ? (index + 1) % buttons.length
+    : event.key === "ArrowLeft" ? (index - 1 + buttons.length) % buttons.length
+    : event.key === "Home" ? 0
+    : event.key === "End" ? buttons.length - 1
+    : null;
+  if (next === null) return;
+  event.preventDefault();
+  buttons[next].focus();
 }

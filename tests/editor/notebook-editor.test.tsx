@@ -76,6 +76,18 @@ describe("NotebookEditor", () => {
     expect(parsed.success ? [] : describeDocumentErrors(parsed.error)).toEqual([]);
   });
 
+  it("moves between toolbar buttons with the arrow keys", async () => {
+    const user = userEvent.setup();
+    await mountEditor();
+    screen.getByRole("button", { name: "Heading 1" }).focus();
+    await user.keyboard("{ArrowRight}");
+    expect(screen.getByRole("button", { name: "Heading 2" })).toHaveFocus();
+    await user.keyboard("{End}");
+    expect(screen.getByRole("button", { name: "Insert cell block" })).toHaveFocus();
+    await user.keyboard("{ArrowRight}");
+    expect(screen.getByRole("button", { name: "Heading 1" })).toHaveFocus();
+  });
+
   it("hides the toolbar when read-only", async () => {
     await mountEditor({ editable: false });
     expect(screen.queryByRole("toolbar")).not.toBeInTheDocument();
