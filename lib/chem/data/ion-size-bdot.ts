@@ -5,6 +5,8 @@
  * its LLNL_AQUEOUS_MODEL_PARAMETERS block (../shared/reference/ion_size.csv, confirmed).
  * The engine uses it inside the Truesdell–Jones model for ions WATEQ4F does not fit.
  */
+import { interpolate } from "../interpolate";
+
 export const BDOT_SOURCE = "Helgeson (1969) Am. J. Sci. 267, 729; ion sizes and Ḃ of EQ3/6 llnl.dat";
 
 /** Ḃ (kg/mol) against temperature (°C), EQ3/6 llnl.dat. */
@@ -22,14 +24,5 @@ export const BDOT_ION_SIZE_ANGSTROM: Readonly<Record<string, number>> = {
 
 /** Ḃ at a temperature, linear between the llnl.dat grid points (held constant outside). */
 export function bDot(temperatureC: number): number {
-  const grid = BDOT_BY_TEMPERATURE;
-  if (temperatureC <= grid[0][0]) return grid[0][1];
-  for (let i = 1; i < grid.length; i++) {
-    const [t1, b1] = grid[i];
-    if (temperatureC <= t1) {
-      const [t0, b0] = grid[i - 1];
-      return b0 + ((b1 - b0) * (temperatureC - t0)) / (t1 - t0);
-    }
-  }
-  return grid[grid.length - 1][1];
+  return interpolate(BDOT_BY_TEMPERATURE, temperatureC);
 }

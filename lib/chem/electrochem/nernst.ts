@@ -8,7 +8,7 @@ import { FARADAY_C_PER_MOL, GAS_CONSTANT_J_PER_MOL_K, LN10, kelvin } from "../co
 import { ChemInputError } from "../errors";
 import { parseFormula } from "../formula";
 import { AGCL_STANDARD_POTENTIAL_BY_TEMPERATURE, COUPLES, type CoupleData } from "./couples-data";
-import { interpolate } from "./interpolate";
+import { interpolate } from "../interpolate";
 
 export interface NernstInput {
   couple: string;

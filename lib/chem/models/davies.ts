@@ -5,10 +5,9 @@
  * γ± the error is a few per cent at 0.1 mol/kg and grows to about 10 % at 0.5 (see tests).
  */
 import type { ActivityModel, ActivityModelInput } from "./types";
-import { evaluateExtendedForm, ionAssociationMessage, ionicStrengthMessage, substitutedCore, waterOnlyNote } from "./dh-common";
+import { dhFamilyOutput, substitutedCore } from "./dh-common";
 
-const LABEL = "Davies";
-const MAX_I = 0.5;
+const RANGE = { label: "Davies", maxIonicStrengthMolal: 0.5, waterParameters: "the empirical linear coefficient" };
 
 function coefficient(input: ActivityModelInput): number {
   return input.options?.daviesCoefficient ?? 0.3;
@@ -16,21 +15,15 @@ function coefficient(input: ActivityModelInput): number {
 
 export const daviesModel: ActivityModel = {
   id: "davies",
-  label: LABEL,
+  label: RANGE.label,
   formulaTex: String.raw`\log_{10}\gamma_i = -A z_i^2 \left(\frac{\sqrt{I}}{1 + \sqrt{I}} - 0.3\,I\right)`,
   validityNote: "I ≤ 0.5 mol/kg (common practice; errors grow to about 10 % there); empirical, for water. Coefficient 0.3 (Davies 1962) or 0.2.",
-  maxIonicStrengthMolal: MAX_I,
+  maxIonicStrengthMolal: RANGE.maxIonicStrengthMolal,
   compute(input: ActivityModelInput) {
     // −A z² (√I/(1+√I) − c I) is the common form with β = 1 and b = c A z².
     const cA = coefficient(input) * input.constants.aLog10;
     const b = input.ions.map((ion) => cA * ion.charge * ion.charge);
-    const { lnGamma, osmoticCoefficient } = evaluateExtendedForm(input, new Float64Array(b.length).fill(1), b);
-    return {
-      lnGamma,
-      osmoticCoefficient,
-      validityMessages: [...ionicStrengthMessage(LABEL, MAX_I, input), ...ionAssociationMessage(input)],
-      notes: waterOnlyNote(LABEL, "the empirical linear coefficient", input.solvent),
-    };
+    return dhFamilyOutput(RANGE, input, new Float64Array(b.length).fill(1), b);
   },
   substitutedTex(input) {
     const { A, I, sqrtI } = substitutedCore(input);

@@ -1,6 +1,5 @@
 /** Pieces shared by the Debye–Hückel family of models. */
-import { LN10 } from "../constants";
-import type { ActivityModelInput, ModelIon } from "./types";
+import type { ActivityModelInput, ActivityModelOutput, ModelIon } from "./types";
 
 /** Number formatted for a KaTeX formula (4 significant figures, no exponent noise). */
 export function texNumber(value: number): string {
@@ -9,10 +8,6 @@ export function texNumber(value: number): string {
   if (abs >= 1e-3 && abs < 1e4) return String(Number(value.toPrecision(4)));
   const [mantissa, exponent] = value.toExponential(3).split("e");
   return `${Number(mantissa)}\\times10^{${Number(exponent)}}`;
-}
-
-export function log10ToLn(log10Gamma: number): number {
-  return log10Gamma * LN10;
 }
 
 export function ionicStrengthMessage(label: string, maxIonicStrengthMolal: number, input: ActivityModelInput): string[] {
@@ -110,4 +105,24 @@ export function evaluateExtendedForm(
     sumIntegral += m * integral;
   }
   return { lnGamma, osmoticCoefficient: sumM > 0 ? 1 + (sumEnd - sumIntegral) / sumM : 1 };
+}
+
+/**
+ * The output every Debye–Hückel-family model returns: the common form evaluated, the
+ * ionic-strength range and ion-association checks, and the note for non-water solvents.
+ */
+export function dhFamilyOutput(
+  model: { label: string; maxIonicStrengthMolal: number; waterParameters?: string },
+  input: ActivityModelInput,
+  beta: ArrayLike<number>,
+  b: ArrayLike<number>,
+  extra: { validityMessages?: string[]; notes?: string[] } = {},
+): ActivityModelOutput {
+  const { lnGamma, osmoticCoefficient } = evaluateExtendedForm(input, beta, b);
+  const validityMessages = [...(extra.validityMessages ?? [])];
+  if (validityMessages.length === 0) validityMessages.push(...ionicStrengthMessage(model.label, model.maxIonicStrengthMolal, input));
+  validityMessages.push(...ionAssociationMessage(input));
+  const notes = [...(extra.notes ?? [])];
+  if (model.waterParameters) notes.push(...waterOnlyNote(model.label, model.waterParameters, input.solvent));
+  return { lnGamma, osmoticCoefficient, validityMessages, notes };
 }

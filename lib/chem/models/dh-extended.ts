@@ -5,18 +5,17 @@
  * Range: I ≤ 0.1 mol/kg, the range of Kielland's table. The sizes are for water.
  */
 import type { ActivityModel, ActivityModelInput } from "./types";
-import { evaluateExtendedForm, ionAssociationMessage, ionicStrengthMessage, substitutedCore, waterOnlyNote } from "./dh-common";
+import { dhFamilyOutput, substitutedCore } from "./dh-common";
 import { assumedIonSize, kiellandIonSize } from "./ion-parameters";
 
-const LABEL = "Extended Debye–Hückel (Kielland ion sizes)";
-const MAX_I = 0.1;
+const RANGE = { label: "Extended Debye–Hückel (Kielland ion sizes)", maxIonicStrengthMolal: 0.1, waterParameters: "Kielland's ion sizes" };
 
 export const dhExtendedModel: ActivityModel = {
   id: "dh-extended",
-  label: LABEL,
+  label: RANGE.label,
   formulaTex: String.raw`\log_{10}\gamma_i = -\frac{A z_i^2 \sqrt{I}}{1 + B \mathring{a}_i \sqrt{I}}`,
   validityNote: "I ≤ 0.1 mol/kg, the range of Kielland's (1937) table; ion sizes for water.",
-  maxIonicStrengthMolal: MAX_I,
+  maxIonicStrengthMolal: RANGE.maxIonicStrengthMolal,
   compute(input: ActivityModelInput) {
     const B = input.constants.bPerAngstrom;
     const notes: string[] = [];
@@ -28,9 +27,7 @@ export const dhExtendedModel: ActivityModel = {
       }
       return B * a;
     });
-    const { lnGamma, osmoticCoefficient } = evaluateExtendedForm(input, beta, new Float64Array(beta.length));
-    notes.push(...waterOnlyNote(LABEL, "Kielland's ion sizes", input.solvent));
-    return { lnGamma, osmoticCoefficient, validityMessages: [...ionicStrengthMessage(LABEL, MAX_I, input), ...ionAssociationMessage(input)], notes };
+    return dhFamilyOutput(RANGE, input, beta, new Float64Array(beta.length), { notes });
   },
   substitutedTex(input) {
     const { A, B, sqrtI } = substitutedCore(input);

@@ -7,7 +7,7 @@
  * εr and ρ, so the law applies to any solvent.
  */
 import type { ActivityModel, ActivityModelInput } from "./types";
-import { chargeProductMagnitude, evaluateExtendedForm, ionAssociationMessage, substitutedCore, texNumber } from "./dh-common";
+import { chargeProductMagnitude, dhFamilyOutput, substitutedCore, texNumber } from "./dh-common";
 
 export const DH_LIMITING_SQRT_I_MAX_1_1 = 0.1;
 
@@ -23,14 +23,14 @@ export const dhLimitingModel: ActivityModel = {
   maxIonicStrengthMolal: DH_LIMITING_SQRT_I_MAX_1_1 ** 2,
   compute(input: ActivityModelInput) {
     const sqrtI = Math.sqrt(input.ionicStrengthMolal);
-    const zeros = new Float64Array(input.ions.length);
-    const { lnGamma, osmoticCoefficient } = evaluateExtendedForm(input, zeros, zeros);
     const product = chargeProductMagnitude(input.ions);
     const limit = limitingLawSqrtIMax(product);
     const validityMessages = sqrtI > limit
       ? [`The Debye–Hückel limiting law holds for ${product === 1 ? "1:1 electrolytes" : `charge product |z₊z₋| = ${product}`} only up to √I ≈ ${texNumber(limit)} (here √I = ${texNumber(sqrtI)}); use the extended equation, Davies or Truesdell–Jones.`]
       : [];
-    return { lnGamma, osmoticCoefficient, validityMessages: [...validityMessages, ...ionAssociationMessage(input)], notes: [] };
+    const zeros = new Float64Array(input.ions.length);
+    // The range check is the √I rule above, not a fixed ionic strength.
+    return dhFamilyOutput({ label: "Debye–Hückel limiting law", maxIonicStrengthMolal: Number.POSITIVE_INFINITY }, input, zeros, zeros, { validityMessages });
   },
   substitutedTex(input) {
     const { A, sqrtI } = substitutedCore(input);

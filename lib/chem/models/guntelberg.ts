@@ -5,26 +5,19 @@
  * mixtures where no single ion size fits. Range: I ≤ 0.1 mol/kg.
  */
 import type { ActivityModel, ActivityModelInput } from "./types";
-import { evaluateExtendedForm, ionAssociationMessage, ionicStrengthMessage, substitutedCore, waterOnlyNote } from "./dh-common";
+import { dhFamilyOutput, substitutedCore } from "./dh-common";
 
-const LABEL = "Güntelberg";
-const MAX_I = 0.1;
+const RANGE = { label: "Güntelberg", maxIonicStrengthMolal: 0.1, waterParameters: "the product B·å = 1" };
 
 export const guntelbergModel: ActivityModel = {
   id: "guntelberg",
-  label: LABEL,
+  label: RANGE.label,
   formulaTex: String.raw`\log_{10}\gamma_i = -\frac{A z_i^2 \sqrt{I}}{1 + \sqrt{I}}`,
   validityNote: "I ≤ 0.1 mol/kg (Güntelberg 1926); B·å = 1 is a water value.",
-  maxIonicStrengthMolal: MAX_I,
+  maxIonicStrengthMolal: RANGE.maxIonicStrengthMolal,
   compute(input: ActivityModelInput) {
     const n = input.ions.length;
-    const { lnGamma, osmoticCoefficient } = evaluateExtendedForm(input, new Float64Array(n).fill(1), new Float64Array(n));
-    return {
-      lnGamma,
-      osmoticCoefficient,
-      validityMessages: [...ionicStrengthMessage(LABEL, MAX_I, input), ...ionAssociationMessage(input)],
-      notes: waterOnlyNote(LABEL, "the product B·å = 1", input.solvent),
-    };
+    return dhFamilyOutput(RANGE, input, new Float64Array(n).fill(1), new Float64Array(n));
   },
   substitutedTex(input) {
     const { A, sqrtI } = substitutedCore(input);

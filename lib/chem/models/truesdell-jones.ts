@@ -8,7 +8,7 @@
  */
 import { bDot } from "../data/ion-size-bdot";
 import type { ActivityModel, ActivityModelInput } from "./types";
-import { evaluateExtendedForm, ionAssociationMessage, ionicStrengthMessage, substitutedCore, texNumber, waterOnlyNote } from "./dh-common";
+import { dhFamilyOutput, ionicStrengthMessage, substitutedCore, texNumber } from "./dh-common";
 import { assumedIonSize, bDotIonSize, kiellandIonSize, truesdellJonesParameters } from "./ion-parameters";
 
 const LABEL = "Truesdell–Jones (b-dot)";
@@ -68,17 +68,14 @@ export const truesdellJonesModel: ActivityModel = {
       beta[i] = B * p.aAngstrom;
       b[i] = p.source === "WATEQ4F" ? p.b : bDotHere;
     }
-    const { lnGamma, osmoticCoefficient } = evaluateExtendedForm(input, beta, b);
     const notes: string[] = [];
     if (bDotIons.length) notes.push(`No fitted Truesdell–Jones b for ${bDotIons.join(", ")}: b-dot form used (Ḃ = ${texNumber(bDotHere)} kg/mol).`);
     if (assumed.length) notes.push(`No tabulated ion size for ${assumed.join(", ")}: assumed.`);
-    notes.push(...waterOnlyNote(LABEL, "the å and b parameters", input.solvent));
     const validityMessages = ionicStrengthMessage(LABEL, MAX_I, input);
     if (bDotIons.length && I > BDOT_MAX_I && validityMessages.length === 0) {
       validityMessages.push(`Ions without fitted b (${bDotIons.join(", ")}) use the b-dot form, tested to about I = ${BDOT_MAX_I} mol/kg.`);
     }
-    validityMessages.push(...ionAssociationMessage(input));
-    return { lnGamma, osmoticCoefficient, validityMessages, notes };
+    return dhFamilyOutput({ label: LABEL, maxIonicStrengthMolal: MAX_I, waterParameters: "the å and b parameters" }, input, beta, b, { validityMessages, notes });
   },
   substitutedTex(input) {
     const { A, B, I, sqrtI } = substitutedCore(input);
