@@ -33,7 +33,15 @@ export function computeCellPotential(cell: CellBlockInput, electrolyte: Solution
   const activities: Record<string, number> = {};
   for (const ion of evaluation.result.ions) activities[ion.formula] = ion.activity;
   try {
-    const pH = cell.pH === null ? {} : { pH: cell.pH };
+    const notes: string[] = [];
+    if (cell.temperatureC !== null && electrolyte.temperatureC !== null && cell.temperatureC !== electrolyte.temperatureC) {
+      notes.push(`Activities are those of the solution at ${electrolyte.temperatureC} °C; the Nernst slope uses the cell's ${cell.temperatureC} °C.`);
+    }
+    // pH = −log10 a(H⁺) by definition (IUPAC); taken from the electrolyte when not typed.
+    const hydrogen = evaluation.result.ions.find((ion) => ion.formula === "H+");
+    const pHValue = cell.pH ?? (hydrogen && hydrogen.activity > 0 ? -Math.log10(hydrogen.activity) : null);
+    if (cell.pH === null && pHValue !== null) notes.push(`pH ${pHValue.toFixed(2)} from the electrolyte's computed a(H⁺).`);
+    const pH = pHValue === null ? {} : { pH: pHValue };
     const nernst = nernstPotentialDetailed({ couple: cell.couple, activities, temperatureC, ...pH });
     const reference = cell.referenceElectrode.type;
     const converted = convertPotentialDetailed(nernst.potentialV, "SHE", reference, { temperatureC, ...pH });
@@ -45,7 +53,7 @@ export function computeCellPotential(cell: CellBlockInput, electrolyte: Solution
       temperatureC,
       reaction: nernst.reaction,
       standardPotentialV: nernst.standardPotentialV,
-      notes: [...nernst.notes, ...converted.notes],
+      notes: [...notes, ...nernst.notes, ...converted.notes],
     };
   } catch (error) {
     if (!isChemInputError(error)) throw error;
