@@ -59,6 +59,12 @@ CATCHER_PID=$!
 wait_for_http "$MAIL_CATCHER_URL/health" 30 || die "mail catcher did not start"
 
 set +e
+TYPE_STATUS=0
+if [ "$RUN_E2E" = 1 ]; then
+  say "Type check (tsc --noEmit)"
+  node_modules/.bin/tsc --noEmit -p . || TYPE_STATUS=1
+fi
+
 say "Unit, component and integration tests"
 node_modules/.bin/vitest run --reporter=default --reporter=json --outputFile.json="$WORK/vitest.json" "$@"
 UNIT_STATUS=$?
@@ -86,4 +92,5 @@ set -e
 
 node scripts/test-summary.mjs "$WORK/vitest.json" "$WORK/e2e.json"
 SUMMARY_STATUS=$?
-[ "$UNIT_STATUS" = 0 ] && [ "$E2E_STATUS" = 0 ] && [ "$SUMMARY_STATUS" = 0 ]
+[ "$TYPE_STATUS" = 0 ] || echo "The type check failed (see above)."
+[ "$TYPE_STATUS" = 0 ] && [ "$UNIT_STATUS" = 0 ] && [ "$E2E_STATUS" = 0 ] && [ "$SUMMARY_STATUS" = 0 ]

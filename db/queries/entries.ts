@@ -90,7 +90,7 @@ export async function findRevision(db: Executor, entryId: string, number: number
 
 export async function listRevisions(db: Executor, entryId: string) {
   return db
-    .select({ id: revisions.id, number: revisions.number, title: revisions.title, contentHash: revisions.contentHash, createdAt: revisions.createdAt, authorName: users.name })
+    .select({ id: revisions.id, number: revisions.number, title: revisions.title, content: revisions.content, contentHash: revisions.contentHash, createdAt: revisions.createdAt, authorName: users.name })
     .from(revisions)
     .innerJoin(users, eq(users.id, revisions.authorId))
     .where(eq(revisions.entryId, entryId))

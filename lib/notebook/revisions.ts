@@ -6,6 +6,7 @@ import { AppError } from "@/lib/errors";
 import { getDb } from "@/lib/server/database";
 import { parseRecordId } from "@/lib/validation/parse";
 import { EMPTY_DOCUMENT } from "./entries";
+import { summariseChange } from "./revision-changes";
 
 export interface RevisionDto {
   number: number;
@@ -43,8 +44,11 @@ export async function getCurrentContent(actor: Actor, entryId: string): Promise<
 
 export async function getRevisionHistory(actor: Actor, entryId: string) {
   const entry = await entryOf(actor, entryId);
-  const rows = await listRevisions(getDb(), entry.id);
-  return rows.map((r) => ({ number: r.number, title: r.title, contentHash: r.contentHash, authorName: r.authorName, createdAt: r.createdAt.toISOString() }));
+  const rows = await listRevisions(getDb(), entry.id); // newest first
+  return rows.map((r, i) => ({
+    number: r.number, title: r.title, contentHash: r.contentHash, authorName: r.authorName, createdAt: r.createdAt.toISOString(),
+    changes: summariseChange(rows[i + 1] ?? null, r),
+  }));
 }
 
 /** The server-computed solution rows of one revision (what the solution finder searches). */

@@ -54,6 +54,8 @@ describe("entries, revisions and server-computed solutions", () => {
     expect(second.revision).toBe(2);
     const history = await getRevisionHistory(researcher, id);
     expect(history.map((r) => r.number)).toEqual([2, 1]);
+    expect(history[0].changes).toEqual(["Text: +1 word"]);
+    expect(history[1].changes).toEqual(["First saved version"]);
     expect(history[0].contentHash).toBe(canonicalHash({ title: "Blank start", content: docWith(paragraph("Rinsed the cell twice.")) }));
   });
 

@@ -33,6 +33,9 @@ export default async function RevisionHistoryPage({ params }: { params: Promise<
               <span className="text-ink-soft"> · {r.authorName} · {new Date(r.createdAt).toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "medium" })}</span>
             </span>
             <code className="font-mono text-xs text-ink-faint" title="SHA-256 of the canonical document">{r.contentHash.slice(0, 16)}…</code>
+            <ul className="w-full text-xs text-ink-soft" aria-label={`Changes in revision ${r.number}`}>
+              {r.changes.map((c) => <li key={c}>· {c}</li>)}
+            </ul>
           </li>
         ))}
         {data.revisions.length === 0 ? <li className="px-5 py-4 text-sm text-ink-soft">Not saved yet.</li> : null}
