@@ -8,6 +8,10 @@
  *   B         = ( 2 N_A ρ e² / (ε0 εr k T) )^½                         m⁻¹ (kg/mol)^½ → ×1e-10 per Å
  *
  * Constants: CODATA 2018. Water εr and ρ: Malmberg & Maryott (1956) and Kell (1975).
+ *
+ * Published A at 25 °C spans 0.5085–0.5115 with the permittivity used (εr 78.30–78.54).
+ * This engine's choice gives A = 0.5108, B = 0.3287 Å⁻¹ and Aφ = 0.3921 at 25 °C, which
+ * reproduce Robinson & Stokes (1959) App. 7.1 within 0.2 % over 0–100 °C (see tests).
  */
 import {
   AVOGADRO_PER_MOL, BOLTZMANN_J_PER_K, ELEMENTARY_CHARGE_C, LN10, VACUUM_PERMITTIVITY_F_PER_M, kelvin,

@@ -1,4 +1,5 @@
 // @vitest-environment node
+/** Unit definitions and the molal–molar relation are common practice (no single source) unless a row names one. */
 import { describe, expect, it } from "vitest";
 import { ChemInputError, computeSolution, molarMass, type SolutionComponentInput } from "@/lib/chem";
 
@@ -17,13 +18,13 @@ function errorOf(fn: () => unknown): ChemInputError {
 
 describe("amounts in every unit the issue names (through mathjs)", () => {
   it.each([
-    ["mol/kg", 0.1, 0.1], ["mmol/kg", 100, 0.1], ["µmol/kg", 1e5, 0.1],
+    ["mol/kg", 0.1, 0.1], ["mmol/kg", 100, 0.1], ["µmol/kg", 1e5, 0.1], ["mol kg-1", 0.1, 0.1], ["mol kg⁻¹", 0.1, 0.1],
   ])("%s", (unit, amount, molality) => {
     expect(solve([{ formula: "NaCl", amount, unit }]).components[0].molality).toBeCloseTo(molality, 12);
   });
 
   it.each([
-    ["mol/L", 0.1], ["M", 0.1], ["mmol/L", 100], ["mM", 100], ["µmol/L", 1e5], ["umol/L", 1e5], ["μM", 1e5],
+    ["mol/L", 0.1], ["M", 0.1], ["mol dm-3", 0.1], ["mol/dm3", 0.1], ["mol L-1", 0.1], ["mmol L⁻¹", 100], ["mmol/L", 100], ["mM", 100], ["µmol/L", 1e5], ["umol/L", 1e5], ["μM", 1e5],
   ])("%s", (unit, amount) => {
     expect(solve([{ formula: "NaCl", amount, unit }]).components[0].molarity).toBeCloseTo(0.1, 12);
   });

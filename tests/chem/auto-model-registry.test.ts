@@ -1,4 +1,5 @@
 // @vitest-environment node
+/** The choice rules follow each model's documented range (see the model files and their sources). */
 import { describe, expect, it } from "vitest";
 import { ACTIVITY_MODELS, ChemInputError, MODEL_REGISTRY, chooseModel, computeSolution, type ModelIon } from "@/lib/chem";
 import { DH_FAMILY_CANDIDATES } from "@/lib/chem/models/auto";

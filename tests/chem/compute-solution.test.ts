@@ -84,7 +84,8 @@ describe("the computation contract (DESIGN.md)", () => {
 
   it("non-aqueous solvents: water-fitted parameters say so", () => {
     const r = computeSolution({ solvent: "dmso", model: "dh-extended", components: [{ formula: "LiClO4", amount: 0.01, unit: "M" }] });
-    expect(r.notes.join(" ")).toMatch(/fitted for water/);
+    expect(r.validity.ok).toBe(false);
+    expect(r.validity.messages.join(" ")).toMatch(/fitted for water/);
     expect(r.solvent.relativePermittivity).toBeCloseTo(46.45, 2);
   });
 });

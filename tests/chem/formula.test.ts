@@ -1,4 +1,5 @@
 // @vitest-environment node
+/** Formula notations are common practice (no single source); molar masses check IUPAC 2021. */
 import { describe, expect, it } from "vitest";
 import { ChemInputError, molarMass, parseFormula } from "@/lib/chem";
 import { ELEMENTS } from "@/lib/chem/data/atomic-weights";

@@ -46,6 +46,19 @@ describe("Debye screening length from εr (general expression)", () => {
   });
 });
 
+describe("ion pairing in low-permittivity solvents", () => {
+  it("Bjerrum length of water at 25 °C: 0.716 nm computed from CODATA 2018 and εr = 78.30 (commonly quoted as 0.7 nm; common practice)", async () => {
+    const { bjerrumLengthNm } = await import("@/lib/chem/solution/screening");
+    expect(bjerrumLengthNm(78.3033, 25)).toBeCloseTo(0.7156, 3);
+  });
+  it("dichloromethane (εr 8.93) carries a validity message; acetonitrile (35.9) does not", () => {
+    const dcm = solve([{ formula: "TBAPF6", amount: 0.1, unit: "M" }], "dichloromethane");
+    expect(dcm.validity.messages.join(" ")).toMatch(/most ions are paired/);
+    const mecn = solve([{ formula: "TBAPF6", amount: 0.0001, unit: "M" }], "acetonitrile");
+    expect(mecn.validity.messages.join(" ")).not.toMatch(/paired/);
+  });
+});
+
 describe("charge balance", () => {
   it("a lone ion is a warning, not silence", () => {
     const r = solve([{ formula: "Na+", amount: 0.1, unit: "mol/kg" }]);

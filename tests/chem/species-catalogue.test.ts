@@ -1,4 +1,5 @@
 // @vitest-environment node
+/** Catalogue contents follow the list; dissociation stoichiometry is common practice (no single source). */
 import { describe, expect, it } from "vitest";
 import { ChemInputError, resolveSpecies, searchSpecies } from "@/lib/chem";
 import { CATALOGUE_SALTS, dissociationBalance } from "@/lib/chem/species/catalogue";

@@ -33,9 +33,10 @@ const FRACTIONS: Record<string, number> = {
 const cache = new Map<string, UnitInfo | null>();
 
 function normalize(text: string): string {
-  let u = text.trim().replace(/[µμ]/g, "u").replace(/\s*\/\s*/g, "/");
+  let u = text.trim().replace(/[µμ]/g, "u").replace(/⁻¹/g, "-1").replace(/⁻³/g, "-3").replace(/³/g, "3").replace(/\s*\/\s*/g, "/");
+  // "mol kg-1", "mmol L-1", "mol dm-3": exponent notation of the same units
+  u = u.replace(/^(\w*mol)\s*(kg|g|L|l)\s*\^?-1$/, "$1/$2").replace(/^(\w*mol)\s*(dm|cm)\s*\^?-3$/, "$1/$2^3");
   u = u.replace(/(dm|cm|m)3\b/g, "$1^3").replace(/\bl\b/g, "L");
-  u = u.replace(/^([a-zA-Z]*mol)\s*(k?g|L|dm\^3)\^?-1$/, "$1/$2").replace(/^([a-zA-Z]*mol)\s+(k?g|L)-1$/, "$1/$2");
   return ALIASES[u] ?? u;
 }
 

@@ -122,7 +122,8 @@ export function dhFamilyOutput(
   const validityMessages = [...(extra.validityMessages ?? [])];
   if (validityMessages.length === 0) validityMessages.push(...ionicStrengthMessage(model.label, model.maxIonicStrengthMolal, input));
   validityMessages.push(...ionAssociationMessage(input));
+  // Parameters fitted for water are outside their domain in another solvent: a validity matter.
+  if (model.waterParameters) validityMessages.push(...waterOnlyNote(model.label, model.waterParameters, input.solvent));
   const notes = [...(extra.notes ?? [])];
-  if (model.waterParameters) notes.push(...waterOnlyNote(model.label, model.waterParameters, input.solvent));
   return { lnGamma, osmoticCoefficient, validityMessages, notes };
 }

@@ -14,7 +14,7 @@ import { solventState } from "../solvents/properties";
 import { solutionHazards } from "./hazards";
 import { meanSaltResults } from "./mean-salt";
 import { osmoticCoefficientByGibbsDuhem, waterActivityFromOsmotic } from "./osmotic";
-import { chargeBalance, ionicStrength, kappaPerNm, type IonAmount } from "./screening";
+import { chargeBalance, ionPairingMessage, ionicStrength, kappaPerNm, type IonAmount } from "./screening";
 import type { IonResult, SolutionInput, SolutionResult } from "./types";
 import { validateSolutionInput } from "./validate";
 
@@ -75,7 +75,7 @@ export function computeSolution(input: SolutionInput): SolutionResult {
     : totalMolality > 0 ? 1 + (ionMolality / totalMolality) * (output.osmoticCoefficient - 1) : 1;
   const aw = state.solvent.id === "water" ? output.waterActivity ?? waterActivityFromOsmotic(phi, totalMolality) : undefined;
 
-  const messages = [...output.validityMessages];
+  const messages = [...output.validityMessages, ...ionPairingMessage(state.relativePermittivity, temperatureC, I.molar)];
   if (choice && !choice.covered) messages.unshift(`No model covers this composition: ${choice.reason}.`);
   const warnings: string[] = [];
   const notes: string[] = [];

@@ -49,3 +49,20 @@ export function chargeBalance(ions: readonly IonAmount[]): { excessEqPerKg: numb
     warning: `The ions do not balance: ${Math.abs(sum).toPrecision(3)} mol/kg of excess ${sign} charge (${((100 * Math.abs(sum)) / scale).toPrecision(2)} % of all charge). Add the counter-ions, or check the formulas.`,
   };
 }
+
+/** Bjerrum length e² / (4π ε0 εr k T) in nm: the distance at which ion–ion energy equals kT. */
+export function bjerrumLengthNm(relativePermittivity: number, temperatureC: number): number {
+  return (ELEMENTARY_CHARGE_C ** 2 / (4 * Math.PI * VACUUM_PERMITTIVITY_F_PER_M * relativePermittivity * BOLTZMANN_J_PER_K * kelvin(temperatureC))) * 1e9;
+}
+
+/**
+ * In solvents of low permittivity most ions are paired (Bjerrum 1926, K. Dan. Vidensk.
+ * Selsk. Mat.-Fys. Medd. 7, 1): below εr ≈ 20 free-ion models describe only a minority of
+ * the salt (the threshold is common practice, no single source).
+ */
+export function ionPairingMessage(relativePermittivity: number, temperatureC: number, ionicStrengthMolar: number): string[] {
+  if (relativePermittivity >= 20 || ionicStrengthMolar <= 1e-4) return [];
+  return [
+    `εr = ${relativePermittivity.toFixed(1)}: the Bjerrum length is ${bjerrumLengthNm(relativePermittivity, temperatureC).toFixed(1)} nm, so most ions are paired; free-ion activity coefficients and I overstate the dissociated salt.`,
+  ];
+}

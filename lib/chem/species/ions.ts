@@ -18,7 +18,7 @@ const CN = "Free cyanide: never acidify (releases HCN gas).";
 
 export const IONS: readonly IonData[] = [
   // cations
-  { formula: "H+", name: "hydrogen ion", aliases: ["H3O+", "proton", "hydronium"] },
+  { formula: "H+", name: "hydrogen ion", aliases: ["proton"] },
   { formula: "Li+", name: "lithium" }, { formula: "Na+", name: "sodium" }, { formula: "K+", name: "potassium" },
   { formula: "Rb+", name: "rubidium" }, { formula: "Cs+", name: "caesium" },
   { formula: "NH4+", name: "ammonium" }, { formula: "Ag+", name: "silver(I)" },

@@ -31,6 +31,9 @@ export interface ResolvedSpecies {
 
 const cache = new Map<string, ResolvedSpecies>();
 
+/** Spellings of the same thermodynamic species: H3O+ is H+ with its water of hydration. */
+const SAME_SPECIES: Record<string, string> = { "H3O+": "H+", hydronium: "H+", "hydronium ion": "H+" };
+
 function fromParsed(parsed: ParsedFormula, field: string): ResolvedSpecies {
   const base = {
     formula: parsed.formula,
@@ -72,8 +75,9 @@ export function resolveSpecies(text: string, field = "formula"): ResolvedSpecies
   if (hit) return hit;
   let resolved: ResolvedSpecies;
   const alias = typeof text === "string" ? saltByAlias(text) : undefined;
+  const same = typeof text === "string" ? SAME_SPECIES[text.trim()] : undefined;
   try {
-    resolved = fromParsed(parseFormula(alias ? alias.formula : text), field);
+    resolved = fromParsed(parseFormula(same ?? (alias ? alias.formula : text)), field);
   } catch (error) {
     if (error instanceof ChemInputError && error.field !== field) {
       throw new ChemInputError(error.message, { field, code: error.code });
