@@ -35,7 +35,7 @@ export function CellPotential({ cell, electrolyte, editable, onChange }: CellPot
           onValueChange={(couple) => onChange({ couple: couple === "" ? null : couple })}
         />
         {needsPh || cell.pH !== null ? (
-          <NumberField label="pH (for RHE)" bounds={{ min: -20, max: 30 }} value={cell.pH} disabled={!editable} error={phError} onValueChange={(pH) => onChange({ pH })} />
+          <NumberField label="pH (for RHE)" placeholder="from electrolyte" bounds={{ min: -20, max: 30 }} value={cell.pH} disabled={!editable} error={phError} onValueChange={(pH) => onChange({ pH })} />
         ) : null}
       </div>
       {potential.status === "ok" ? (

@@ -35,15 +35,16 @@ interface ComponentRowProps {
   onRemove: () => void;
   onKeyDown: (event: KeyboardEvent<HTMLInputElement>) => void;
   speciesRef: (element: HTMLInputElement | null) => void;
+  showBasis: boolean;
 }
 
-export function ComponentRow({ index, component, errors, editable, onChange, onRemove, onKeyDown, speciesRef }: ComponentRowProps) {
+export function ComponentRow({ index, component, errors, editable, onChange, onRemove, onKeyDown, speciesRef, showBasis }: ComponentRowProps) {
   const prefix = `components[${index}]`;
   const needsPer = UNITS_NEEDING_PER.includes(component.unit);
   const rowNumber = index + 1;
   return (
     <tr className="align-top">
-      <td className="py-1 pr-2">
+      <td className="min-w-32 py-1 pr-2">
         <SpeciesCombobox
           label={`Species, row ${rowNumber}`}
           value={component.formula}
@@ -65,7 +66,7 @@ export function ComponentRow({ index, component, errors, editable, onChange, onR
           onKeyDown={onKeyDown}
         />
       </td>
-      <td className="w-40 py-1 pr-2">
+      <td className="w-36 py-1 pr-2">
         <SelectField
           label={`Unit, row ${rowNumber}`}
           hideLabel
@@ -83,35 +84,37 @@ export function ComponentRow({ index, component, errors, editable, onChange, onR
           }
         />
       </td>
-      <td className="w-56 py-1 pr-2">
-        {needsPer ? (
-          <div className="flex items-start gap-1">
-            <span className="pt-1.5 text-xs text-ink-soft">per</span>
-            <NumberField
-              label={`Per amount, row ${rowNumber}`}
-              hideLabel
-              className="w-20"
-              value={component.perAmount ?? null}
-              onValueChange={(perAmount) => onChange({ perAmount })}
-              error={errors.get(`${prefix}.per.amount`) ?? errors.get(`${prefix}.per`)}
-              disabled={!editable}
-              onKeyDown={onKeyDown}
-            />
-            <SelectField
-              label={`Per unit, row ${rowNumber}`}
-              hideLabel
-              className="flex-1"
-              value={component.perUnit ?? "mL"}
-              options={PER_OPTIONS}
-              disabled={!editable}
-              error={errors.get(`${prefix}.per.unit`)}
-              onValueChange={(perUnit) => onChange({ perUnit: perUnit as SolutionComponentInput["perUnit"] })}
-            />
-          </div>
-        ) : (
-          <span className="block pt-1.5 text-xs text-ink-faint">—</span>
-        )}
-      </td>
+      {showBasis ? (
+        <td className="w-56 py-1 pr-2">
+          {needsPer ? (
+            <div className="flex items-start gap-1">
+              <span className="pt-1.5 text-xs text-ink-soft">per</span>
+              <NumberField
+                label={`Per amount, row ${rowNumber}`}
+                hideLabel
+                className="w-20"
+                value={component.perAmount ?? null}
+                onValueChange={(perAmount) => onChange({ perAmount })}
+                error={errors.get(`${prefix}.per.amount`) ?? errors.get(`${prefix}.per`)}
+                disabled={!editable}
+                onKeyDown={onKeyDown}
+              />
+              <SelectField
+                label={`Per unit, row ${rowNumber}`}
+                hideLabel
+                className="flex-1"
+                value={component.perUnit ?? "mL"}
+                options={PER_OPTIONS}
+                disabled={!editable}
+                error={errors.get(`${prefix}.per.unit`)}
+                onValueChange={(perUnit) => onChange({ perUnit: perUnit as SolutionComponentInput["perUnit"] })}
+              />
+            </div>
+          ) : (
+            <span className="block pt-1.5 text-xs text-ink-faint">—</span>
+          )}
+        </td>
+      ) : null}
       <td className="w-8 py-1">
         {editable ? (
           <button type="button" className={quietButtonClass} aria-label={`Remove row ${rowNumber}`} title="Remove row (Ctrl+Backspace on an empty row)" onClick={onRemove}>

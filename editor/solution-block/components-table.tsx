@@ -1,7 +1,7 @@
 "use client";
 
 import { useEffect, useRef, useState, type KeyboardEvent } from "react";
-import type { SolutionComponentInput } from "@/lib/entries/block-schemas";
+import { UNITS_NEEDING_PER, type SolutionComponentInput } from "@/lib/entries/block-schemas";
 import { actionButtonClass } from "../ui/field-styles";
 import { ComponentRow } from "./component-row";
 import type { FieldMessages } from "./field-messages";
@@ -37,6 +37,8 @@ export function ComponentsTable({ components, errors, editable, onChange }: Comp
     setFocusRow(null);
   }, [focusRow, components.length]);
 
+  // The basis column (per mass of solvent or final volume) appears only when a weighed row needs it.
+  const showBasis = components.some((row) => UNITS_NEEDING_PER.includes(row.unit));
   const update = (index: number, patch: Partial<SolutionComponentInput>) =>
     onChange(components.map((row, i) => (i === index ? { ...row, ...patch } : row)));
   const addRow = () => {
@@ -74,7 +76,7 @@ export function ComponentsTable({ components, errors, editable, onChange }: Comp
             <th scope="col" className="pb-1 pr-2 font-medium">Species</th>
             <th scope="col" className="pb-1 pr-2 text-right font-medium">Amount</th>
             <th scope="col" className="pb-1 pl-1 pr-2 font-medium">Unit</th>
-            <th scope="col" className="pb-1 pr-2 font-medium">Basis</th>
+            {showBasis ? <th scope="col" className="pb-1 pr-2 font-medium">Basis</th> : null}
             <th scope="col" className="pb-1"><span className="sr-only">Remove</span></th>
           </tr>
         </thead>
@@ -89,6 +91,7 @@ export function ComponentsTable({ components, errors, editable, onChange }: Comp
               onChange={(patch) => update(index, patch)}
               onRemove={() => removeRow(index)}
               onKeyDown={rowKeyDown(index)}
+              showBasis={showBasis}
               speciesRef={(element) => {
                 speciesInputs.current[index] = element;
               }}

@@ -42,7 +42,7 @@ export function SolutionResults({ evaluation, formulas }: SolutionResultsProps) 
             <span className="font-medium text-ink">Model: {evaluation.result.model.label}</span>
             {evaluation.result.model.reason ? <> — {evaluation.result.model.reason}</> : null}
           </p>
-          <div className="grid gap-4 xl:grid-cols-[3fr_2fr]">
+          <div className="grid gap-4 overflow-x-auto xl:grid-cols-[3fr_2fr]">
             <IonTable result={evaluation.result} />
             <SaltList result={evaluation.result} />
           </div>
