@@ -3,6 +3,9 @@ const nextConfig = {
   // argon2 and sharp are native modules: keep them out of the server bundle.
   serverExternalPackages: ["argon2", "sharp", "smtp-server", "mailparser"],
   poweredByHeader: false,
+  // `npm test` builds into its own folder so it never replaces the build a running
+  // `npm start` is serving.
+  distDir: process.env.NEXT_DIST_DIR || ".next",
   // Type-checking is its own step of `npm test` (tsc --noEmit); the build does not repeat it.
   typescript: { ignoreBuildErrors: true },
 };

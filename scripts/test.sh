@@ -51,6 +51,7 @@ export SMTP_HOST=127.0.0.1 SMTP_PORT="$SMTP_PORT"
 export MAIL_CATCHER_URL="http://127.0.0.1:$MAIL_HTTP_PORT"
 export UPLOAD_DIR="$WORK/uploads"; mkdir -p "$UPLOAD_DIR"
 export NEXT_TELEMETRY_DISABLED=1
+export NEXT_DIST_DIR=.next-test
 export CHROMIUM_PATH=/usr/bin/chromium
 
 node_modules/.bin/tsx scripts/migrate.ts

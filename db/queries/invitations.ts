@@ -48,3 +48,11 @@ export async function revokeInvitation(db: Executor, labId: string, id: string) 
     .returning({ id: invitations.id });
   return rows.length === 1;
 }
+
+/** A new invitation replaces any open one for the same address in the lab. */
+export async function revokeOpenInvitationsFor(db: Executor, labId: string, email: string) {
+  await db
+    .update(invitations)
+    .set({ revokedAt: new Date() })
+    .where(and(eq(invitations.labId, labId), sql`lower(${invitations.email}) = lower(${email})`, isNull(invitations.acceptedAt), isNull(invitations.revokedAt)));
+}

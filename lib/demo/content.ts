@@ -2,7 +2,7 @@ import "server-only";
 import { eq } from "drizzle-orm";
 import { users } from "@/db/schema";
 import type { Role } from "@/db/schema/enums";
-import type { Actor } from "@/lib/access/actor";
+import type { Actor } from "@/lib/access/authorize";
 import { defaultCellBlockInput, defaultSolutionBlockInput } from "@/lib/entries/block-defaults";
 import type { SolutionBlockInput } from "@/lib/entries/block-schemas";
 import { createEntry, submitEntry } from "@/lib/notebook/entries";

@@ -1,6 +1,6 @@
 import "server-only";
 import { insertAuditEvent } from "@/db/queries/audit";
-import { findInvitationByTokenHash, insertInvitation, markInvitationAccepted, revokeInvitation } from "@/db/queries/invitations";
+import { findInvitationByTokenHash, insertInvitation, markInvitationAccepted, revokeInvitation, revokeOpenInvitationsFor } from "@/db/queries/invitations";
 import { findLabById } from "@/db/queries/labs";
 import { findUserByEmail, insertUser } from "@/db/queries/users";
 import type { Role } from "@/db/schema/enums";
@@ -32,6 +32,7 @@ export async function inviteMember(actor: Actor, raw: unknown): Promise<{ invita
   const link = new URL(`/invitations/${token}`, getEnv().APP_URL).toString();
 
   const invitation = await db.transaction(async (tx) => {
+    await revokeOpenInvitationsFor(tx, actor.labId, email); // the newest link is the only one that works
     const row = await insertInvitation(tx, { labId: actor.labId, email, role, tokenHash, invitedById: actor.userId, expiresAt });
     await insertAuditEvent(tx, { labId: actor.labId, actorId: actor.userId, action: "invitation.sent", targetType: "invitation", targetId: row.id, details: { email, role } });
     return row;

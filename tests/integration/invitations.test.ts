@@ -65,6 +65,15 @@ describe("invitations", () => {
     expect((taken as AppError).fieldErrors?.email).toBeDefined();
   });
 
+  it("a second invitation to the same address replaces the first link", async () => {
+    const { members, tag } = await createLabWithMembers(["admin"]);
+    const email = `again.${tag}@lab.example`;
+    const first = await inviteMember(members.admin, { email, role: "researcher" });
+    const second = await inviteMember(members.admin, { email, role: "supervisor" });
+    expect(await inspectInvitation(tokenOf(first.link))).toEqual({ kind: "revoked" });
+    expect(await inspectInvitation(tokenOf(second.link))).toMatchObject({ kind: "open", role: "supervisor" });
+  });
+
   it("stores only a hash of the link's token", async () => {
     const { members, tag } = await createLabWithMembers(["admin"]);
     const { link, invitationId } = await inviteMember(members.admin, { email: `hash.${tag}@lab.example`, role: "researcher" });
