@@ -76,6 +76,24 @@ describe("built-in species catalogue", () => {
     }
   });
 
+  it("does not guess that an unknown acid or an organic molecule gives up protons", () => {
+    expect(() => resolveSpecies("C6H12O6")).toThrow(/cannot be inferred.*C6H12O6\(aq\)/);
+    expect(() => resolveSpecies("glucose")).toThrow(/not a name in the species catalogue/);
+  });
+
+  it("takes a formula marked (aq) as a dissolved non-electrolyte, with a warning", () => {
+    const glucose = resolveSpecies("C6H12O6(aq)");
+    expect(glucose.kind).toBe("molecule");
+    expect(glucose.ions).toEqual([]);
+    expect(glucose.molarMassGPerMol).toBeCloseTo(6 * 12.011 + 12 * 1.008 + 6 * 15.999, 6);
+    expect(glucose.warnings[0]).toMatch(/non-electrolyte/);
+    expect(() => resolveSpecies("NaCl(aq)")).toThrow(/is an electrolyte/);
+  });
+
+  it("reads H3O+ as H+ (the same thermodynamic species)", () => {
+    expect(resolveSpecies("H3O+").ions[0].formula).toBe("H+");
+  });
+
   it("carries hazards: perchlorate, cyanide, fluorinated anions, HF", () => {
     expect(resolveSpecies("LiClO4").hazards.join(" ")).toMatch(/perchlorate/i);
     expect(resolveSpecies("KCN").hazards.join(" ")).toMatch(/HCN/);

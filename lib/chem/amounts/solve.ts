@@ -40,7 +40,7 @@ const WATER_MOLAR_MASS_KG = 0.018015; // H2O from IUPAC 2021 abridged atomic wei
 
 function finiteNonNegative(value: unknown, field: string, what: string): number {
   if (typeof value !== "number" || !Number.isFinite(value)) {
-    throw new ChemInputError(`The ${what} must be a number (got ${String(value)}).`, { field, code: "bad_amount" });
+    throw new ChemInputError(`The ${what} must be a number (got ${typeof value === "string" ? JSON.stringify(value) : String(value)}).`, { field, code: "bad_amount" });
   }
   if (value < 0) throw new ChemInputError(`The ${what} cannot be negative (got ${value}).`, { field, code: "negative_amount" });
   return value;

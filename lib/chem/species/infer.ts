@@ -2,7 +2,8 @@
  * For a neutral formula that is not in the catalogue, finds a cation and an anion whose
  * compositions and charges add up to it: "RbBr" → Rb+ + Br-, "EuCl3" → Eu^3+ + 3 Cl-.
  * Anions come from the ion catalogue (plus the halides and sulfide as monatomic ions);
- * the cation is a catalogue cation or a single metal whose charge (1–4) balances.
+ * the cation is a catalogue cation other than H+ (strong acids are all in the catalogue) or
+ * a single metal whose charge (1–4) balances.
  */
 import { compositionKey, type Composition } from "../formula/composition";
 import { chargeSuffix } from "../formula/charge";
@@ -63,7 +64,9 @@ export function inferDissociation(elements: Composition): IonCount[] | null {
         }
         if (!whole) continue;
         const known = ionByKey(compositionKey(unit, negative / p));
-        if (known) return [ion(known.formula, known.charge, p), ion(anion.formula, anion.charge, q)];
+        // An acid not in the catalogue is most likely weak (or the formula is organic):
+        // do not guess that it gives up all its protons.
+        if (known && known.formula !== "H+") return [ion(known.formula, known.charge, p), ion(anion.formula, anion.charge, q)];
       }
     }
   }

@@ -8,7 +8,7 @@ import { compositionMolarMass } from "../formula/molar-mass";
 import { saltByAlias, saltByKey } from "./catalogue";
 import type { IonCount } from "./dissociation";
 import { inferDissociation } from "./infer";
-import { ionByKey } from "./ion-index";
+import { ionByAlias, ionByKey } from "./ion-index";
 import type { SpeciesKind } from "./salts";
 
 export interface ResolvedSpecies {
@@ -65,9 +65,31 @@ function fromParsed(parsed: ParsedFormula, field: string): ResolvedSpecies {
     return { ...base, kind: "salt", ions: inferred };
   }
   throw new ChemInputError(
-    `"${parsed.input}" is not in the species catalogue and its ions cannot be inferred from their charges. Enter its ions separately (for example "Na+" and "Cl-").`,
+    `"${parsed.input}" is not in the species catalogue and its ions cannot be inferred from their charges. Enter its ions separately (for example "Na+" and "Cl-"), or write "${parsed.formula}(aq)" for a dissolved non-electrolyte.`,
     { field, code: "unknown_species" },
   );
+}
+
+/** "C6H12O6(aq)": a neutral molecule the user declares as a non-electrolyte. */
+function nonElectrolyte(text: string, field: string): ResolvedSpecies | null {
+  const m = /^(.*\S)\s*\(aq\)$/.exec(text.trim());
+  if (!m) return null;
+  const parsed = parseFormula(m[1]);
+  if (parsed.charge !== 0) return null;
+  const salt = saltByKey(parsed.anhydrousKey);
+  if (salt && salt.ions.length > 0) {
+    throw new ChemInputError(`${salt.formula} is an electrolyte; enter it without "(aq)".`, { field, code: "bad_formula" });
+  }
+  return {
+    formula: parsed.formula, saltFormula: parsed.anhydrousFormula, name: salt?.name, kind: "molecule", ions: [],
+    molarMassGPerMol: compositionMolarMass(parsed.elements), anhydrousMolarMassGPerMol: compositionMolarMass(parsed.anhydrousElements),
+    hydrateWater: parsed.hydrateWater, hazards: [...(salt?.hazards ?? [])], notes: [],
+    warnings: [`${parsed.formula} is taken as a dissolved non-electrolyte (no ions, activity coefficient 1).`],
+  };
+}
+
+function looksLikeName(text: string): boolean {
+  return /^[a-z][a-z\s,()'-]*$/.test(text.trim()) && /[a-z]{3}/.test(text);
 }
 
 export function resolveSpecies(text: string, field = "formula"): ResolvedSpecies {
@@ -76,8 +98,11 @@ export function resolveSpecies(text: string, field = "formula"): ResolvedSpecies
   let resolved: ResolvedSpecies;
   const alias = typeof text === "string" ? saltByAlias(text) : undefined;
   const same = typeof text === "string" ? SAME_SPECIES[text.trim()] : undefined;
+  if (!alias && !same && typeof text === "string" && !ionByAlias(text) && looksLikeName(text)) {
+    throw new ChemInputError(`"${text}" is not a name in the species catalogue; type its formula or its ions (for example "Na+").`, { field, code: "unknown_species" });
+  }
   try {
-    resolved = fromParsed(parseFormula(same ?? (alias ? alias.formula : text)), field);
+    resolved = nonElectrolyte(text, field) ?? fromParsed(parseFormula(same ?? (alias ? alias.formula : text)), field);
   } catch (error) {
     if (error instanceof ChemInputError && error.field !== field) {
       throw new ChemInputError(error.message, { field, code: error.code });
