@@ -76,6 +76,23 @@ describe("NotebookEditor", () => {
     expect(parsed.success ? [] : describeDocumentErrors(parsed.error)).toEqual([]);
   });
 
+  it("adds a link from the toolbar and refuses a javascript: address", async () => {
+    const user = userEvent.setup();
+    const { editor } = await mountEditor({ initialContent: { type: "doc", content: [{ type: "paragraph", content: [{ type: "text", text: "SDS of KCl" }] }] } });
+    act(() => {
+      editor.commands.setTextSelection({ from: 1, to: 4 });
+    });
+    await user.click(screen.getByRole("button", { name: "Link" }));
+    const address = screen.getByRole("textbox", { name: "Address" });
+    await user.type(address, "javascript:alert(1)");
+    expect(screen.getByRole("button", { name: "Add link" })).toBeDisabled();
+    expect(screen.getByText(/Only http, https and mailto/)).toBeInTheDocument();
+    await user.clear(address);
+    await user.type(address, "example.org/kcl-sds{Enter}");
+    const hrefs = marksIn(editor.getJSON()).filter((m) => m.type === "link").map((m) => m.attrs?.href);
+    expect(hrefs).toEqual(["https://example.org/kcl-sds"]);
+  });
+
   it("moves between toolbar buttons with the arrow keys", async () => {
     const user = userEvent.setup();
     await mountEditor();
