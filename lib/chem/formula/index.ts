@@ -14,6 +14,8 @@ export function parseFormula(text: string): ParsedFormula {
   if (hit) return hit;
   const alias = typeof text === "string" ? ionByAlias(text) : undefined;
   const parsed = parseFormulaWith(alias ? alias.formula : text, { isKnownIonKey });
+  Object.freeze(parsed.elements);
+  Object.freeze(parsed.anhydrousElements);
   const result = Object.freeze({ ...parsed, input: text });
   if (cache.size > 5000) cache.clear();
   cache.set(text, result);

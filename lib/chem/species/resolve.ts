@@ -49,7 +49,7 @@ function fromParsed(parsed: ParsedFormula, field: string): ResolvedSpecies {
     const known = ionByKey(parsed.anhydrousKey);
     const ion: IonCount = { formula: parsed.anhydrousFormula, charge: parsed.charge, count: 1, key: parsed.anhydrousKey };
     if (!known) base.warnings.push(`${parsed.anhydrousFormula} is not in the ion catalogue; it is taken as an ion of charge ${parsed.charge > 0 ? "+" : ""}${parsed.charge}.`);
-    return { ...base, name: known?.name, kind: "ion", ions: [ion], hazards: known?.hazards ?? [] };
+    return { ...base, name: known?.name, kind: "ion", ions: [ion], hazards: [...(known?.hazards ?? [])] };
   }
   const salt = saltByKey(parsed.anhydrousKey);
   if (salt) {
@@ -112,6 +112,10 @@ export function resolveSpecies(text: string, field = "formula"): ResolvedSpecies
   for (const ion of resolved.ions) {
     for (const h of ionByKey(ion.key)?.hazards ?? []) if (!resolved.hazards.includes(h)) resolved.hazards.push(h);
   }
+  // Cached results are shared between calls: freeze them so no caller can change another's.
+  for (const list of [resolved.ions, resolved.hazards, resolved.notes, resolved.warnings]) Object.freeze(list);
+  resolved.ions.forEach((ion) => Object.freeze(ion));
+  Object.freeze(resolved);
   if (cache.size > 2000) cache.clear();
   cache.set(text, resolved);
   return resolved;
