@@ -62,8 +62,8 @@ export default async function SolutionFinderPage({ searchParams }: { searchParam
         <table className="w-full text-sm" aria-label="Solutions found">
           <thead className="border-b border-ink/10 text-left text-xs uppercase tracking-wide text-ink-soft">
             <tr>
-              <th className="px-4 py-2.5">Solution</th><th className="px-4 py-2.5">Entry</th><th className="px-4 py-2.5 text-right">I / mol kg⁻¹</th>
-              <th className="px-4 py-2.5 text-right">λ_D / nm</th><th className="px-4 py-2.5 text-right">T / °C</th><th className="px-4 py-2.5">Solvent</th>
+              <th className="px-4 py-2.5">Solution</th><th className="px-4 py-2.5">Entry</th><th className="px-4 py-2.5 text-right normal-case">I / mol kg⁻¹</th>
+              <th className="px-4 py-2.5 text-right normal-case">λ<sub>D</sub> / nm</th><th className="px-4 py-2.5 text-right normal-case">T / °C</th><th className="px-4 py-2.5">Solvent</th>
               <th className="px-4 py-2.5">Model</th><th className="px-4 py-2.5">Species</th><th className="px-4 py-2.5">Author</th>
             </tr>
           </thead>
