@@ -5,6 +5,7 @@ import { actionButtonClass } from "../ui/field-styles";
 import { SafetyCaution } from "../ui/safety-caution";
 import { hazardNotesFor } from "../chem-catalogue";
 import type { SolutionEvaluation } from "@/lib/entries/evaluate-solution-block";
+import { ComponentResults } from "./component-results";
 import { describeField } from "./describe-field";
 import { FormulaApplied } from "./formula-applied";
 import { IonTable, SaltList } from "./ion-table";
@@ -45,6 +46,9 @@ export function SolutionResults({ evaluation, formulas }: SolutionResultsProps) 
           <div className="grid gap-4 overflow-x-auto xl:grid-cols-[3fr_2fr]">
             <IonTable result={evaluation.result} />
             <SaltList result={evaluation.result} />
+          </div>
+          <div className="overflow-x-auto">
+            <ComponentResults result={evaluation.result} />
           </div>
           <FormulaApplied result={evaluation.result} />
           <MessagesList title="Outside the model's range" tone="validity" messages={evaluation.result.validity.messages} />

@@ -41,6 +41,18 @@ const nacl = (amount: number) =>
   defaultSolutionBlockInput({ name: "Supporting electrolyte A", model: "davies", components: [{ formula: "NaCl", amount, unit: "mol/kg" }] });
 
 describe("solution block", () => {
+  it("turns a weighed hydrate into molarity with its molar mass as weighed", async () => {
+    const { block } = await mount(
+      defaultSolutionBlockInput({ name: "Copper stock", components: [{ formula: "CuSO4·5H2O", amount: 1.2484, unit: "g", perAmount: 50, perUnit: "mL" }] }),
+    );
+    const row = within(within(block).getByRole("table", { name: "Per component" })).getAllByRole("row")[1];
+    const cells = within(row).getAllByRole("cell");
+    // M(CuSO4·5H2O) = 249.68 g/mol from IUPAC 2021 standard atomic weights (CIAAW);
+    // 1.2484 g in 50 mL is then 0.1000 mol/L.
+    expect(Number(cells[0].textContent)).toBeCloseTo(249.68, 1);
+    expect(Number(cells[2].textContent)).toBeCloseTo(0.1, 3);
+  });
+
   it("updates ionic strength and γ± as a concentration is typed", async () => {
     const user = userEvent.setup();
     const { block, onChange } = await mount(nacl(0.01));
