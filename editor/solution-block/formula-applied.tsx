@@ -19,7 +19,7 @@ export function FormulaApplied({ result }: { result: SolutionResult }) {
         {result.formulaTex && result.formulaTex !== result.formulaTexGeneral ? <Tex tex={result.formulaTex} display className="text-lagoon-700" /> : null}
       </div>
       <p className="mt-1 font-mono text-xs tabular-nums text-ink-soft">
-        A = {formatSignificant(result.constants.aLog10)} kg^½ mol^−½ · I = {formatSignificant(result.ionicStrength.molal)} mol/kg
+        A = {formatSignificant(result.constants.aLog10)} (kg/mol)<sup>1/2</sup> · I = {formatSignificant(result.ionicStrength.molal)} mol/kg
         {result.salts.map((salt) => ` · γ±(${salt.formula}) = ${formatSignificant(salt.meanGamma)}`).join("")}
       </p>
     </figure>

@@ -3,12 +3,13 @@ import { cx } from "@/lib/ui/class-names";
 interface MessagesListProps {
   title: string;
   messages: readonly string[];
-  tone: "validity" | "warning" | "hazard";
+  tone: "validity" | "warning" | "note" | "hazard";
 }
 
 const TONES = {
   validity: "border-amber-300/70 bg-amber-50 text-amber-900",
   warning: "border-ink-faint/40 bg-paper-deep text-ink",
+  note: "border-ink-faint/25 bg-paper text-ink-soft",
   hazard: "border-red-300 bg-red-50 text-red-900",
 };
 

@@ -53,6 +53,7 @@ export function SolutionResults({ evaluation, formulas }: SolutionResultsProps) 
           <FormulaApplied result={evaluation.result} />
           <MessagesList title="Outside the model's range" tone="validity" messages={evaluation.result.validity.messages} />
           <MessagesList title="Warnings" tone="warning" messages={evaluation.result.warnings} />
+          <MessagesList title="Notes" tone="note" messages={evaluation.result.notes ?? []} />
           {evaluation.result.salts.length > 0 ? (
             <div>
               <button type="button" className={actionButtonClass} aria-expanded={chartOpen} onClick={() => setChartOpen((open) => !open)}>
