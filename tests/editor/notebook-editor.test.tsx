@@ -5,6 +5,7 @@ import { afterEach, beforeAll, describe, expect, it, vi } from "vitest";
 import { NotebookEditor } from "@/editor/notebook-editor";
 import { sanitizePastedHtml } from "@/editor/paste-sanitizer";
 import { describeDocumentErrors, entryDocumentSchema } from "@/lib/entries/document-schema";
+import { extractCellBlocks, extractSolutionBlocks } from "@/lib/entries/extract-blocks";
 import { findTemplate } from "@/lib/entries/templates";
 import { preloadBlockPanels } from "./preload-blocks";
 
@@ -140,6 +141,18 @@ describe("NotebookEditor", () => {
     expect(ids).toHaveLength(2);
     expect(new Set(ids).size).toBe(2);
     expect(ids).toContain(original.attrs!.blockId);
+  });
+});
+
+describe("templates in the editor", () => {
+  it.each(["cell-preparation", "electrolyte-stock"])("round-trips %s with its block inputs unchanged", async (id) => {
+    const template = findTemplate(id)!.build();
+    const { editor } = await mountEditor({ initialContent: template });
+    const doc = editor.getJSON();
+    const parsed = entryDocumentSchema.safeParse(doc);
+    expect(parsed.success ? [] : describeDocumentErrors(parsed.error)).toEqual([]);
+    expect(extractSolutionBlocks(doc)).toEqual(extractSolutionBlocks(template));
+    expect(extractCellBlocks(doc)).toEqual(extractCellBlocks(template));
   });
 });
 
