@@ -46,7 +46,6 @@ describe("signing in as each demo role", () => {
   for (const role of ["researcher", "supervisor", "admin"] as const) {
     it(`shows a ${role} the ${role}'s navigation`, async () => {
       const page = await context.newPage();
-      await context.clearCookies();
       const member = byRole(role);
       await signIn(page, member.email, DEMO_PASSWORD);
       await page.getByTestId("current-role").waitFor();
@@ -54,6 +53,8 @@ describe("signing in as each demo role", () => {
       const links = await page.getByRole("navigation", { name: "Main" }).getByRole("link").allTextContents();
       expect(links.map((l) => l.replace(/\d+$/, "").trim())).toEqual(EXPECTED_NAV[role]);
       await screenshot(page, `bench-${role}`);
+      await page.getByRole("button", { name: "Sign out" }).click();
+      await page.waitForURL(/\/sign-in/);
       await page.close();
     });
   }
