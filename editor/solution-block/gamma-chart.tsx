@@ -1,6 +1,6 @@
 "use client";
 
-import { useMemo } from "react";
+import { useDeferredValue, useMemo } from "react";
 import { CartesianGrid, Legend, Line, LineChart, ReferenceDot, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
 import { formatSignificant } from "@/lib/ui/format-number";
 import { modelLabel } from "../chem-catalogue";
@@ -13,6 +13,7 @@ import { computeGammaCurves } from "./gamma-curves";
 const MODEL_COLOURS: Record<string, string> = {
   "dh-limiting": "#9aa5b1",
   "dh-extended": "#52606d",
+  guntelberg: "#7b8794",
   davies: "#22807a",
   "truesdell-jones": "#15524e",
   sit: "#dfa27d",
@@ -27,7 +28,11 @@ interface GammaChartProps {
 }
 
 /** γ± of the chosen salt against √I for each model; solid inside a model's range, dashed outside. */
-export default function GammaChart({ input, result, salt, onSaltChange }: GammaChartProps) {
+export default function GammaChart({ input: liveInput, result: liveResult, salt, onSaltChange }: GammaChartProps) {
+  // The curves take a few dozen computeSolution calls (10–40 ms): deferred, so the typed
+  // number and the block's own results update first and the chart follows.
+  const input = useDeferredValue(liveInput);
+  const result = useDeferredValue(liveResult);
   const saltFormula = salt && result.salts.some((s) => s.formula === salt) ? salt : result.salts[0]?.formula;
   const curves = useMemo(() => (saltFormula ? computeGammaCurves(input, result, saltFormula) : null), [input, result, saltFormula]);
   if (!curves || !saltFormula) return null;
@@ -75,8 +80,8 @@ export default function GammaChart({ input, result, salt, onSaltChange }: GammaC
             />
             <Legend verticalAlign="top" height={28} wrapperStyle={{ fontSize: 11 }} formatter={(value) => modelLabel(String(value))} />
             {curves.models.flatMap((model) => [
-              <Line key={model} dataKey={model} name={model} stroke={MODEL_COLOURS[model]} strokeWidth={1.75} dot={false} isAnimationActive={false} connectNulls={false} />,
-              <Line key={`${model}:outside`} dataKey={`${model}:outside`} stroke={MODEL_COLOURS[model]} strokeWidth={1.25} strokeDasharray="4 3" dot={false} isAnimationActive={false} legendType="none" connectNulls={false} />,
+              <Line key={model} dataKey={model} name={model} stroke={MODEL_COLOURS[model] ?? "#1f2933"} strokeWidth={1.75} dot={false} isAnimationActive={false} connectNulls={false} />,
+              <Line key={`${model}:outside`} dataKey={`${model}:outside`} stroke={MODEL_COLOURS[model] ?? "#1f2933"} strokeWidth={1.25} strokeDasharray="4 3" dot={false} isAnimationActive={false} legendType="none" connectNulls={false} />,
             ])}
             {Number.isFinite(curves.own.meanGamma) ? (
               <ReferenceDot x={curves.own.sqrtI} y={curves.own.meanGamma} r={5} fill="#b8683d" stroke="#fbfaf7" strokeWidth={2} ifOverflow="extendDomain" />

@@ -1,8 +1,8 @@
-import { computeSolution, isChemInputError } from "@/lib/chem";
+import { ACTIVITY_MODELS, computeSolution, isChemInputError } from "@/lib/chem";
 import type { ChemInput, SolutionResult } from "@/lib/entries/evaluate-solution-block";
 
-/** Models drawn in the γ± against √I chart, in the order of their range of validity. */
-export const CHART_MODELS = ["dh-limiting", "dh-extended", "davies", "truesdell-jones", "sit", "pitzer"] as const;
+/** Every model lib/chem offers (not "auto"), in its own order: newly registered ones appear too. */
+export const CHART_MODELS: readonly string[] = ACTIVITY_MODELS.map((model) => model.id).filter((id) => id !== "auto");
 
 export interface CurvePoint {
   sqrtI: number;
