@@ -1,7 +1,7 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { BrowserContext, Page } from "playwright-core";
+import { beforeAll, describe, expect, it } from "vitest";
+import type { Page } from "playwright-core";
 import { DEMO_LABS, DEMO_PASSWORD } from "@/lib/demo/scenario";
-import { BASE_URL, openBrowser, signIn } from "./support/browser";
+import { BASE_URL, useBrowser, signIn } from "./support/browser";
 
 const researcher = DEMO_LABS[0].members.find((m) => m.email.startsWith("mira"))!;
 
@@ -20,22 +20,17 @@ async function newBlankEntry(page: Page, title: string): Promise<string> {
 }
 
 describe("autosave", () => {
-  let context: BrowserContext;
-  let close: () => Promise<void>;
+  const browser = useBrowser();
 
   beforeAll(async () => {
-    ({ context, close } = await openBrowser());
-    const page = await context.newPage();
+    const page = await browser.context.newPage();
     await signIn(page, researcher.email, DEMO_PASSWORD);
     await page.getByTestId("current-user").waitFor();
     await page.close();
   });
-  afterAll(async () => {
-    await close();
-  });
 
   it("keeps edits typed just before a reload and saves them after it", async () => {
-    const page = await context.newPage();
+    const page = await browser.context.newPage();
     const url = await newBlankEntry(page, "E2E reload keeps edits");
     await page.getByRole("textbox", { name: /^Text of/ }).click();
     await page.keyboard.type("Weighed 0.7455 g KCl.");
@@ -50,9 +45,9 @@ describe("autosave", () => {
   });
 
   it("refuses to overwrite a newer revision saved from another tab and lets the user choose", async () => {
-    const first = await context.newPage();
+    const first = await browser.context.newPage();
     const url = await newBlankEntry(first, "E2E two tabs");
-    const second = await context.newPage();
+    const second = await browser.context.newPage();
     await second.goto(url);
     await second.getByRole("textbox", { name: /^Text of/ }).waitFor();
 

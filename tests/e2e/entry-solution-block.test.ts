@@ -1,7 +1,7 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { BrowserContext, Locator, Page } from "playwright-core";
+import { describe, expect, it } from "vitest";
+import type { Locator, Page } from "playwright-core";
 import { DEMO_LABS, DEMO_PASSWORD } from "@/lib/demo/scenario";
-import { BASE_URL, openBrowser, screenshot, signIn } from "./support/browser";
+import { BASE_URL, useBrowser, screenshot, signIn } from "./support/browser";
 
 const researcher = DEMO_LABS[0].members.find((m) => m.role === "researcher")!;
 
@@ -32,18 +32,11 @@ async function waitUntilSaved(page: Page) {
 }
 
 describe("an entry with a live solution block", () => {
-  let context: BrowserContext;
-  let close: () => Promise<void>;
+  const browser = useBrowser();
 
-  beforeAll(async () => {
-    ({ context, close } = await openBrowser());
-  });
-  afterAll(async () => {
-    await close();
-  });
 
   it("creates an entry from the cell-preparation template, computes 0.1 mol/kg NaCl, and shows it again after a reload", async () => {
-    const page = await context.newPage();
+    const page = await browser.context.newPage();
     await signIn(page, researcher.email, DEMO_PASSWORD);
     await page.getByTestId("current-user").waitFor();
 

@@ -1,24 +1,16 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { BrowserContext } from "playwright-core";
+import { describe, expect, it } from "vitest";
 import { DEMO_LABS, DEMO_PASSWORD } from "@/lib/demo/scenario";
-import { BASE_URL, openBrowser, signIn } from "./support/browser";
+import { BASE_URL, openBrowser, useBrowser, signIn } from "./support/browser";
 
 const admin = DEMO_LABS[1].members.find((m) => m.role === "admin")!;
 
 describe("inviting a member through the mail catcher", () => {
-  let context: BrowserContext;
-  let close: () => Promise<void>;
+  const browser = useBrowser();
 
-  beforeAll(async () => {
-    ({ context, close } = await openBrowser());
-  });
-  afterAll(async () => {
-    await close();
-  });
 
   it("admin invites, the invitee follows the mailed link, sets a password and signs in; the link then stops working", async () => {
     const email = `e2e.newcomer.${Date.now()}@ridgeback.example`;
-    const page = await context.newPage();
+    const page = await browser.context.newPage();
     await signIn(page, admin.email, DEMO_PASSWORD);
     await page.getByTestId("current-user").waitFor();
     await page.goto(`${BASE_URL}/lab`);

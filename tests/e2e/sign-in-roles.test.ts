@@ -1,7 +1,6 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { BrowserContext } from "playwright-core";
+import { describe, expect, it } from "vitest";
 import { DEMO_LABS, DEMO_PASSWORD } from "@/lib/demo/scenario";
-import { BASE_URL, openBrowser, screenshot, signIn } from "./support/browser";
+import { BASE_URL, useBrowser, screenshot, signIn } from "./support/browser";
 
 const lab = DEMO_LABS[0];
 const byRole = (role: string) => lab.members.find((m) => m.role === role)!;
@@ -13,18 +12,11 @@ const EXPECTED_NAV: Record<string, string[]> = {
 };
 
 describe("signing in as each demo role", () => {
-  let context: BrowserContext;
-  let close: () => Promise<void>;
+  const browser = useBrowser();
 
-  beforeAll(async () => {
-    ({ context, close } = await openBrowser());
-  });
-  afterAll(async () => {
-    await close();
-  });
 
   it("sends a visitor without a session to sign-in", async () => {
-    const page = await context.newPage();
+    const page = await browser.context.newPage();
     await page.goto(`${BASE_URL}/lab`);
     await page.waitForURL(/\/sign-in/);
     expect(await page.getByRole("heading", { name: "Sign in to your lab" }).isVisible()).toBe(true);
@@ -32,7 +24,7 @@ describe("signing in as each demo role", () => {
   });
 
   it("refuses a wrong password without saying whether the address exists", async () => {
-    const page = await context.newPage();
+    const page = await browser.context.newPage();
     await signIn(page, byRole("researcher").email, "not-the-password-1");
     // (Next.js's route announcer is also role=alert, so the form's message is found by its text.)
     const message = "That e-mail and password do not match an active account.";
@@ -45,7 +37,7 @@ describe("signing in as each demo role", () => {
 
   for (const role of ["researcher", "supervisor", "admin"] as const) {
     it(`shows a ${role} the ${role}'s navigation`, async () => {
-      const page = await context.newPage();
+      const page = await browser.context.newPage();
       const member = byRole(role);
       await signIn(page, member.email, DEMO_PASSWORD);
       await page.getByTestId("current-role").waitFor();

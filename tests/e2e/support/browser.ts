@@ -2,6 +2,7 @@ import { mkdtempSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import { chromium, type BrowserContext, type Page } from "playwright-core";
+import { afterAll, beforeAll } from "vitest";
 
 export const BASE_URL = process.env.E2E_BASE_URL ?? "http://localhost:3000";
 
@@ -33,4 +34,23 @@ export async function signIn(page: Page, email: string, password: string): Promi
 export async function screenshot(page: Page, name: string): Promise<void> {
   const dir = process.env.E2E_SCREENSHOT_DIR;
   if (dir) await page.screenshot({ path: path.join(dir, `${name}.png`), fullPage: true });
+}
+
+/** One browser per test file: opened before its tests, closed after them. */
+export function useBrowser(): { readonly context: BrowserContext } {
+  const holder: { context?: BrowserContext; close?: () => Promise<void> } = {};
+  beforeAll(async () => {
+    const opened = await openBrowser();
+    holder.context = opened.context;
+    holder.close = opened.close;
+  });
+  afterAll(async () => {
+    await holder.close?.();
+  });
+  return {
+    get context() {
+      if (!holder.context) throw new Error("the browser is not open yet");
+      return holder.context;
+    },
+  };
 }
