@@ -12,6 +12,7 @@
  */
 import { ChemInputError } from "../errors";
 import type { ResolvedSpecies } from "../species/resolve";
+import { componentField } from "../component-field";
 import { readUnit } from "./units";
 
 export interface AmountInput {
@@ -47,38 +48,37 @@ function finiteNonNegative(value: unknown, field: string, what: string): number 
 }
 
 function specsOf(inputs: readonly AmountInput[], species: readonly ResolvedSpecies[]): Spec[] {
-  const solventGroups = new Map<string, { kg: number; hydrateKg: number }>();
-  const pending: { index: number; mol: number; group: string }[] = [];
+  const solventGroups = new Map<number, { kg: number; hydrateKg: number }>();
+  const pending: { index: number; mol: number; group: number }[] = [];
   const specs: (Spec | null)[] = inputs.map((input, i) => {
-    const f = `components[${i}]`;
-    const amount = finiteNonNegative(input.amount, `${f}.amount`, "amount");
-    const unit = readUnit(input.unit, `${f}.unit`);
+    const amount = finiteNonNegative(input.amount, componentField(i, "amount"), "amount");
+    const unit = readUnit(input.unit, componentField(i, "unit"));
     const molarMass = species[i].molarMassGPerMol;
     if (unit.kind === "mass" || unit.kind === "volume") {
-      if (unit.kind === "volume") throw new ChemInputError(`A volume (${input.unit}) is not an amount of ${species[i].formula}; give its mass or a concentration.`, { field: `${f}.unit`, code: "bad_unit" });
-      if (!input.per) throw new ChemInputError(`A mass of ${species[i].formula} needs the mass of solvent it was dissolved in or the final volume of solution ("per").`, { field: `${f}.per`, code: "missing_per" });
-      const perAmount = finiteNonNegative(input.per.amount, `${f}.per.amount`, "solvent mass or volume");
-      if (perAmount === 0) throw new ChemInputError("The mass of solvent or final volume must be greater than zero.", { field: `${f}.per.amount`, code: "zero_per" });
-      const per = readUnit(input.per.unit, `${f}.per.unit`);
+      if (unit.kind === "volume") throw new ChemInputError(`A volume (${input.unit}) is not an amount of ${species[i].formula}; give its mass or a concentration.`, { field: componentField(i, "unit"), code: "bad_unit" });
+      if (!input.per) throw new ChemInputError(`A mass of ${species[i].formula} needs the mass of solvent it was dissolved in or the final volume of solution ("per").`, { field: componentField(i, "per"), code: "missing_per" });
+      const perAmount = finiteNonNegative(input.per.amount, componentField(i, "per.amount"), "solvent mass or volume");
+      if (perAmount === 0) throw new ChemInputError("The mass of solvent or final volume must be greater than zero.", { field: componentField(i, "per.amount"), code: "zero_per" });
+      const per = readUnit(input.per.unit, componentField(i, "per.unit"));
       const mol = (amount * unit.factor) / molarMass;
       if (per.kind === "volume") return { type: "molar", c: mol / (perAmount * per.factor) };
       if (per.kind === "mass") {
         const kg = (perAmount * per.factor) / 1000;
-        const group = String(kg);
+        const group = kg;
         const g = solventGroups.get(group) ?? { kg, hydrateKg: 0 };
         g.hydrateKg += mol * species[i].hydrateWater * WATER_MOLAR_MASS_KG;
         solventGroups.set(group, g);
         pending.push({ index: i, mol, group });
         return null;
       }
-      throw new ChemInputError(`"per" must be a mass of solvent (g, kg) or a final volume of solution (mL, L), not ${input.per.unit}.`, { field: `${f}.per.unit`, code: "bad_unit" });
+      throw new ChemInputError(`"per" must be a mass of solvent (g, kg) or a final volume of solution (mL, L), not ${input.per.unit}.`, { field: componentField(i, "per.unit"), code: "bad_unit" });
     }
-    if (input.per) throw new ChemInputError(`"per" applies to a weighed mass only, not to ${input.unit}.`, { field: `${f}.per`, code: "unexpected_per" });
+    if (input.per) throw new ChemInputError(`"per" applies to a weighed mass only, not to ${input.unit}.`, { field: componentField(i, "per"), code: "unexpected_per" });
     if (unit.kind === "molal") return { type: "molal", m: amount * unit.factor };
     if (unit.kind === "molar") return { type: "molar", c: amount * unit.factor };
     if (unit.kind === "mass-concentration") return { type: "molar", c: (amount * unit.factor) / molarMass };
     const w = amount * unit.factor;
-    if (w >= 1) throw new ChemInputError(`A mass fraction must be below 1 (100 %); got ${amount} ${input.unit}.`, { field: `${f}.amount`, code: "bad_amount" });
+    if (w >= 1) throw new ChemInputError(`A mass fraction must be below 1 (100 %); got ${amount} ${input.unit}.`, { field: componentField(i, "amount"), code: "bad_amount" });
     return { type: "fraction", w };
   });
   for (const p of pending) {

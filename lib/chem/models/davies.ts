@@ -23,7 +23,7 @@ export const daviesModel: ActivityModel = {
     // −A z² (√I/(1+√I) − c I) is the common form with β = 1 and b = c A z².
     const cA = coefficient(input) * input.constants.aLog10;
     const b = input.ions.map((ion) => cA * ion.charge * ion.charge);
-    return dhFamilyOutput(RANGE, input, new Float64Array(b.length).fill(1), b);
+    return dhFamilyOutput(RANGE, input, new Array<number>(b.length).fill(1), b);
   },
   substitutedTex(input) {
     const { A, I, sqrtI } = substitutedCore(input);

@@ -2,7 +2,18 @@
 import type { ActivityModelInput, ActivityModelOutput, ModelIon } from "./types";
 
 /** Number formatted for a KaTeX formula (4 significant figures, no exponent noise). */
+const texCache = new Map<number, string>();
+
 export function texNumber(value: number): string {
+  const hit = texCache.get(value);
+  if (hit !== undefined) return hit;
+  const text = formatTexNumber(value);
+  if (texCache.size > 500) texCache.clear();
+  texCache.set(value, text);
+  return text;
+}
+
+function formatTexNumber(value: number): string {
   if (value === 0) return "0";
   const abs = Math.abs(value);
   if (abs >= 1e-3 && abs < 1e4) return String(Number(value.toPrecision(4)));

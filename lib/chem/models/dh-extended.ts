@@ -27,7 +27,7 @@ export const dhExtendedModel: ActivityModel = {
       }
       return B * a;
     });
-    return dhFamilyOutput(RANGE, input, beta, new Float64Array(beta.length), { notes });
+    return dhFamilyOutput(RANGE, input, beta, new Array<number>(beta.length).fill(0), { notes });
   },
   substitutedTex(input) {
     const { A, B, sqrtI } = substitutedCore(input);

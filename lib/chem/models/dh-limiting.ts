@@ -28,7 +28,7 @@ export const dhLimitingModel: ActivityModel = {
     const validityMessages = sqrtI > limit
       ? [`The Debye–Hückel limiting law holds for ${product === 1 ? "1:1 electrolytes" : `charge product |z₊z₋| = ${product}`} only up to √I ≈ ${texNumber(limit)} (here √I = ${texNumber(sqrtI)}); use the extended equation, Davies or Truesdell–Jones.`]
       : [];
-    const zeros = new Float64Array(input.ions.length);
+    const zeros = new Array<number>(input.ions.length).fill(0);
     // The range check is the √I rule above, not a fixed ionic strength.
     return dhFamilyOutput({ label: "Debye–Hückel limiting law", maxIonicStrengthMolal: Number.POSITIVE_INFINITY }, input, zeros, zeros, { validityMessages });
   },

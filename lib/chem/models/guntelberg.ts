@@ -17,7 +17,7 @@ export const guntelbergModel: ActivityModel = {
   maxIonicStrengthMolal: RANGE.maxIonicStrengthMolal,
   compute(input: ActivityModelInput) {
     const n = input.ions.length;
-    return dhFamilyOutput(RANGE, input, new Float64Array(n).fill(1), new Float64Array(n));
+    return dhFamilyOutput(RANGE, input, new Array<number>(n).fill(1), new Array<number>(n).fill(0));
   },
   substitutedTex(input) {
     const { A, sqrtI } = substitutedCore(input);

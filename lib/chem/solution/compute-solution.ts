@@ -3,6 +3,7 @@
  * model → ion and mean-salt activities, osmotic coefficient, validity, warnings, hazards.
  */
 import { solveAmounts } from "../amounts/solve";
+import { componentField } from "../component-field";
 import { debyeHuckelConstantsFrom } from "../debye-huckel-constants";
 import { ChemInputError } from "../errors";
 import { chooseModel } from "../models/auto";
@@ -21,12 +22,12 @@ import { validateSolutionInput } from "./validate";
 export function computeSolution(input: SolutionInput): SolutionResult {
   const { temperatureC, solventId, requested, density } = validateSolutionInput(input);
   const state = solventState(solventId, temperatureC);
-  const species = input.components.map((c, i) => resolveSpecies(c.formula, `components[${i}].formula`));
+  const species = input.components.map((c, i) => resolveSpecies(c.formula, componentField(i, "formula")));
   const amounts = solveAmounts(input.components, species, density, state.densityGPerMl);
   const V = amounts.litresPerKgSolvent;
 
   // Ions, merged over components, in order of first appearance.
-  const byFormula = new Map<string, IonAmount & { key: string }>();
+  const byFormula = new Map<string, IonAmount & { key: string; lnGamma?: number }>();
   let neutralMolality = 0;
   species.forEach((s, i) => {
     const m = amounts.components[i].molality;
@@ -59,13 +60,13 @@ export function computeSolution(input: SolutionInput): SolutionResult {
       throw new ChemInputError(`The ${model.label} model gives no finite activity coefficient for ${ion.formula} in this solution.`, { field: "model", code: "model_failed" });
     }
     const gamma = Math.exp(lnGamma);
+    ion.lnGamma = lnGamma;
     return {
       formula: ion.formula, name: ionByKey(ion.key)?.name, charge: ion.charge, molality: ion.molality, molarity: ion.molarity,
       gamma, activity: gamma * ion.molality, lnGamma, log10Gamma: lnGamma / Math.LN10,
     };
   });
-  const lnGammaByFormula = new Map(ionResults.map((r) => [r.formula, r.lnGamma]));
-  const salts = meanSaltResults(species, amounts.components, lnGammaByFormula);
+  const salts = meanSaltResults(species, amounts.components, (formula) => byFormula.get(formula)?.lnGamma ?? 0);
 
   const totalMolality = neutralMolality + ions.reduce((sum, ion) => sum + ion.molality, 0);
   // A model's φ covers its ions; neutral solutes (γ = 1) dilute the deviation from ideality.

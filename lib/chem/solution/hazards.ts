@@ -6,7 +6,22 @@ import type { ResolvedSpecies } from "../species/resolve";
 
 const FLUORINATED = ["F-", "PF6-", "BF4-", "AsF6-"];
 
+const cache = new Map<string, string[]>();
+
+/** Memoised by the species and solvent: the same solution block asks on every keystroke. */
 export function solutionHazards(species: readonly ResolvedSpecies[], solventId: string): string[] {
+  let key = solventId;
+  for (const s of species) key += "|" + s.formula;
+  let hazards = cache.get(key);
+  if (!hazards) {
+    hazards = computeHazards(species, solventId);
+    if (cache.size > 500) cache.clear();
+    cache.set(key, hazards);
+  }
+  return [...hazards];
+}
+
+function computeHazards(species: readonly ResolvedSpecies[], solventId: string): string[] {
   const hazards = new Set<string>();
   const ions = new Set<string>();
   for (const s of species) {

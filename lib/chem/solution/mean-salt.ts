@@ -10,17 +10,23 @@ import type { SaltResult } from "./types";
 export function meanSaltResults(
   species: readonly ResolvedSpecies[],
   amounts: readonly ComponentAmount[],
-  lnGammaByFormula: ReadonlyMap<string, number>,
+  lnGammaOf: (ionFormula: string) => number,
 ): SaltResult[] {
   const salts: SaltResult[] = [];
   species.forEach((s, component) => {
-    if (s.ions.length < 2 || !s.ions.some((i) => i.charge > 0) || !s.ions.some((i) => i.charge < 0)) return;
+    let cations = 0;
+    let anions = 0;
+    for (const ion of s.ions) {
+      if (ion.charge > 0) cations++;
+      else if (ion.charge < 0) anions++;
+    }
+    if (cations === 0 || anions === 0) return;
     let nu = 0;
     let sumLn = 0;
     let logStoich = 0;
     for (const ion of s.ions) {
       nu += ion.count;
-      sumLn += ion.count * (lnGammaByFormula.get(ion.formula) ?? 0);
+      sumLn += ion.count * lnGammaOf(ion.formula);
       logStoich += ion.count * Math.log(ion.count);
     }
     const lnMeanGamma = sumLn / nu;

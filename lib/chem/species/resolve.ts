@@ -11,6 +11,7 @@ import { inferDissociation } from "./infer";
 import { ionByAlias, ionByKey } from "./ion-index";
 import type { SpeciesKind } from "./salts";
 
+/** Cached and shared between calls: treat as read-only (the types say so). */
 export interface ResolvedSpecies {
   /** Canonical formula as weighed ("CuSO4·5H2O"). */
   formula: string;
@@ -112,10 +113,6 @@ export function resolveSpecies(text: string, field = "formula"): ResolvedSpecies
   for (const ion of resolved.ions) {
     for (const h of ionByKey(ion.key)?.hazards ?? []) if (!resolved.hazards.includes(h)) resolved.hazards.push(h);
   }
-  // Cached results are shared between calls: freeze them so no caller can change another's.
-  for (const list of [resolved.ions, resolved.hazards, resolved.notes, resolved.warnings]) Object.freeze(list);
-  resolved.ions.forEach((ion) => Object.freeze(ion));
-  Object.freeze(resolved);
   if (cache.size > 2000) cache.clear();
   cache.set(text, resolved);
   return resolved;
