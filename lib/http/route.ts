@@ -28,10 +28,17 @@ export function route<C>(handler: (request: Request, context: C) => Promise<Resp
   };
 }
 
-/** Reads a JSON body or answers 400-class with a clear message. */
-export async function readJson(request: Request): Promise<unknown> {
+/** Largest JSON body accepted (an entry document with many blocks is well under 1 MB). */
+export const MAX_JSON_BYTES = 4 * 1024 * 1024;
+
+/** Reads a JSON body: 413 when it is too large, 422 when it is not JSON. */
+export async function readJson(request: Request, maxBytes = MAX_JSON_BYTES): Promise<unknown> {
+  const declared = Number(request.headers.get("content-length") ?? "0");
+  if (declared > maxBytes) throw new AppError("payload_too_large", "The request is too large.");
+  const text = await request.text();
+  if (text.length > maxBytes) throw new AppError("payload_too_large", "The request is too large.");
   try {
-    return await request.json();
+    return JSON.parse(text);
   } catch {
     throw new AppError("invalid_input", "The request body is not valid JSON.");
   }
