@@ -17,6 +17,10 @@ interface SolutionSettingsProps {
 export function SolutionSettings({ value, errors, editable, onChange }: SolutionSettingsProps) {
   const solvents = solventOptions();
   const known = solvents.some((option) => option.value === value.solvent);
+  // A saved block may name a model this build does not offer: show it as saved, and let the
+  // engine's message on the field say so, rather than silently showing another model.
+  const models = modelOptions();
+  const modelKnown = models.some((option) => option.value === value.model);
   return (
     <div className="grid grid-cols-2 gap-3 sm:grid-cols-[1fr_0.8fr_0.8fr_1.4fr]">
       <SelectField
@@ -49,7 +53,7 @@ export function SolutionSettings({ value, errors, editable, onChange }: Solution
       <SelectField
         label="Activity model"
         value={value.model}
-        options={modelOptions()}
+        options={modelKnown ? models : [{ value: value.model, label: value.model }, ...models]}
         disabled={!editable}
         error={errors.get("model")}
         onValueChange={(model) => onChange({ model: model as SolutionBlockInput["model"] })}
