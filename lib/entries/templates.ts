@@ -17,6 +17,14 @@ type Json = EntryNode;
 const text = (value: string): Json => ({ type: "text", text: value });
 const heading = (level: number, value: string): Json => ({ type: "heading", attrs: { level }, content: [text(value)] });
 const paragraph = (value?: string): Json => ({ type: "paragraph", ...(value ? { content: [text(value)] } : {}) });
+const cell = (type: "tableHeader" | "tableCell", value: string): Json => ({ type, content: [paragraph(value)] });
+const table = (header: string[], rows: string[][]): Json => ({
+  type: "table",
+  content: [
+    { type: "tableRow", content: header.map((h) => cell("tableHeader", h)) },
+    ...rows.map((row) => ({ type: "tableRow" as const, content: row.map((v) => cell("tableCell", v)) })),
+  ],
+});
 const checklist = (items: string[]): Json => ({
   type: "taskList",
   content: items.map((item) => ({
@@ -72,6 +80,14 @@ function buildCellPreparation(): EntryDocument {
         "Electrolyte purged with inert gas for the time listed",
         "Cables connected to the channel listed; open-circuit potential steady",
       ]),
+      heading(2, "Scan plan"),
+      table(
+        ["Technique", "Potentials / V vs reference", "Rate or frequency", "Repeats"],
+        [
+          ["Cyclic voltammetry", "−0.2 to +0.6", "10, 25, 50, 100 mV/s", "3 cycles"],
+          ["Impedance", "at E°′, 10 mV rms", "100 kHz to 0.1 Hz", "1"],
+        ],
+      ),
       heading(2, "Observations"),
       paragraph(),
     ],
