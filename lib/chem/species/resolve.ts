@@ -19,15 +19,15 @@ export interface ResolvedSpecies {
   saltFormula: string;
   name?: string;
   kind: SpeciesKind;
-  ions: IonCount[];
+  readonly ions: readonly Readonly<IonCount>[];
   /** g/mol of the weighed form, hydrate water included. */
   molarMassGPerMol: number;
   /** g/mol without water of crystallisation. */
   anhydrousMolarMassGPerMol: number;
   hydrateWater: number;
-  hazards: string[];
-  notes: string[];
-  warnings: string[];
+  readonly hazards: readonly string[];
+  readonly notes: readonly string[];
+  readonly warnings: readonly string[];
 }
 
 const cache = new Map<string, ResolvedSpecies>();
@@ -110,9 +110,11 @@ export function resolveSpecies(text: string, field = "formula"): ResolvedSpecies
     }
     throw error;
   }
+  const hazards = [...resolved.hazards];
   for (const ion of resolved.ions) {
-    for (const h of ionByKey(ion.key)?.hazards ?? []) if (!resolved.hazards.includes(h)) resolved.hazards.push(h);
+    for (const h of ionByKey(ion.key)?.hazards ?? []) if (!hazards.includes(h)) hazards.push(h);
   }
+  resolved = { ...resolved, hazards };
   if (cache.size > 2000) cache.clear();
   cache.set(text, resolved);
   return resolved;
