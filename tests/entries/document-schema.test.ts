@@ -72,6 +72,21 @@ describe("entryDocumentSchema", () => {
   });
 });
 
+describe("entryDocumentSchema size limits", () => {
+  it("refuses a document nested deeper than any entry needs", () => {
+    let node: unknown = para("deep");
+    for (let i = 0; i < 50; i++) node = { type: "blockquote", content: [node] };
+    expect(entryDocumentSchema.safeParse(doc(node)).success).toBe(false);
+  });
+
+  it("refuses a document with more nodes than the limit, and accepts a long ordinary one", () => {
+    const rows = (n: number) => Array.from({ length: n }, (_, i) => para(`line ${i}`));
+    expect(entryDocumentSchema.safeParse(doc(...rows(2000))).success).toBe(true);
+    const huge = { type: "doc", content: Array.from({ length: 50 }, () => ({ type: "bulletList", content: Array.from({ length: 150 }, () => ({ type: "listItem", content: [para("x")] })) })) };
+    expect(entryDocumentSchema.safeParse(huge).success).toBe(false);
+  });
+});
+
 describe("isSafeHref", () => {
   it("allows web, mail and in-app links", () => {
     expect(["https://a.org", "http://a.org", "mailto:pi@lab.org", "/entries/4", "#results"].every(isSafeHref)).toBe(true);
