@@ -62,12 +62,29 @@ export function EditorToolbar({ editor, onPrompt }: EditorToolbarProps) {
       <ToolbarButton label="Checklist" active={state.taskList} onClick={() => chain().toggleTaskList().run()}>
         ☐ Checklist
       </ToolbarButton>
-      <ToolbarButton
-        label={state.inTable ? "Add table row" : "Insert table"}
-        onClick={() => (state.inTable ? chain().addRowAfter().run() : chain().insertTable({ rows: 3, cols: 3, withHeaderRow: true }).run())}
-      >
-        {state.inTable ? "+ Row" : "Table"}
-      </ToolbarButton>
+      {state.inTable ? (
+        <>
+          <ToolbarButton label="Add table row below" onClick={() => chain().addRowAfter().run()}>
+            + Row
+          </ToolbarButton>
+          <ToolbarButton label="Add table column right" onClick={() => chain().addColumnAfter().run()}>
+            + Col
+          </ToolbarButton>
+          <ToolbarButton label="Delete table row" onClick={() => chain().deleteRow().run()}>
+            − Row
+          </ToolbarButton>
+          <ToolbarButton label="Delete table column" onClick={() => chain().deleteColumn().run()}>
+            − Col
+          </ToolbarButton>
+          <ToolbarButton label="Delete table" onClick={() => chain().deleteTable().run()}>
+            − Table
+          </ToolbarButton>
+        </>
+      ) : (
+        <ToolbarButton label="Insert table" onClick={() => chain().insertTable({ rows: 3, cols: 3, withHeaderRow: true }).run()}>
+          Table
+        </ToolbarButton>
+      )}
       <ToolbarDivider />
       <ToolbarButton label="Link" shortcut="Ctrl+K" active={state.link} onClick={() => onPrompt({ kind: "link" })}>
         Link
