@@ -119,3 +119,13 @@ describe("Truesdell–Jones with b-dot fallback (range I ≤ 2 with fitted b, �
     expect(bdot.find((d) => d.salt === "HCl" && d.m === 1)!.inRange).toBe(false);
   });
 });
+
+describe("charge types each model declares (common practice)", () => {
+  const run = (model: ActivityModelId, formula: string) =>
+    computeSolution({ model, components: [{ formula, amount: 0.001, unit: "mol/kg" }] }).validity.messages.join(" ");
+  it("Davies and Güntelberg say so for a 3:1 salt; extended Debye–Hückel (Kielland, |z| ≤ 4) does not", () => {
+    expect(run("davies", "LaCl3")).toMatch(/charge up to ±2; La\^3\+ is beyond it/);
+    expect(run("guntelberg", "K3Fe(CN)6")).toMatch(/charge up to ±2/);
+    expect(run("dh-extended", "K4Fe(CN)6")).not.toMatch(/charge up to/);
+  });
+});

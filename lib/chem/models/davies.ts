@@ -3,11 +3,12 @@
  *   log10 γi = −A zi² ( √I / (1 + √I) − c I ),  c = 0.3 (Davies 1962) or 0.2 (Davies 1938)
  * Empirical, fitted to aqueous data. Range: I ≤ 0.5 mol/kg (common practice); against CRC
  * γ± the error is a few per cent at 0.1 mol/kg and grows to about 10 % at 0.5 (see tests).
+ * Charge types: fitted to salts of ions up to |z| = 2 (common practice).
  */
 import type { ActivityModel, ActivityModelInput } from "./types";
 import { dhFamilyOutput, substitutedCore } from "./dh-common";
 
-const RANGE = { label: "Davies", maxIonicStrengthMolal: 0.5, waterParameters: "the empirical linear coefficient" };
+const RANGE = { maxChargeMagnitude: 2, label: "Davies", maxIonicStrengthMolal: 0.5, waterParameters: "the empirical linear coefficient" };
 
 function coefficient(input: ActivityModelInput): number {
   return input.options?.daviesCoefficient ?? 0.3;

@@ -123,7 +123,7 @@ export function evaluateExtendedForm(
  * ionic-strength range and ion-association checks, and the note for non-water solvents.
  */
 export function dhFamilyOutput(
-  model: { label: string; maxIonicStrengthMolal: number; waterParameters?: string },
+  model: { label: string; maxIonicStrengthMolal: number; waterParameters?: string; maxChargeMagnitude?: number },
   input: ActivityModelInput,
   beta: ArrayLike<number>,
   b: ArrayLike<number>,
@@ -132,9 +132,18 @@ export function dhFamilyOutput(
   const { lnGamma, osmoticCoefficient } = evaluateExtendedForm(input, beta, b);
   const validityMessages = [...(extra.validityMessages ?? [])];
   if (validityMessages.length === 0) validityMessages.push(...ionicStrengthMessage(model.label, model.maxIonicStrengthMolal, input));
+  validityMessages.push(...chargeTypeMessage(model, input));
   validityMessages.push(...ionAssociationMessage(input));
   // Parameters fitted for water are outside their domain in another solvent: a validity matter.
   if (model.waterParameters) validityMessages.push(...waterOnlyNote(model.label, model.waterParameters, input.solvent));
   const notes = [...(extra.notes ?? [])];
   return { lnGamma, osmoticCoefficient, validityMessages, notes };
+}
+
+/** Ions of higher charge than the model was built for (its documented charge types). */
+export function chargeTypeMessage(model: { label: string; maxChargeMagnitude?: number }, input: ActivityModelInput): string[] {
+  const limit = model.maxChargeMagnitude;
+  if (limit === undefined) return [];
+  const beyond = input.ions.filter((i) => Math.abs(i.charge) > limit && i.molality > 0).map((i) => i.formula);
+  return beyond.length ? [`${model.label} is documented for ions of charge up to ±${limit}; ${beyond.join(", ")} ${beyond.length > 1 ? "are" : "is"} beyond it.`] : [];
 }

@@ -2,13 +2,13 @@
  * Extended Debye–Hückel equation with Kielland's (1937) ion sizes:
  *   log10 γi = −A zi² √I / (1 + B åi √I)
  * Ion sizes å: Kielland (1937) J. Am. Chem. Soc. 59, 1675 (data/ion-size-kielland.ts).
- * Range: I ≤ 0.1 mol/kg, the range of Kielland's table. The sizes are for water.
+ * Range: I ≤ 0.1 mol/kg and |z| ≤ 4, the range of Kielland's table. The sizes are for water.
  */
 import type { ActivityModel, ActivityModelInput } from "./types";
 import { dhFamilyOutput, substitutedCore } from "./dh-common";
 import { assumedIonSize, kiellandIonSize } from "./ion-parameters";
 
-const RANGE = { label: "Extended Debye–Hückel (Kielland ion sizes)", maxIonicStrengthMolal: 0.1, waterParameters: "Kielland's ion sizes" };
+const RANGE = { maxChargeMagnitude: 4, label: "Extended Debye–Hückel (Kielland ion sizes)", maxIonicStrengthMolal: 0.1, waterParameters: "Kielland's ion sizes" };
 
 export const dhExtendedModel: ActivityModel = {
   id: "dh-extended",
