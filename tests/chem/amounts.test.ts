@@ -69,6 +69,11 @@ describe("amounts in every unit the issue names (through mathjs)", () => {
     expect(r.components[1].molality).toBeCloseTo(0.585 / molarMass("NaCl") / waterKg, 9);
   });
 
+  it("in a non-aqueous solvent, a hydrate's water is flagged: the solvent is no longer pure", () => {
+    const r = computeSolution({ solvent: "acetonitrile", components: [{ formula: "LiClO4·3H2O", amount: 1, unit: "g", per: { amount: 100, unit: "g" } }] });
+    expect(r.warnings.join(" ")).toMatch(/water of crystallisation of LiClO4·3H2O.*no longer pure/);
+  });
+
   it("mg and mass concentration (g/L)", () => {
     expect(solve([{ formula: "NaCl", amount: 584.4, unit: "mg", per: { amount: 1, unit: "kg" } }]).components[0].molality).toBeCloseTo(0.01, 6);
     expect(solve([{ formula: "NaCl", amount: 5.844, unit: "g/L" }]).components[0].molarity).toBeCloseTo(0.1, 6);

@@ -87,6 +87,10 @@ export function computeSolution(input: SolutionInput): SolutionResult {
   for (const n of output.notes) if (!notes.includes(n)) notes.push(n);
   warnings.push(...amounts.warnings, ...state.notes);
   if (balance.warning) warnings.push(balance.warning);
+  if (state.solvent.id !== "water") {
+    const hydrates = species.filter((s) => s.hydrateWater > 0).map((s) => s.formula);
+    if (hydrates.length) warnings.push(`The water of crystallisation of ${hydrates.join(", ")} is counted as solvent mass, but it is water in ${state.solvent.name}: the solvent is no longer pure.`);
+  }
 
   return {
     temperatureC,
