@@ -29,14 +29,18 @@ describe("autosave", () => {
     await page.close();
   });
 
-  it("keeps edits typed just before a reload and saves them after it", async () => {
+  it("keeps edits the server never received and saves them after a reload", async () => {
     const page = await browser.context.newPage();
     const url = await newBlankEntry(page, "E2E reload keeps edits");
+    // The server is unreachable for saves: the edit can only live in this browser.
+    await page.route("**/api/entries/*/content", (route) => route.abort("internetdisconnected"));
     await page.getByRole("textbox", { name: /^Text of/ }).click();
     await page.keyboard.type("Weighed 0.7455 g KCl.");
-    // Reload before the debounced save can run: the edit lives only in this browser now.
+    await waitForStatus(page, "offline");
     await page.goto(url);
     await page.getByText("Restored edits this browser kept").waitFor();
+    // The server comes back: the kept edit goes to it on the next retry.
+    await page.unroute("**/api/entries/*/content");
     await waitForStatus(page, "saved");
     await page.goto(url);
     await page.getByText("Weighed 0.7455 g KCl.").waitFor();
