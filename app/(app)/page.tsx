@@ -29,13 +29,14 @@ function EntryList({ title, entries, empty, testId }: { title: string; entries: 
 
 export default async function BenchPage() {
   const actor = await requireActor();
-  const [projects, drafts, returned, submitted, queue] = await Promise.all([
+  const [projects, mine, queue] = await Promise.all([
     listProjects(actor),
-    listEntries(actor, { author: "me", status: "draft", limit: 8 }),
-    listEntries(actor, { author: "me", status: "returned", limit: 8 }),
-    listEntries(actor, { author: "me", status: "submitted", limit: 8 }),
+    listEntries(actor, { author: "me", limit: 100 }), // newest first; split by status below
     countReviewQueue(actor),
   ]);
+  const withStatus = (...statuses: string[]) => mine.filter((e) => statuses.includes(e.status)).slice(0, 8);
+  const drafts = withStatus("returned", "draft");
+  const submitted = withStatus("submitted");
   const firstName = actor.name.replace(/^Dr\.\s*/, "").split(" ")[0];
   return (
     <div className="space-y-8">
@@ -61,7 +62,7 @@ export default async function BenchPage() {
       ) : null}
 
       <div className="grid gap-5 lg:grid-cols-2">
-        <EntryList title="My drafts" entries={[...returned, ...drafts]} empty="No drafts. Start one from a template." testId="my-drafts" />
+        <EntryList title="My drafts" entries={drafts} empty="No drafts. Start one from a template." testId="my-drafts" />
         <EntryList title="Waiting for countersignature" entries={submitted} empty="Nothing submitted." testId="my-submitted" />
       </div>
 

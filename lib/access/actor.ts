@@ -7,7 +7,7 @@ import { AppError } from "@/lib/errors";
 import { getDb } from "@/lib/server/database";
 import type { Actor } from "./authorize";
 
-export { assertCan, assertSameLab, type Actor } from "./authorize";
+export { assertCan, type Actor } from "./authorize";
 
 /** Resolves a session user id to an Actor; null when the member is unknown or deactivated. */
 export async function actorForUserId(userId: string): Promise<Actor | null> {

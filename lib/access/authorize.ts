@@ -16,8 +16,3 @@ export function assertCan(actor: Actor, permission: Permission): void {
     throw new AppError("forbidden", "Your role in this lab does not allow that.");
   }
 }
-
-/** Lab data belongs to one lab: anything else is reported as not found, not as forbidden. */
-export function assertSameLab(actor: Actor, labId: string | null | undefined): void {
-  if (!labId || labId !== actor.labId) throw new AppError("not_found", "Not found.");
-}

@@ -1,5 +1,4 @@
 import "server-only";
-import { eq } from "drizzle-orm";
 import type { Database } from "@/db/client";
 import { insertAuditEvent } from "@/db/queries/audit";
 import { findLabBySlug, insertLab } from "@/db/queries/labs";
@@ -41,8 +40,4 @@ export async function seedDemo(db: Database, hooks: SeedHooks = {}): Promise<{ c
     created.push(demo.slug);
   }
   return { created, skipped };
-}
-
-export async function projectIdsOfLab(db: Database, labId: string) {
-  return db.select({ id: projects.id, name: projects.name }).from(projects).where(eq(projects.labId, labId));
 }

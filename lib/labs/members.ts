@@ -2,7 +2,7 @@ import "server-only";
 import { insertAuditEvent } from "@/db/queries/audit";
 import { findLabById } from "@/db/queries/labs";
 import {
-  countActiveAdmins, findLabMember, findUserByEmail, listLabMembers, setMemberActive, updateMemberRole,
+  countActiveAdmins, findLabMember, listLabMembers, setMemberActive, updateMemberRole,
 } from "@/db/queries/users";
 import { listOpenInvitations } from "@/db/queries/invitations";
 import type { Role } from "@/db/schema/enums";
@@ -20,9 +20,13 @@ export interface MemberDto {
   active: boolean;
 }
 
+function toMemberDto(row: { id: string; email: string; name: string; role: string; active: boolean }): MemberDto {
+  return { id: row.id, email: row.email, name: row.name, role: row.role as Role, active: row.active };
+}
+
 export async function listMembers(actor: Actor): Promise<MemberDto[]> {
   const rows = await listLabMembers(getDb(), actor.labId);
-  return rows.map((r) => ({ id: r.id, email: r.email, name: r.name, role: r.role as Role, active: r.active }));
+  return rows.map(toMemberDto);
 }
 
 export async function listPendingInvitations(actor: Actor) {
@@ -46,7 +50,7 @@ export async function changeMemberRole(actor: Actor, raw: unknown): Promise<Memb
     const updated = await updateMemberRole(tx, actor.labId, userId, role);
     if (!updated) throw new AppError("not_found", "That person is not a member of your lab.");
     await insertAuditEvent(tx, { labId: actor.labId, actorId: actor.userId, action: "member.role_changed", targetType: "user", targetId: userId, details: { from: member.role, to: role } });
-    return { id: updated.id, email: updated.email, name: updated.name, role: updated.role as Role, active: updated.active };
+    return toMemberDto(updated);
   });
 }
 
@@ -63,10 +67,6 @@ export async function setMemberActivation(actor: Actor, raw: unknown, active: bo
     const updated = await setMemberActive(tx, actor.labId, userId, active);
     if (!updated) throw new AppError("not_found", "That person is not a member of your lab.");
     await insertAuditEvent(tx, { labId: actor.labId, actorId: actor.userId, action: active ? "member.reactivated" : "member.deactivated", targetType: "user", targetId: userId });
-    return { id: updated.id, email: updated.email, name: updated.name, role: updated.role as Role, active: updated.active };
+    return toMemberDto(updated);
   });
-}
-
-export async function emailIsTaken(email: string): Promise<boolean> {
-  return Boolean(await findUserByEmail(getDb(), email));
 }

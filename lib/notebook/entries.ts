@@ -1,19 +1,17 @@
 import "server-only";
 import { insertAuditEvent } from "@/db/queries/audit";
 import {
-  countEntriesByStatus, findEntryHeader, findLabEntry, insertEntry, insertRevision, listEntries as queryEntries, updateEntry,
+  countEntriesByStatus, findEntryHeader, findLabEntry, insertEntry, listEntries as queryEntries, updateEntry,
 } from "@/db/queries/entries";
 import { findLabProject } from "@/db/queries/projects";
 import type { EntryStatus } from "@/db/schema/enums";
 import { assertCan, type Actor } from "@/lib/access/authorize";
-import { canonicalHash } from "@/lib/entries/canonical-hash";
 import { findTemplate } from "@/lib/entries/templates";
 import { AppError } from "@/lib/errors";
 import { getDb } from "@/lib/server/database";
 import { createEntrySchema, entryListQuerySchema } from "@/lib/validation/entries";
 import { parseInput, parseRecordId } from "@/lib/validation/parse";
-import { documentPlainText } from "./plain-text";
-import { writeSolutionRecords } from "./write-solutions";
+import { appendRevision } from "./append-revision";
 
 export const EMPTY_DOCUMENT = { type: "doc", content: [{ type: "paragraph" }] };
 
@@ -60,13 +58,7 @@ export async function createEntry(actor: Actor, raw: unknown): Promise<{ id: str
     if (!project || project.archivedAt) throw new AppError("invalid_input", "Choose a project of your lab.", { fieldErrors: { projectId: ["Choose a project of your lab."] } });
     const entry = await insertEntry(tx, { labId: actor.labId, projectId: project.id, title: input.title, authorId: actor.userId, template: template?.id ?? null });
     if (template) {
-      const content = template.build();
-      const revision = await insertRevision(tx, {
-        entryId: entry.id, number: 1, title: input.title, content: content as unknown as Record<string, unknown>,
-        contentText: documentPlainText(content), contentHash: canonicalHash({ title: input.title, content }), authorId: actor.userId,
-      });
-      await writeSolutionRecords(tx, { labId: actor.labId, entryId: entry.id, revisionId: revision.id }, content);
-      await updateEntry(tx, actor.labId, entry.id, { currentRevisionNumber: 1 });
+      await appendRevision(tx, { labId: actor.labId, entryId: entry.id, number: 1, title: input.title, content: template.build(), authorId: actor.userId });
     }
     await insertAuditEvent(tx, { labId: actor.labId, actorId: actor.userId, action: "entry.created", targetType: "entry", targetId: entry.id, details: { template: template?.id ?? null } });
     return { id: entry.id };

@@ -5,7 +5,7 @@ import { assertCan, type Actor } from "@/lib/access/authorize";
 import { AppError } from "@/lib/errors";
 import { getDb } from "@/lib/server/database";
 import { parseRecordId } from "@/lib/validation/parse";
-import { EMPTY_DOCUMENT } from "./entries";
+import { EMPTY_DOCUMENT, getEntryHeader } from "./entries";
 import { summariseChange } from "./revision-changes";
 
 export interface RevisionDto {
@@ -24,22 +24,42 @@ async function entryOf(actor: Actor, entryId: string) {
   return entry;
 }
 
-export async function getRevision(actor: Actor, entryId: string, number: number): Promise<RevisionDto> {
-  const entry = await entryOf(actor, entryId);
+async function findRevisionOrThrow(entryId: string, number: number) {
   if (!Number.isInteger(number) || number < 1) throw new AppError("not_found", "Revision not found.");
-  const found = await findRevision(getDb(), entry.id, number);
+  const found = await findRevision(getDb(), entryId, number);
   if (!found) throw new AppError("not_found", "Revision not found.");
-  const r = found.revision;
-  return { number: r.number, title: r.title, content: r.content, contentHash: r.contentHash, authorName: found.authorName, createdAt: r.createdAt.toISOString() };
+  return found;
+}
+
+async function revisionOf(entryId: string, number: number): Promise<RevisionDto> {
+  return toRevisionDto(await findRevisionOrThrow(entryId, number));
+}
+
+function toRevisionDto({ revision: r, authorName }: NonNullable<Awaited<ReturnType<typeof findRevision>>>): RevisionDto {
+  return { number: r.number, title: r.title, content: r.content, contentHash: r.contentHash, authorName, createdAt: r.createdAt.toISOString() };
 }
 
 /** The newest revision, or an empty document at revision 0 for a new entry. */
-export async function getCurrentContent(actor: Actor, entryId: string): Promise<RevisionDto> {
-  const entry = await entryOf(actor, entryId);
+function currentOf(entry: { id: string; title: string; currentRevisionNumber: number; createdAt: Date }): Promise<RevisionDto> | RevisionDto {
   if (entry.currentRevisionNumber === 0) {
     return { number: 0, title: entry.title, content: EMPTY_DOCUMENT, contentHash: "", authorName: "", createdAt: entry.createdAt.toISOString() };
   }
-  return getRevision(actor, entryId, entry.currentRevisionNumber);
+  return revisionOf(entry.id, entry.currentRevisionNumber);
+}
+
+export async function getRevision(actor: Actor, entryId: string, number: number): Promise<RevisionDto> {
+  const entry = await entryOf(actor, entryId);
+  return revisionOf(entry.id, number);
+}
+
+export async function getCurrentContent(actor: Actor, entryId: string): Promise<RevisionDto> {
+  return currentOf(await entryOf(actor, entryId));
+}
+
+/** What the entry page and GET /api/entries/:id show: the header and the current content. */
+export async function openEntry(actor: Actor, entryId: string) {
+  const header = await getEntryHeader(actor, entryId);
+  return { ...header, current: await currentOf(header.entry) };
 }
 
 export async function getRevisionHistory(actor: Actor, entryId: string) {
@@ -51,12 +71,14 @@ export async function getRevisionHistory(actor: Actor, entryId: string) {
   }));
 }
 
-/** The server-computed solution rows of one revision (what the solution finder searches). */
-export async function getRevisionSolutions(actor: Actor, entryId: string, number: number) {
+/** One revision with the server-computed solution rows it produced (what the solution finder searches). */
+export async function getRevisionWithSolutions(actor: Actor, entryId: string, number: number) {
   const entry = await entryOf(actor, entryId);
-  const found = await findRevision(getDb(), entry.id, number);
-  if (!found) throw new AppError("not_found", "Revision not found.");
+  const found = await findRevisionOrThrow(entry.id, number);
   const rows = await listRevisionSolutions(getDb(), actor.labId, found.revision.id);
   const components = await listComponentsOf(getDb(), rows.map((r) => r.id));
-  return rows.map((r) => ({ ...r, components: components.filter((c) => c.solutionId === r.id) }));
+  return {
+    revision: toRevisionDto(found),
+    solutions: rows.map((r) => ({ ...r, components: components.filter((c) => c.solutionId === r.id) })),
+  };
 }

@@ -1,15 +1,13 @@
 import "server-only";
 import { insertAuditEvent } from "@/db/queries/audit";
-import { findLabEntry, findRevision, insertRevision, updateEntry } from "@/db/queries/entries";
+import { findLabEntry, findRevision } from "@/db/queries/entries";
 import { assertCan, type Actor } from "@/lib/access/authorize";
-import { canonicalHash } from "@/lib/entries/canonical-hash";
 import { describeDocumentErrors, entryDocumentSchema } from "@/lib/entries/document-schema";
 import { AppError } from "@/lib/errors";
 import { getDb } from "@/lib/server/database";
 import { saveEntrySchema } from "@/lib/validation/entries";
 import { parseInput, parseRecordId } from "@/lib/validation/parse";
-import { documentPlainText } from "./plain-text";
-import { writeSolutionRecords } from "./write-solutions";
+import { appendRevision, revisionHash } from "./append-revision";
 
 export interface SaveResult {
   revision: number;
@@ -37,7 +35,7 @@ export async function saveEntryContent(actor: Actor, entryId: string, raw: unkno
     });
   }
   const content = parsedDoc.data;
-  const contentHash = canonicalHash({ title: input.title, content });
+  const contentHash = revisionHash(input.title, content);
 
   return getDb().transaction(async (tx) => {
     const entry = await findLabEntry(tx, actor.labId, parseRecordId(entryId, "Entry"), true);
@@ -56,12 +54,7 @@ export async function saveEntryContent(actor: Actor, entryId: string, raw: unkno
       }
     }
     const number = entry.currentRevisionNumber + 1;
-    const revision = await insertRevision(tx, {
-      entryId: entry.id, number, title: input.title, content: content as unknown as Record<string, unknown>,
-      contentText: documentPlainText(content), contentHash, authorId: actor.userId,
-    });
-    const solutions = await writeSolutionRecords(tx, { labId: actor.labId, entryId: entry.id, revisionId: revision.id }, content);
-    await updateEntry(tx, actor.labId, entry.id, { currentRevisionNumber: number, title: input.title, updatedAt: new Date() });
+    const { solutions } = await appendRevision(tx, { labId: actor.labId, entryId: entry.id, number, title: input.title, content, authorId: actor.userId });
     if (number === 1) await insertAuditEvent(tx, { labId: actor.labId, actorId: actor.userId, action: "entry.first_saved", targetType: "entry", targetId: entry.id });
     return { revision: number, contentHash, created: true, solutions };
   });

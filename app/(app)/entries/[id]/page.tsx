@@ -5,8 +5,7 @@ import { EntryWorkspace } from "@/components/entries/entry-workspace";
 import { StatusChip } from "@/components/entries/status-chip";
 import { requireActor } from "@/lib/access/actor";
 import { isAppError } from "@/lib/errors";
-import { getEntryHeader } from "@/lib/notebook/entries";
-import { getCurrentContent } from "@/lib/notebook/revisions";
+import { openEntry } from "@/lib/notebook/revisions";
 import { archiveEntryAction, submitEntryAction } from "./actions";
 import { EntryActions } from "./entry-actions";
 
@@ -15,8 +14,7 @@ export const metadata: Metadata = { title: "Entry" };
 async function load(id: string) {
   const actor = await requireActor();
   try {
-    const header = await getEntryHeader(actor, id);
-    const current = await getCurrentContent(actor, id);
+    const { current, ...header } = await openEntry(actor, id);
     return { actor, header, current };
   } catch (error) {
     if (isAppError(error) && error.code === "not_found") notFound();

@@ -1,15 +1,13 @@
 import { authedRoute, readJson } from "@/lib/http/route";
-import { getEntryHeader, setEntryArchived } from "@/lib/notebook/entries";
-import { getCurrentContent } from "@/lib/notebook/revisions";
+import { setEntryArchived } from "@/lib/notebook/entries";
+import { openEntry } from "@/lib/notebook/revisions";
 import { archiveEntrySchema } from "@/lib/validation/entries";
 import { parseInput } from "@/lib/validation/parse";
 
 type Params = { id: string };
 
 export const GET = authedRoute<Params>(async (_request, actor, params) => {
-  const { id } = params;
-  const { entry, authorName, projectName } = await getEntryHeader(actor, id);
-  const current = await getCurrentContent(actor, id);
+  const { entry, authorName, projectName, current } = await openEntry(actor, params.id);
   return Response.json({
     entry: { id: entry.id, title: entry.title, status: entry.status, revision: entry.currentRevisionNumber, authorName, projectName, archived: entry.archivedAt !== null },
     content: current.content,
