@@ -46,13 +46,7 @@ pg_ensure_database "$PG_PORT" ionleaf ionleaf "$(cat "$STATE/db-password")"
 
 export DATABASE_URL="postgres://ionleaf:$(cat "$STATE/db-password")@127.0.0.1:$PG_PORT/ionleaf"
 export AUTH_SECRET="$(cat "$STATE/auth-secret")"
-export AUTH_TRUST_HOST=true
-export APP_URL="http://localhost:$APP_PORT"
-export AUTH_URL="$APP_URL"
-export SMTP_HOST=127.0.0.1 SMTP_PORT="$SMTP_PORT"
-export MAIL_CATCHER_URL="http://127.0.0.1:$MAIL_HTTP_PORT"
-export UPLOAD_DIR="$ROOT_DIR/uploads"
-export NEXT_TELEMETRY_DISABLED=1
+export_app_env "$APP_PORT" "$SMTP_PORT" "$MAIL_HTTP_PORT" "$ROOT_DIR/uploads"
 
 say "Applying migrations"
 node_modules/.bin/tsx scripts/migrate.ts
@@ -60,9 +54,7 @@ say "Seeding the demo scenario (once)"
 node_modules/.bin/tsx --tsconfig tsconfig.scripts.json scripts/seed.ts
 
 say "Starting the mail catcher (SMTP 127.0.0.1:$SMTP_PORT)"
-node_modules/.bin/tsx scripts/mail-catcher.ts --smtp-port "$SMTP_PORT" --http-port "$MAIL_HTTP_PORT" \
-  --store "$STATE/mail-catcher.json" >"$STATE/logs/mail-catcher.log" 2>&1 &
-CATCHER_PID=$!
+start_mail_catcher "$SMTP_PORT" "$MAIL_HTTP_PORT" "$STATE/logs/mail-catcher.log" "$STATE/mail-catcher.json"
 
 if [ "$MODE" = "production" ]; then
   say "Building the app (next build)"

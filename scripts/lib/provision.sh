@@ -122,3 +122,23 @@ wait_for_http() {
     i=$((i + 1)); [ "$i" -ge $((limit * 2)) ] && return 1; sleep 0.5
   done
 }
+
+# export_app_env APP_PORT SMTP_PORT MAIL_HTTP_PORT UPLOAD_DIR: what the app reads (lib/env.ts)
+# besides DATABASE_URL and AUTH_SECRET, which each script sets for its own database.
+export_app_env() {
+  export AUTH_TRUST_HOST=true
+  export APP_URL="http://localhost:$1"
+  export AUTH_URL="$APP_URL"
+  export SMTP_HOST=127.0.0.1 SMTP_PORT="$2"
+  export MAIL_CATCHER_URL="http://127.0.0.1:$3"
+  export UPLOAD_DIR="$4"
+  mkdir -p "$UPLOAD_DIR"
+  export NEXT_TELEMETRY_DISABLED=1
+}
+
+# start_mail_catcher SMTP_PORT HTTP_PORT LOGFILE [STORE]: sets CATCHER_PID, waits until it answers.
+start_mail_catcher() {
+  node_modules/.bin/tsx scripts/mail-catcher.ts --smtp-port "$1" --http-port "$2" ${4:+--store "$4"} >"$3" 2>&1 &
+  CATCHER_PID=$!
+  wait_for_http "http://127.0.0.1:$2/health" 30 || die "the mail catcher did not start (log: $3)"
+}
