@@ -13,6 +13,8 @@ export const GAS_CONSTANT_J_PER_MOL_K = AVOGADRO_PER_MOL * BOLTZMANN_J_PER_K;
 /** 0 °C in kelvin (definition of the Celsius scale). */
 export const ZERO_CELSIUS_K = 273.15;
 export const LN10 = Math.LN10;
+/** Molar mass of water, kg/mol, from the IUPAC 2021 abridged standard atomic weights (2 × 1.008 + 15.999 g/mol). */
+export const WATER_MOLAR_MASS_KG_PER_MOL = 0.018015;
 
 export function kelvin(temperatureC: number): number {
   return temperatureC + ZERO_CELSIUS_K;

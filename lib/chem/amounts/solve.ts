@@ -14,6 +14,7 @@ import { ChemInputError } from "../errors";
 import type { ResolvedSpecies } from "../species/resolve";
 import { componentField } from "../component-field";
 import { readUnit } from "./units";
+import { WATER_MOLAR_MASS_KG_PER_MOL } from "../constants";
 
 export interface AmountInput {
   amount: number;
@@ -37,7 +38,6 @@ export interface SolvedAmounts {
 
 type Spec = { type: "molal"; m: number } | { type: "molar"; c: number } | { type: "fraction"; w: number };
 
-const WATER_MOLAR_MASS_KG = 0.018015; // H2O from IUPAC 2021 abridged atomic weights
 
 function finiteNonNegative(value: unknown, field: string, what: string): number {
   if (typeof value !== "number" || !Number.isFinite(value)) {
@@ -66,7 +66,7 @@ function specsOf(inputs: readonly AmountInput[], species: readonly ResolvedSpeci
         const kg = (perAmount * per.factor) / 1000;
         const group = kg;
         const g = solventGroups.get(group) ?? { kg, hydrateKg: 0 };
-        g.hydrateKg += mol * species[i].hydrateWater * WATER_MOLAR_MASS_KG;
+        g.hydrateKg += mol * species[i].hydrateWater * WATER_MOLAR_MASS_KG_PER_MOL;
         solventGroups.set(group, g);
         pending.push({ index: i, mol, group });
         return null;

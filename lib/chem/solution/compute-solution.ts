@@ -74,7 +74,8 @@ export function computeSolution(input: SolutionInput): SolutionResult {
   const phi = output.osmoticCoefficient === undefined
     ? osmoticCoefficientByGibbsDuhem(model, modelInput, output.lnGamma, neutralMolality)
     : totalMolality > 0 ? 1 + (ionMolality / totalMolality) * (output.osmoticCoefficient - 1) : 1;
-  const aw = state.solvent.id === "water" ? output.waterActivity ?? waterActivityFromOsmotic(phi, totalMolality) : undefined;
+  // From the combined φ, so neutral solutes count; a model's own a_w counts its ions only.
+  const aw = state.solvent.id === "water" ? waterActivityFromOsmotic(phi, totalMolality) : undefined;
 
   const messages = [...output.validityMessages, ...ionPairingMessage(state.relativePermittivity, temperatureC, I.molar)];
   if (choice && !choice.covered) messages.unshift(`No model covers this composition: ${choice.reason}.`);

@@ -5,11 +5,9 @@
  * The integral is taken with t = u² (ln γ goes as √t at infinite dilution) and 8-point
  * Gauss–Legendre quadrature. Water activity: ln a_w = −φ M_w Σm (M_w in kg/mol).
  */
+import { WATER_MOLAR_MASS_KG_PER_MOL } from "../constants";
+import { GL_NODES as NODES, GL_WEIGHTS as WEIGHTS } from "../models/dh-common";
 import type { ActivityModel, ActivityModelInput } from "../models/types";
-
-// Gauss–Legendre nodes and weights on [0, 1] (8 points), from the standard tables.
-const NODES = [0.0198550717512319, 0.1016667612931866, 0.2372337950418355, 0.4082826787521751, 0.5917173212478249, 0.7627662049581645, 0.8983332387068134, 0.9801449282487681];
-const WEIGHTS = [0.0506142681451881, 0.1111905172266872, 0.1568533229389436, 0.1813418916891810, 0.1813418916891810, 0.1568533229389436, 0.1111905172266872, 0.0506142681451881];
 
 export function osmoticCoefficientByGibbsDuhem(
   model: ActivityModel,
@@ -41,6 +39,5 @@ export function osmoticCoefficientByGibbsDuhem(
 }
 
 export function waterActivityFromOsmotic(osmoticCoefficient: number, totalMolality: number): number {
-  const WATER_MOLAR_MASS_KG = 0.018015;
-  return Math.exp(-osmoticCoefficient * WATER_MOLAR_MASS_KG * totalMolality);
+  return Math.exp(-osmoticCoefficient * WATER_MOLAR_MASS_KG_PER_MOL * totalMolality);
 }

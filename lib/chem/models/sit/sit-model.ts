@@ -13,6 +13,7 @@ import { ChemInputError } from "../../errors";
 import { ionKey } from "../pitzer/ion-key";
 import type { ActivityModel, ActivityModelInput, ActivityModelOutput, ModelIon } from "../types";
 import { SIT_EPSILON_25C } from "./epsilon-table";
+import { waterActivityFromOsmotic } from "../../solution/osmotic";
 
 /** Ba_j of the SIT Debye–Hückel term, kg^½ mol^−½ (NEA-TDB convention, Grenthe et al. 1992). */
 const SIT_BA = 1.5;
@@ -79,7 +80,7 @@ export function computeSit(input: ActivityModelInput): ActivityModelOutput {
   const v = 1 + SIT_BA * sqrtI;
   const dh = ((2 * A) / SIT_BA ** 3) * (v - 2 * Math.log(v) - 1 / v);
   const osmoticCoefficient = sumM > 0 ? 1 - (Math.LN10 / sumM) * (dh - epsilonSum) : 1;
-  const waterActivity = Math.exp(-osmoticCoefficient * 0.01801528 * sumM);
+  const waterActivity = waterActivityFromOsmotic(osmoticCoefficient, sumM);
 
   const validityMessages: string[] = [];
   if (I > SIT_MAX_IONIC_STRENGTH_MOLAL) {

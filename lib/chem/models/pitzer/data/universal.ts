@@ -1,3 +1,5 @@
+import { WATER_MOLAR_MASS_KG_PER_MOL } from "../../../constants";
+
 /**
  * Constants of the Pitzer equations that are the same for every salt.
  * b = 1.2 kg^½ mol^−½: Pitzer (1973) J. Phys. Chem. 77, 268, chosen once for all electrolytes.
@@ -5,12 +7,12 @@
  * α1 = 2.0 with no β2 for 1:1, 1:2, 2:1, 3:1, 4:1, 5:1 salts; α1 = 1.4 and α2 = 12 for 2:2
  * (and higher symmetric) salts. Each parameter row carries its own α, so these are only
  * the fall-backs for rows that leave them blank.
- * M_w = 0.01801528 kg/mol: molar mass of water from IUPAC 2021 standard atomic weights.
+ * M_w: molar mass of water, the one constant lib/chem uses everywhere (../../../constants).
  */
 export const PITZER_UNIVERSAL = {
   b: 1.2,
   alpha1Default: 2.0,
   alpha1TwoTwo: 1.4,
   alpha2TwoTwo: 12,
-  waterMolarMassKgPerMol: 0.01801528,
+  waterMolarMassKgPerMol: WATER_MOLAR_MASS_KG_PER_MOL,
 } as const;
