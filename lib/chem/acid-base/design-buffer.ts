@@ -12,7 +12,7 @@ import { cautionsFor } from "./cautions";
 import { conditionsAt } from "./conditions";
 import type { BufferReagent, StrongElectrolyte } from "./data/buffer-reagents";
 import { TITRATE_DEFAULTS, TWO_FORM_DEFAULTS } from "./data/default-forms";
-import { ACID_SYSTEMS, type AcidSystemData } from "./data/pka-goldberg-2002";
+import { ACID_SYSTEMS, acidSystem, type AcidSystemData } from "./data/pka-goldberg-2002";
 import { asUnknown, type Solved, solveAmounts, strongUnknown, type Unknown } from "./recipe-solve";
 import { requireReagent } from "./reagent-lookup";
 import { equilibrate, solventKgPerLitre } from "./speciate";
@@ -27,7 +27,7 @@ function bufferReagent(formula: string, system: AcidSystemData, field: string): 
 }
 
 function checkInput(input: DesignBufferInput): AcidSystemData {
-  const system = ACID_SYSTEMS.find((s) => s.id === input.buffer);
+  const system = acidSystem(input.buffer);
   if (!system) {
     throw new ChemInputError(`Unknown buffer "${input.buffer}". Ionleaf designs: ${ACID_SYSTEMS.map((s) => s.id).join(", ")}.`, {
       field: "buffer",

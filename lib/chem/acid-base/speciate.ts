@@ -8,7 +8,7 @@ import { molarMass } from "../formula";
 import { describeConvention } from "./activity";
 import { cautionsFor } from "./cautions";
 import { type Conditions, conditionsAt, ionicStrengthWarning } from "./conditions";
-import { ACID_SYSTEMS, type BufferSystemId } from "./data/pka-goldberg-2002";
+import { acidSystem, type BufferSystemId } from "./data/pka-goldberg-2002";
 import { type IonAmount, type SystemAtT, solveEquilibrium } from "./equilibrium";
 import { requireReagent } from "./reagent-lookup";
 import type { SpeciateComponent, SpeciateInput, SpeciateResult, SpeciesResult } from "./types";
@@ -71,7 +71,7 @@ export function equilibrate(
 ): Omit<SpeciateResult, "cautions" | "notes" | "warnings"> & { warnings: string[] } {
   const systems: SystemAtT[] = [];
   for (const [id, total] of systemMolal) {
-    const data = ACID_SYSTEMS.find((s) => s.id === id)!;
+    const data = acidSystem(id)!;
     systems.push({ data, pKa: conditions.pKaOf(data), totalMolal: total });
   }
   const state = solveEquilibrium(systems, fixedIons, conditions.pKw, conditions.gammaAt);

@@ -4,7 +4,7 @@
  * Part 2 puts Pitzer and SIT at the head of AUTO_CANDIDATES (their coverage checks say
  * whether every ion pair is parameterised at this I and T).
  */
-import { DH_LIMITING_SQRT_I_MAX_1_1 } from "./dh-limiting";
+import { limitingLawSqrtIMax } from "./dh-limiting";
 import { chargeProductMagnitude } from "./dh-common";
 import { bDotIonSize, kiellandIonSize, truesdellJonesParameters } from "./ion-parameters";
 import { truesdellJonesIon } from "./truesdell-jones";
@@ -27,7 +27,7 @@ export interface AutoCandidate {
 
 const present = (c: AutoContext) => c.ions.filter((i) => i.molality > 0 && i.charge !== 0);
 const isWater = (c: AutoContext) => c.solvent === "water";
-const sqrtILimit = (c: AutoContext) => DH_LIMITING_SQRT_I_MAX_1_1 / chargeProductMagnitude(c.ions);
+const sqrtILimit = (c: AutoContext) => limitingLawSqrtIMax(chargeProductMagnitude(c.ions));
 
 export const DH_FAMILY_CANDIDATES: readonly AutoCandidate[] = [
   {

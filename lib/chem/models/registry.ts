@@ -1,7 +1,4 @@
-/**
- * All activity models by id. Part 2 registers Pitzer and SIT here (one line each); until
- * then asking for them is a ChemInputError on the "model" field.
- */
+/** All activity models by id; an unknown id is a ChemInputError on the "model" field. */
 import { ChemInputError } from "../errors";
 import { daviesModel } from "./davies";
 import { dhExtendedModel } from "./dh-extended";
@@ -22,19 +19,12 @@ export const MODEL_REGISTRY: Partial<Record<ActivityModelId, ActivityModel>> = {
   sit: sitModel,
 };
 
-const PLANNED: Record<string, string> = { pitzer: "Pitzer", sit: "SIT (specific ion interaction theory)" };
-
 export type RequestedModel = ActivityModelId | "auto";
 
 export function getModel(id: string): ActivityModel {
   const model = MODEL_REGISTRY[id as ActivityModelId];
   if (model) return model;
   const available = ["auto", ...Object.keys(MODEL_REGISTRY)].join(", ");
-  if (PLANNED[id]) {
-    throw new ChemInputError(`The ${PLANNED[id]} model is not available in this version. Available models: ${available}.`, {
-      field: "model", code: "model_unavailable",
-    });
-  }
   throw new ChemInputError(`Unknown activity model "${id}". Available models: ${available}.`, { field: "model", code: "unknown_model" });
 }
 

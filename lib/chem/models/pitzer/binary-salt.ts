@@ -6,6 +6,7 @@
 import { ChemInputError } from "../../errors";
 import type { ActivityModelOutput } from "../types";
 import { computePitzer } from "./pitzer-model";
+import { saltIonicStrength, stoichiometry } from "./stoichiometry";
 
 export interface BinarySaltInput {
   cation: string;
@@ -22,16 +23,7 @@ export interface BinarySaltResult extends ActivityModelOutput {
   meanActivityCoefficient: number;
 }
 
-function gcd(a: number, b: number): number {
-  return b === 0 ? a : gcd(b, a % b);
-}
-
-export function stoichiometry(cationCharge: number, anionCharge: number): { nuCation: number; nuAnion: number } {
-  const a = Math.abs(cationCharge);
-  const b = Math.abs(anionCharge);
-  const g = gcd(a, b);
-  return { nuCation: b / g, nuAnion: a / g };
-}
+export { stoichiometry } from "./stoichiometry";
 
 export function meanLnGamma(lnGammaCation: number, lnGammaAnion: number, cationCharge: number, anionCharge: number): number {
   const { nuCation, nuAnion } = stoichiometry(cationCharge, anionCharge);
@@ -48,7 +40,7 @@ export function pitzerBinarySalt(input: BinarySaltInput): BinarySaltResult {
   const { nuCation, nuAnion } = stoichiometry(input.cationCharge, input.anionCharge);
   const mc = nuCation * input.molality;
   const ma = nuAnion * input.molality;
-  const ionicStrengthMolal = 0.5 * (mc * input.cationCharge ** 2 + ma * input.anionCharge ** 2);
+  const ionicStrengthMolal = saltIonicStrength(input.cationCharge, input.anionCharge, input.molality);
   const out = computePitzer({
     ions: [
       { formula: input.cation, charge: input.cationCharge, molality: mc },

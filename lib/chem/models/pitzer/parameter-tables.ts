@@ -64,6 +64,4 @@ export function psiParameter(ionI: string, ionJ: string, common: string): Pitzer
 }
 
 /** Every distinct cation–anion pair Ionleaf has binary parameters for. */
-export function parameterisedSalts(): PitzerBinaryRow[] {
-  return [...binaryByPair.values()];
-}
+

@@ -19,19 +19,9 @@ const TEMPERATURE_TOLERANCE_K = 0.5;
  */
 const DERIVATIVE_SPAN_K = 15;
 
-/** Ionic strength of a pure salt of these charges at molality m: ½ m (ν+ z+² + ν− z−²). */
-export function saltIonicStrength(zc: number, za: number, molality: number): number {
-  const a = Math.abs(zc);
-  const b = Math.abs(za);
-  const g = gcd(a, b);
-  const nuC = b / g;
-  const nuA = a / g;
-  return 0.5 * molality * (nuC * a * a + nuA * b * b);
-}
+import { saltIonicStrength } from "./stoichiometry";
 
-function gcd(a: number, b: number): number {
-  return b === 0 ? a : gcd(b, a % b);
-}
+export { saltIonicStrength };
 
 export function fmt(x: number, digits = 3): string {
   return Number(x.toPrecision(digits)).toString();
