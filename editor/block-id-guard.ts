@@ -20,7 +20,8 @@ export const BlockIdGuard = Extension.create({
           const seen = new Set<string>();
           const fixes: { pos: number; id: string }[] = [];
           state.doc.descendants((node, pos) => {
-            if (!BLOCK_TYPES.has(node.type.name)) return true;
+            // Blocks never sit inside a paragraph: skip the text of textblocks.
+            if (!BLOCK_TYPES.has(node.type.name)) return !node.isTextblock;
             const id = node.attrs.blockId as string | null;
             if (!id || seen.has(id)) fixes.push({ pos, id: newBlockId() });
             else seen.add(id);

@@ -46,14 +46,12 @@ export function NotebookEditor({ initialContent, editable = true, onChange, plac
     [],
   );
 
-  const editor = useEditor({
-    immediatelyRender: false,
-    extensions,
-    content: initialContent ?? { type: "doc", content: [{ type: "paragraph" }] },
-    editable,
-    editorProps: {
+  // A new editorProps object on every render would make tiptap re-apply its options on
+  // every keystroke of the parent's state; build it once per label.
+  const editorProps = useMemo(
+    () => ({
       attributes: { "aria-label": ariaLabel, "aria-multiline": "true", role: "textbox", class: "ionleaf-prose" },
-      handleKeyDown: (_view, event) => {
+      handleKeyDown: (_view: unknown, event: KeyboardEvent) => {
         if ((event.ctrlKey || event.metaKey) && event.key.toLowerCase() === "k") {
           event.preventDefault();
           promptRef.current({ kind: "link" });
@@ -61,7 +59,16 @@ export function NotebookEditor({ initialContent, editable = true, onChange, plac
         }
         return false;
       },
-    },
+    }),
+    [ariaLabel],
+  );
+
+  const editor = useEditor({
+    immediatelyRender: false,
+    extensions,
+    content: initialContent ?? { type: "doc", content: [{ type: "paragraph" }] },
+    editable,
+    editorProps,
     onUpdate: ({ editor: e }) => onChangeRef.current?.(e.getJSON()),
   });
 

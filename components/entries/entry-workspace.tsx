@@ -21,23 +21,24 @@ export interface EntryWorkspaceProps {
  */
 export function EntryWorkspace(props: EntryWorkspaceProps) {
   const [start, setStart] = useState<AutosaveStart | null>(null);
-  const [restored, setRestored] = useState(false);
 
+  // Once per mount: the page gives this component a key of entry id and revision, so a new
+  // revision remounts it; a server refresh with the same revision must not restart the session.
   useEffect(() => {
     const draft = props.editable ? readLocalDraft(props.entryId) : null;
     if (draft && draft.baseRevision <= props.revision) {
       setStart({ revision: draft.baseRevision, title: draft.title, content: draft.content, unsaved: true });
-      setRestored(true);
     } else {
       setStart({ revision: props.revision, title: props.title, content: props.content, unsaved: false });
     }
-  }, [props.entryId, props.editable, props.revision, props.title, props.content]);
+  }, []);
 
   if (!start) return <div className="card h-96 animate-pulse bg-paper-deep" aria-label="Loading the editor" />;
-  return <EntrySession {...props} start={start} restored={restored} />;
+  return <EntrySession {...props} start={start} />;
 }
 
-function EntrySession({ entryId, editable, start, restored }: EntryWorkspaceProps & { start: AutosaveStart; restored: boolean }) {
+function EntrySession({ entryId, editable, start }: EntryWorkspaceProps & { start: AutosaveStart }) {
+  const restored = start.unsaved;
   const { state, change, keepMine, discardMine } = useAutosave(entryId, start);
   const [title, setTitle] = useState(start.title);
 
@@ -64,7 +65,7 @@ function EntrySession({ entryId, editable, start, restored }: EntryWorkspaceProp
         </p>
       ) : null}
       {!title.trim() && editable ? <p role="alert" className="text-xs text-red-700">An entry needs a title; the last title is kept until you type one.</p> : null}
-      {state.status === "conflict" ? <ConflictPanel onKeepMine={() => void keepMine()} onDiscardMine={discardMine} /> : null}
+      {state.status === "conflict" ? <ConflictPanel onKeepMine={() => void keepMine()} onDiscardMine={discardMine} choiceFailed={state.choiceFailed} /> : null}
       {state.status === "refused" ? (
         <div role="alert" className="rounded-md border border-red-200 bg-red-50 px-3 py-2 text-sm text-red-800">
           <p>{state.message} Your edits stay in this browser.</p>

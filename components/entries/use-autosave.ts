@@ -10,6 +10,8 @@ export interface AutosaveState {
   revision: number;
   message?: string;
   problems?: string[];
+  /** Why the last conflict choice could not be carried out (e.g. offline). */
+  choiceFailed?: string;
 }
 
 export interface AutosaveStart {
@@ -36,15 +38,18 @@ export function useAutosave(entryId: string, start: AutosaveStart) {
   const timer = useRef<ReturnType<typeof setTimeout> | null>(null);
   const inFlight = useRef(false);
   const dirty = useRef(start.unsaved);
+  // While a conflict waits for the user's choice, autosave holds back (no PUT every 1.2 s).
+  const inConflict = useRef(false);
 
-  const save = useCallback(async () => {
+  const save = useCallback(async (force = false) => {
     if (timer.current) clearTimeout(timer.current);
     timer.current = null;
-    if (inFlight.current || !dirty.current) return;
+    if (inFlight.current || !dirty.current || (inConflict.current && !force)) return;
+    inConflict.current = false;
     inFlight.current = true;
     dirty.current = false;
     const sent = latest.current;
-    setState((s) => ({ ...s, status: "saving", message: undefined }));
+    setState((s) => ({ ...s, status: "saving", message: undefined, choiceFailed: undefined }));
     let retryIn: number | null = null;
     try {
       const result = await apiFetch<{ revision: number }>(`/api/entries/${entryId}/content`, {
@@ -60,6 +65,7 @@ export function useAutosave(entryId: string, start: AutosaveStart) {
       dirty.current = true; // what was sent is not on the server: it must go again
       const e = error instanceof ApiError ? error : new ApiError(0, "offline", "The server cannot be reached.");
       if (e.status === 409 && e.details && "currentRevision" in e.details) {
+        inConflict.current = true;
         setState((s) => ({ ...s, status: "conflict", message: e.message }));
       } else if (e.status === 0 || e.status >= 500) {
         setState((s) => ({ ...s, status: "offline", message: e.message }));
@@ -79,7 +85,8 @@ export function useAutosave(entryId: string, start: AutosaveStart) {
       latest.current = { ...latest.current, ...next };
       dirty.current = true;
       writeLocalDraft(entryId, { baseRevision: base.current, ...latest.current });
-      setState((s) => (s.status === "conflict" ? s : { ...s, status: "unsaved" }));
+      // Same object when nothing changes, so a keystroke does not re-render the page.
+      setState((s) => (s.status === "conflict" || s.status === "unsaved" ? s : { ...s, status: "unsaved" }));
       if (timer.current) clearTimeout(timer.current);
       timer.current = setTimeout(() => void save(), DEBOUNCE_MS);
     },
@@ -88,10 +95,15 @@ export function useAutosave(entryId: string, start: AutosaveStart) {
 
   /** After a 409: put my version on top of the newer revision (it becomes the next revision). */
   const keepMine = useCallback(async () => {
-    const current = await apiFetch<{ entry: { revision: number } }>(`/api/entries/${entryId}`);
-    base.current = current.entry.revision;
+    try {
+      const current = await apiFetch<{ entry: { revision: number } }>(`/api/entries/${entryId}`);
+      base.current = current.entry.revision;
+    } catch (error) {
+      setState((s) => ({ ...s, choiceFailed: error instanceof Error ? error.message : "The server cannot be reached." }));
+      return; // still in conflict: the choice stays on screen
+    }
     dirty.current = true;
-    await save();
+    await save(true);
   }, [entryId, save]);
 
   /** After a 409: drop my edits and load the newer revision. */
@@ -117,5 +129,5 @@ export function useAutosave(entryId: string, start: AutosaveStart) {
     };
   }, [save]);
 
-  return { state, change, keepMine, discardMine, saveNow: save };
+  return { state, change, keepMine, discardMine };
 }
