@@ -12,8 +12,11 @@ export function formatSignificant(value: number | null | undefined, digits = 4):
   if (value === 0) return "0";
   const magnitude = Math.abs(value);
   if (magnitude >= 1e-3 && magnitude < 1e5) {
-    // toPrecision keeps trailing zeros that carry meaning ("0.1000").
-    return Number(value).toPrecision(digits).replace(/e.*$/, "").replace("-", "−");
+    // toPrecision keeps trailing zeros that carry meaning ("0.1000"). It switches to
+    // exponent form when the integer part has more digits than asked (12345 → "1.235e+4"):
+    // that case falls through to the × 10ⁿ form rather than losing the exponent.
+    const fixed = Number(value).toPrecision(digits);
+    if (!fixed.includes("e")) return fixed.replace("-", "−");
   }
   const [mantissa, exponent] = value.toExponential(digits - 1).split("e");
   const sup = String(Number(exponent)).replace(/[-0-9]/g, (ch) => SUPERSCRIPT_DIGITS[ch]);
@@ -34,4 +37,14 @@ export function parseTypedNumber(text: string): number | null {
   if (!/^[-+]?(\d+\.?\d*|\.\d+)(e[-+]?\d+)?$/i.test(cleaned)) return null;
   const value = Number(cleaned);
   return Number.isFinite(value) ? value : null;
+}
+
+const FROM_SUPERSCRIPT: Record<string, string> = Object.fromEntries(Object.entries(SUPERSCRIPT_DIGITS).map(([digit, sup]) => [sup, digit]));
+
+/** The inverse of formatSignificant: "0.1000", "−2.217 × 10⁻⁴" → a number; null when unreadable. */
+export function parseShownNumber(text: string): number | null {
+  const match = /^(−?[\d.]+)(?: × 10([⁻⁰¹²³⁴⁵⁶⁷⁸⁹]+))?$/.exec(text.trim());
+  if (!match) return null;
+  const exponent = match[2] ? Number([...match[2]].map((ch) => FROM_SUPERSCRIPT[ch]).join("")) : 0;
+  return Number(match[1].replace("−", "-")) * 10 ** exponent;
 }

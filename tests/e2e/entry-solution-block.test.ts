@@ -1,20 +1,15 @@
 import { describe, expect, it } from "vitest";
 import type { Locator, Page } from "playwright-core";
 import { DEMO_LABS, DEMO_PASSWORD } from "@/lib/demo/scenario";
+import { parseShownNumber } from "@/lib/ui/format-number";
 import { BASE_URL, useBrowser, screenshot, signIn } from "./support/browser";
 
 const researcher = DEMO_LABS[0].members.find((m) => m.role === "researcher")!;
 
 /** The number a result cell shows ("0.1000", "7.780 × 10⁻¹"), as a number. */
 async function shownNumber(cell: Locator): Promise<number> {
-  const text = ((await cell.textContent()) ?? "").replace(/^.*=\s*/, "").replace(/\s*(mol\/kg|mol\/L|nm)$/, "").trim();
-  const sci = /^(−?[\d.]+) × 10([⁻⁰¹²³⁴⁵⁶⁷⁸⁹]+)$/.exec(text);
-  if (sci) {
-    const digits = "⁰¹²³⁴⁵⁶⁷⁸⁹";
-    const exponent = Number([...sci[2]].map((ch) => (ch === "⁻" ? "-" : String(digits.indexOf(ch)))).join(""));
-    return Number(sci[1].replace("−", "-")) * 10 ** exponent;
-  }
-  return Number(text.replace("−", "-"));
+  const text = ((await cell.textContent()) ?? "").replace(/^.*=\s*/, "").replace(/\s*(mol\/kg|mol\/L|nm)$/, "");
+  return parseShownNumber(text) ?? Number.NaN;
 }
 
 async function expectNaClNumbers(block: Locator) {

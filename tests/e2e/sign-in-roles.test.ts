@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { DEMO_LABS, DEMO_PASSWORD } from "@/lib/demo/scenario";
-import { BASE_URL, useBrowser, screenshot, signIn } from "./support/browser";
+import { BASE_URL, openBrowser, screenshot, signIn, useBrowser } from "./support/browser";
 
 const lab = DEMO_LABS[0];
 const byRole = (role: string) => lab.members.find((m) => m.role === role)!;
@@ -13,7 +13,6 @@ const EXPECTED_NAV: Record<string, string[]> = {
 
 describe("signing in as each demo role", () => {
   const browser = useBrowser();
-
 
   it("sends a visitor without a session to sign-in", async () => {
     const page = await browser.context.newPage();
@@ -37,7 +36,10 @@ describe("signing in as each demo role", () => {
 
   for (const role of ["researcher", "supervisor", "admin"] as const) {
     it(`shows a ${role} the ${role}'s navigation`, async () => {
-      const page = await browser.context.newPage();
+      // A browser of their own: a sign-out in a shared profile can race link prefetches
+      // that refresh the session cookie.
+      const own = await openBrowser();
+      const page = await own.context.newPage();
       const member = byRole(role);
       await signIn(page, member.email, DEMO_PASSWORD);
       await page.getByTestId("current-role").waitFor();
@@ -47,7 +49,7 @@ describe("signing in as each demo role", () => {
       await screenshot(page, `bench-${role}`);
       await page.getByRole("button", { name: "Sign out" }).click();
       await page.waitForURL(/\/sign-in/);
-      await page.close();
+      await own.close();
     });
   }
 });

@@ -4,6 +4,7 @@ import { afterEach, beforeAll, describe, expect, it } from "vitest";
 import { NotebookEditor } from "@/editor/notebook-editor";
 import { findTemplate } from "@/lib/entries/templates";
 import { preloadBlockPanels } from "./preload-blocks";
+import { parseShownNumber } from "@/lib/ui/format-number";
 
 afterEach(cleanup);
 beforeAll(preloadBlockPanels, 60000);
@@ -14,11 +15,9 @@ const volts = (element: HTMLElement) => Number((element.textContent ?? "").repla
 function shownActivity(row: HTMLElement): number {
   const cells = within(row).getAllByRole("cell");
   const text = cells[cells.length - 1].textContent ?? "";
-  const sup = "⁰¹²³⁴⁵⁶⁷⁸⁹";
-  const match = /^(−?[\d.]+)(?: × 10([⁻⁰¹²³⁴⁵⁶⁷⁸⁹]+))?$/.exec(text.trim());
-  if (!match) throw new Error(`unreadable activity "${text}"`);
-  const exponent = match[2] ? Number([...match[2]].map((ch) => (ch === "⁻" ? "-" : String(sup.indexOf(ch)))).join("")) : 0;
-  return Number(match[1].replace("−", "-")) * 10 ** exponent;
+  const value = parseShownNumber(text);
+  if (value === null) throw new Error(`unreadable activity "${text}"`);
+  return value;
 }
 
 describe("cell block", () => {

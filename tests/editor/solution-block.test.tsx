@@ -5,7 +5,7 @@ import { afterEach, beforeAll, describe, expect, it, vi } from "vitest";
 import { NotebookEditor } from "@/editor/notebook-editor";
 import { defaultSolutionBlockInput } from "@/lib/entries/block-defaults";
 import { extractSolutionBlocks } from "@/lib/entries/extract-blocks";
-import { parseTypedNumber } from "@/lib/ui/format-number";
+import { parseShownNumber } from "@/lib/ui/format-number";
 import { preloadBlockPanels } from "./preload-blocks";
 
 afterEach(cleanup);
@@ -28,13 +28,7 @@ async function mount(attrs: object) {
 /** Reads a number as the block shows it ("0.1000", "1.000 × 10⁻³"), for comparison. */
 function shownNumber(element: HTMLElement): number {
   const text = (element.textContent ?? "").replace(/^.*=\s*/, "").replace(/\s*(mol\/kg|mol\/L|nm)$/, "");
-  const sci = /^(−?[\d.]+) × 10([⁻⁰¹²³⁴⁵⁶⁷⁸⁹]+)$/.exec(text.trim());
-  if (sci) {
-    const digits = "⁰¹²³⁴⁵⁶⁷⁸⁹";
-    const exponent = Number([...sci[2]].map((ch) => (ch === "⁻" ? "-" : String(digits.indexOf(ch)))).join(""));
-    return Number(sci[1].replace("−", "-")) * 10 ** exponent;
-  }
-  return parseTypedNumber(text) ?? Number.NaN;
+  return parseShownNumber(text) ?? Number.NaN;
 }
 
 const nacl = (amount: number) =>
