@@ -10,7 +10,14 @@ const config: Config = {
       colors: {
         paper: { DEFAULT: "#fbfaf7", deep: "#f3f1ea" },
         ink: { DEFAULT: "#1f2933", soft: "#52606d", faint: "#9aa5b1" },
-        copper: { 50: "#fbf3ee", 100: "#f4e0d3", 300: "#dfa27d", 500: "#b8683d", 600: "#9c5430", 700: "#7d4226" },
+        copper: {
+          50: "#fbf3ee",
+          100: "#f4e0d3",
+          300: "#dfa27d",
+          500: "#b8683d",
+          600: "#9c5430",
+          700: "#7d4226",
+        },
         lagoon: { 50: "#eef8f7", 100: "#d3efec", 500: "#22807a", 600: "#1b6964", 700: "#15524e" },
       },
       fontFamily: {

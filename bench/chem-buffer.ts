@@ -23,7 +23,14 @@ function median(values: number[]): number {
 
 export function runBufferBench(rounds = 200): BufferBenchReport {
   const design = (k: number) =>
-    designBuffer({ buffer: "phosphate", pH: 7.4 + k * 1e-9, totalConcentrationMolar: 0.1, volumeMl: 1000, temperatureC: 37, targetIonicStrengthMolar: 0.3 });
+    designBuffer({
+      buffer: "phosphate",
+      pH: 7.4 + k * 1e-9,
+      totalConcentrationMolar: 0.1,
+      volumeMl: 1000,
+      temperatureC: 37,
+      targetIonicStrengthMolar: 0.3,
+    });
   for (let k = 0; k < 50; k++) design(-k); // warm-up
   const designTimes: number[] = [];
   const speciateTimes: number[] = [];
@@ -32,12 +39,22 @@ export function runBufferBench(rounds = 200): BufferBenchReport {
     const recipe = design(k);
     designTimes.push(performance.now() - start);
     start = performance.now();
-    const back = speciate({ components: recipe.components.map((c) => ({ formula: c.formula, amountMol: c.amountMol })), volumeMl: 1000, temperatureC: 37 });
+    const back = speciate({
+      components: recipe.components.map((c) => ({ formula: c.formula, amountMol: c.amountMol })),
+      volumeMl: 1000,
+      temperatureC: 37,
+    });
     speciateTimes.push(performance.now() - start);
     if (!Number.isFinite(back.pH)) throw new Error("buffer bench produced a non-finite pH");
   }
   const designMedianMs = median(designTimes);
-  return { name: "chem: buffer recipe (phosphate, NaCl to I = 0.3, 37 °C)", targetMs: 5, designMedianMs, speciateMedianMs: median(speciateTimes), pass: designMedianMs < 5 };
+  return {
+    name: "chem: buffer recipe (phosphate, NaCl to I = 0.3, 37 °C)",
+    targetMs: 5,
+    designMedianMs,
+    speciateMedianMs: median(speciateTimes),
+    pass: designMedianMs < 5,
+  };
 }
 
 export function printBufferBench(): BufferBenchReport {

@@ -26,7 +26,13 @@ const TEN_COMPONENTS: SolutionComponentInput[] = [
   { formula: "HCl", amount: 100, unit: "µmol/L" },
 ];
 
-const MODELS: ActivityModelId[] = ["dh-limiting", "dh-extended", "guntelberg", "davies", "truesdell-jones"];
+const MODELS: ActivityModelId[] = [
+  "dh-limiting",
+  "dh-extended",
+  "guntelberg",
+  "davies",
+  "truesdell-jones",
+];
 
 function median(values: number[]): number {
   const s = [...values].sort((a, b) => a - b);
@@ -34,7 +40,12 @@ function median(values: number[]): number {
 }
 
 function solutionFor(model: ActivityModelId | "auto", k: number, components = TEN_COMPONENTS) {
-  return { model, temperatureC: 25, densityGPerMl: 1.005, components: components.map((c) => ({ ...c, amount: c.amount * (1 + (k % 997) * 1e-6) })) };
+  return {
+    model,
+    temperatureC: 25,
+    densityGPerMl: 1.005,
+    components: components.map((c) => ({ ...c, amount: c.amount * (1 + (k % 997) * 1e-6) })),
+  };
 }
 
 export interface DhBenchReport {
@@ -56,7 +67,8 @@ export function runDhBench(batches = 40, callsPerBatch = 250): DhBenchReport {
     for (const model of MODELS) {
       const cpuStart = process.cpuUsage();
       const start = performance.now();
-      for (let k = 0; k < callsPerBatch; k++) computeSolution(solutionFor(model, b * callsPerBatch + k));
+      for (let k = 0; k < callsPerBatch; k++)
+        computeSolution(solutionFor(model, b * callsPerBatch + k));
       samples[model].push(((performance.now() - start) * 1000) / callsPerBatch);
       const cpu = process.cpuUsage(cpuStart);
       cpuSamples[model].push((cpu.user + cpu.system) / callsPerBatch);
@@ -64,7 +76,9 @@ export function runDhBench(batches = 40, callsPerBatch = 250): DhBenchReport {
   }
   const perModelMedianMicroseconds = Object.fromEntries(MODELS.map((m) => [m, median(samples[m])]));
   // CPU time of this process: what a call costs when the shared machine's other work is taken out.
-  const perModelMedianCpuMicroseconds = Object.fromEntries(MODELS.map((m) => [m, median(cpuSamples[m])]));
+  const perModelMedianCpuMicroseconds = Object.fromEntries(
+    MODELS.map((m) => [m, median(cpuSamples[m])]),
+  );
 
   // A collection before each reading, so the figure is what stays allocated (caches, leaks).
   v8.setFlagsFromString("--expose-gc");
@@ -100,13 +114,21 @@ export function runDhBench(batches = 40, callsPerBatch = 250): DhBenchReport {
 
 export function printDhBench(): DhBenchReport {
   const r = runDhBench();
-  console.log("chem: computeSolution, 10-component solution (median per call, wall clock and this process's CPU time; target < 50 µs)");
+  console.log(
+    "chem: computeSolution, 10-component solution (median per call, wall clock and this process's CPU time; target < 50 µs)",
+  );
   for (const [model, us] of Object.entries(r.perModelMedianMicroseconds)) {
     const cpu = r.perModelMedianCpuMicroseconds[model];
-    console.log(`  ${model.padEnd(16)} ${us.toFixed(1).padStart(7)} µs wall, ${cpu.toFixed(1).padStart(6)} µs CPU ${us < 50 ? "PASS" : "FAIL"}`);
+    console.log(
+      `  ${model.padEnd(16)} ${us.toFixed(1).padStart(7)} µs wall, ${cpu.toFixed(1).padStart(6)} µs CPU ${us < 50 ? "PASS" : "FAIL"}`,
+    );
   }
-  console.log(`  heap after 100 000 calls: ${r.heapAfter100kCallsMb.toFixed(1)} MB (growth ${r.heapGrowthMb.toFixed(2)} MB, both after a full collection)`);
-  console.log(`chem: 50 solution blocks recomputed together: median ${r.fiftyBlocksMedianMs.toFixed(2)} ms (target < 16 ms) ${r.fiftyBlocksMedianMs < 16 ? "PASS" : "FAIL"}`);
+  console.log(
+    `  heap after 100 000 calls: ${r.heapAfter100kCallsMb.toFixed(1)} MB (growth ${r.heapGrowthMb.toFixed(2)} MB, both after a full collection)`,
+  );
+  console.log(
+    `chem: 50 solution blocks recomputed together: median ${r.fiftyBlocksMedianMs.toFixed(2)} ms (target < 16 ms) ${r.fiftyBlocksMedianMs < 16 ? "PASS" : "FAIL"}`,
+  );
   return r;
 }
 

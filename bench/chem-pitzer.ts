@@ -43,7 +43,13 @@ export function runPitzerBench(batches = 60, callsPerBatch = 200): PitzerBenchRe
   const call = (k: number) => {
     // A small change per call so that nothing can be answered from a cache.
     const ions = SEAWATER.map((i) => ({ ...i, molality: i.molality * (1 + k * 1e-9) }));
-    return pitzerModel.compute({ ions, ionicStrengthMolal: ionicStrength(ions), temperatureC: 25, solvent: "water", constants });
+    return pitzerModel.compute({
+      ions,
+      ionicStrengthMolal: ionicStrength(ions),
+      temperatureC: 25,
+      solvent: "water",
+      constants,
+    });
   };
   for (let k = 0; k < 2000; k++) call(-k); // warm-up (JIT)
   const perCall: number[] = [];
@@ -56,12 +62,20 @@ export function runPitzerBench(batches = 60, callsPerBatch = 200): PitzerBenchRe
   if (!Number.isFinite(sink)) throw new Error("Pitzer bench produced a non-finite result");
   perCall.sort((a, b) => a - b);
   const medianMs = perCall[Math.floor(perCall.length / 2)];
-  return { name: "chem: Pitzer, 10-ion seawater-like mixture", targetMs: 0.5, medianMs, p95Ms: perCall[Math.floor(perCall.length * 0.95)], pass: medianMs < 0.5 };
+  return {
+    name: "chem: Pitzer, 10-ion seawater-like mixture",
+    targetMs: 0.5,
+    medianMs,
+    p95Ms: perCall[Math.floor(perCall.length * 0.95)],
+    pass: medianMs < 0.5,
+  };
 }
 
 export function printPitzerBench(): PitzerBenchReport {
   const r = runPitzerBench();
-  console.log(`${r.name}: median ${(r.medianMs * 1000).toFixed(1)} µs per call, p95 ${(r.p95Ms * 1000).toFixed(1)} µs (target < ${r.targetMs} ms) ${r.pass ? "PASS" : "FAIL"}`);
+  console.log(
+    `${r.name}: median ${(r.medianMs * 1000).toFixed(1)} µs per call, p95 ${(r.p95Ms * 1000).toFixed(1)} µs (target < ${r.targetMs} ms) ${r.pass ? "PASS" : "FAIL"}`,
+  );
   return r;
 }
 

@@ -8,20 +8,45 @@
 import { pathToFileURL } from "node:url";
 import { defaultSolutionBlockInput } from "@/lib/entries/block-defaults";
 import type { SolutionBlockInput, SolutionComponentInput } from "@/lib/entries/block-schemas";
-import { evaluateSolutionBlock, evaluateSolutionBlockCached } from "@/lib/entries/evaluate-solution-block";
+import {
+  evaluateSolutionBlock,
+  evaluateSolutionBlockCached,
+} from "@/lib/entries/evaluate-solution-block";
 
 // Typical electrochemistry electrolytes: supporting electrolytes, redox probes, buffers,
 // weighed stocks, a non-aqueous one. Amounts are what a lab would write.
-const RECIPES: { model?: SolutionBlockInput["model"]; solvent?: string; temperatureC?: number; components: SolutionComponentInput[] }[] = [
+const RECIPES: {
+  model?: SolutionBlockInput["model"];
+  solvent?: string;
+  temperatureC?: number;
+  components: SolutionComponentInput[];
+}[] = [
   { components: [{ formula: "KCl", amount: 0.1, unit: "mol/L" }] },
-  { components: [{ formula: "KCl", amount: 0.1, unit: "mol/L" }, { formula: "K3Fe(CN)6", amount: 5, unit: "mmol/L" }, { formula: "K4Fe(CN)6", amount: 5, unit: "mmol/L" }] },
+  {
+    components: [
+      { formula: "KCl", amount: 0.1, unit: "mol/L" },
+      { formula: "K3Fe(CN)6", amount: 5, unit: "mmol/L" },
+      { formula: "K4Fe(CN)6", amount: 5, unit: "mmol/L" },
+    ],
+  },
   { components: [{ formula: "NaClO4", amount: 0.5, unit: "mol/kg" }] },
   { components: [{ formula: "H2SO4", amount: 0.5, unit: "mol/L" }] },
   { components: [{ formula: "KNO3", amount: 5.055, unit: "g", perAmount: 100, perUnit: "mL" }] },
-  { components: [{ formula: "CuSO4·5H2O", amount: 1.25, unit: "g", perAmount: 50, perUnit: "mL" }, { formula: "H2SO4", amount: 0.1, unit: "mol/L" }] },
+  {
+    components: [
+      { formula: "CuSO4·5H2O", amount: 1.25, unit: "g", perAmount: 50, perUnit: "mL" },
+      { formula: "H2SO4", amount: 0.1, unit: "mol/L" },
+    ],
+  },
   { components: [{ formula: "NaCl", amount: 1, unit: "mol/kg" }], model: "pitzer" },
   { components: [{ formula: "KOH", amount: 0.1, unit: "mol/L" }], temperatureC: 40 },
-  { components: [{ formula: "MgCl2", amount: 20, unit: "mmol/kg" }, { formula: "NaCl", amount: 0.05, unit: "mol/kg" }], model: "davies" },
+  {
+    components: [
+      { formula: "MgCl2", amount: 20, unit: "mmol/kg" },
+      { formula: "NaCl", amount: 0.05, unit: "mol/kg" },
+    ],
+    model: "davies",
+  },
   { components: [{ formula: "N(C4H9)4PF6", amount: 0.1, unit: "mol/L" }], solvent: "acetonitrile" },
 ];
 
@@ -34,7 +59,10 @@ export function typicalEntryBlocks(count = 50, jitter = 0): SolutionBlockInput[]
       temperatureC: recipe.temperatureC ?? 25,
       model: recipe.model ?? "auto",
       // A small change per block and per run, so no cache anywhere can answer for it.
-      components: recipe.components.map((c) => ({ ...c, amount: (c.amount as number) * (1 + i * 1e-4 + jitter * 1e-7) })),
+      components: recipe.components.map((c) => ({
+        ...c,
+        amount: (c.amount as number) * (1 + i * 1e-4 + jitter * 1e-7),
+      })),
     });
   });
 }
@@ -78,7 +106,15 @@ export function runEditorRecomputeBench(rounds = 40): BenchReport {
   const keystroke: number[] = [];
   for (let r = 0; r < rounds; r++) {
     const edited = blocks.map((block, i) =>
-      i === r % 50 ? { ...block, components: block.components.map((c) => ({ ...c, amount: (c.amount as number) * (1 + (r + 1) * 1e-6) })) } : block,
+      i === r % 50
+        ? {
+            ...block,
+            components: block.components.map((c) => ({
+              ...c,
+              amount: (c.amount as number) * (1 + (r + 1) * 1e-6),
+            })),
+          }
+        : block,
     );
     const start = performance.now();
     edited.forEach(evaluateSolutionBlockCached);
@@ -115,4 +151,5 @@ export function printEditorRecomputeBench(): BenchReport {
   return report;
 }
 
-if (process.argv[1] && import.meta.url === pathToFileURL(process.argv[1]).href) printEditorRecomputeBench();
+if (process.argv[1] && import.meta.url === pathToFileURL(process.argv[1]).href)
+  printEditorRecomputeBench();

@@ -8,9 +8,21 @@ import { printPitzerBench } from "./chem-pitzer";
 import { printBufferBench } from "./chem-buffer";
 import { printEditorRecomputeBench } from "./editor-recompute";
 
-console.log(`Node ${process.version}, ${os.cpus().length} CPU(s), load average ${os.loadavg().map((l) => l.toFixed(2)).join(" ")}\n`);
+console.log(
+  `Node ${process.version}, ${os.cpus().length} CPU(s), load average ${os
+    .loadavg()
+    .map((l) => l.toFixed(2))
+    .join(" ")}\n`,
+);
 
-const reports = [printDhBench(), printPitzerBench(), printBufferBench(), printEditorRecomputeBench()];
+const reports = [
+  printDhBench(),
+  printPitzerBench(),
+  printBufferBench(),
+  printEditorRecomputeBench(),
+];
 
 const failed = reports.filter((r) => !r.pass).length;
-console.log(`\n${reports.length - failed} of ${reports.length} benchmarks within target${failed ? ` (${failed} over: see above; check the load average)` : ""}.`);
+console.log(
+  `\n${reports.length - failed} of ${reports.length} benchmarks within target${failed ? ` (${failed} over: see above; check the load average)` : ""}.`,
+);

@@ -6,7 +6,10 @@ export type Database = NodePgDatabase<typeof schema>;
 /** A database handle or an open transaction: data-access functions accept either. */
 export type Executor = Database | Parameters<Parameters<Database["transaction"]>[0]>[0];
 
-export function createDatabase(connectionString: string, maxConnections = 10): { db: Database; pool: Pool } {
+export function createDatabase(
+  connectionString: string,
+  maxConnections = 10,
+): { db: Database; pool: Pool } {
   const pool = new Pool({ connectionString, max: maxConnections });
   return { db: drizzle(pool, { schema }), pool };
 }

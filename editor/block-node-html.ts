@@ -17,7 +17,10 @@ export function readBlockData<T>(element: HTMLElement, schema: z.ZodType<T>): Pa
 }
 
 /** addAttributes() entries for a block: each key persists in the JSON but not as its own HTML attribute. */
-export function blockAttributes<T extends Record<string, unknown>>(defaults: () => T, schema: z.ZodType<T>) {
+export function blockAttributes<T extends Record<string, unknown>>(
+  defaults: () => T,
+  schema: z.ZodType<T>,
+) {
   const fresh = defaults();
   return Object.fromEntries(
     Object.keys(fresh).map((key) => [
@@ -26,7 +29,9 @@ export function blockAttributes<T extends Record<string, unknown>>(defaults: () 
         // blockId is left null here so the id guard gives every inserted block its own id.
         default: key === "blockId" ? null : fresh[key],
         rendered: false,
-        parseHTML: (element: HTMLElement) => (readBlockData(element, schema) as Record<string, unknown>)[key] ?? (key === "blockId" ? null : fresh[key]),
+        parseHTML: (element: HTMLElement) =>
+          (readBlockData(element, schema) as Record<string, unknown>)[key] ??
+          (key === "blockId" ? null : fresh[key]),
       },
     ]),
   );

@@ -1,4 +1,11 @@
-import { ACTIVITY_MODELS, listCouples, listReferenceElectrodes, listSolvents, resolveSpecies, searchSpecies } from "@/lib/chem";
+import {
+  ACTIVITY_MODELS,
+  listCouples,
+  listReferenceElectrodes,
+  listSolvents,
+  resolveSpecies,
+  searchSpecies,
+} from "@/lib/chem";
 import type { SelectOption } from "./ui/select-field";
 
 /**
@@ -18,17 +25,22 @@ export function searchSpeciesOptions(query: string, limit = 8): SpeciesOption[] 
   return searchSpecies(query, limit).map(({ formula, name, kind }) => ({ formula, name, kind }));
 }
 
-const once = <T,>(build: () => T) => {
+const once = <T>(build: () => T) => {
   let value: T | undefined;
   return () => (value ??= build());
 };
 
 export const solventOptions = once((): SelectOption[] =>
-  listSolvents().map((solvent) => ({ value: solvent.id, label: solvent.id === solvent.name ? solvent.name : `${solvent.name} (${solvent.formula})` })),
+  listSolvents().map((solvent) => ({
+    value: solvent.id,
+    label: solvent.id === solvent.name ? solvent.name : `${solvent.name} (${solvent.formula})`,
+  })),
 );
 
 /** The models lib/chem offers, "auto" first, with their published names. */
-export const modelOptions = once((): SelectOption[] => ACTIVITY_MODELS.map((model) => ({ value: model.id, label: model.label })));
+export const modelOptions = once((): SelectOption[] =>
+  ACTIVITY_MODELS.map((model) => ({ value: model.id, label: model.label })),
+);
 
 export function modelLabel(id: string): string {
   return ACTIVITY_MODELS.find((model) => model.id === id)?.label ?? id;
@@ -37,10 +49,16 @@ export function modelLabel(id: string): string {
 const signedVolts = (value: number) => `${value < 0 ? "−" : "+"}${Math.abs(value).toFixed(3)} V`;
 
 export const coupleOptions = once((): SelectOption[] =>
-  listCouples().map((couple) => ({ value: couple.id, label: `${couple.reaction}   E° = ${signedVolts(couple.standardPotentialV)}` })),
+  listCouples().map((couple) => ({
+    value: couple.id,
+    label: `${couple.reaction}   E° = ${signedVolts(couple.standardPotentialV)}`,
+  })),
 );
 
-const referenceNames = once(() => new Map(listReferenceElectrodes().map((electrode) => [electrode.id as string, electrode.name])));
+const referenceNames = once(
+  () =>
+    new Map(listReferenceElectrodes().map((electrode) => [electrode.id as string, electrode.name])),
+);
 
 export function referenceElectrodeLabel(id: string): string {
   return referenceNames().get(id) ?? id;
@@ -51,14 +69,18 @@ export function referenceElectrodeLabel(id: string): string {
  * (input refused) those of each typed species the catalogue knows and of its ions, so a
  * warning never disappears while a number is being corrected.
  */
-export function hazardNotesFor(formulas: readonly string[], result?: { hazards?: readonly string[] }): string[] {
+export function hazardNotesFor(
+  formulas: readonly string[],
+  result?: { hazards?: readonly string[] },
+): string[] {
   if (result?.hazards) return [...result.hazards];
   const notes = new Set<string>();
   for (const formula of formulas) {
     const species = tryResolve(formula);
     if (!species) continue;
     species.hazards.forEach((note) => notes.add(note));
-    for (const ion of species.ions) tryResolve(ion.formula)?.hazards.forEach((note) => notes.add(note));
+    for (const ion of species.ions)
+      tryResolve(ion.formula)?.hazards.forEach((note) => notes.add(note));
   }
   return [...notes];
 }

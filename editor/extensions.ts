@@ -17,7 +17,10 @@ export interface EditorExtensionOptions {
 }
 
 /** The editor's schema and behaviour. Node names here are the ones lib/entries allows. */
-export function buildEditorExtensions({ placeholder, onEditMath }: EditorExtensionOptions = {}): AnyExtension[] {
+export function buildEditorExtensions({
+  placeholder,
+  onEditMath,
+}: EditorExtensionOptions = {}): AnyExtension[] {
   return [
     StarterKit.configure({
       heading: { levels: [1, 2, 3, 4] },
@@ -28,10 +31,16 @@ export function buildEditorExtensions({ placeholder, onEditMath }: EditorExtensi
     TaskItem.configure({ nested: true }),
     Mathematics.configure({
       katexOptions: { throwOnError: false, strict: "ignore", trust: false },
-      inlineOptions: { onClick: (node, pos) => onEditMath?.("inline", node.attrs.latex as string, pos) },
-      blockOptions: { onClick: (node, pos) => onEditMath?.("block", node.attrs.latex as string, pos) },
+      inlineOptions: {
+        onClick: (node, pos) => onEditMath?.("inline", node.attrs.latex as string, pos),
+      },
+      blockOptions: {
+        onClick: (node, pos) => onEditMath?.("block", node.attrs.latex as string, pos),
+      },
     }),
-    Placeholder.configure({ placeholder: placeholder ?? "Write the entry. Type $$…$$ for an equation." }),
+    Placeholder.configure({
+      placeholder: placeholder ?? "Write the entry. Type $$…$$ for an equation.",
+    }),
     SolutionBlock,
     CellBlock,
     BlockIdGuard,

@@ -30,7 +30,15 @@ export interface NotebookEditorProps {
  * live solution and cell blocks. It owns no saving: the page passes the saved document in
  * and receives every change through `onChange`.
  */
-export function NotebookEditor({ initialContent, editable = true, onChange, placeholder, ariaLabel = "Entry text", className, onEditorReady }: NotebookEditorProps) {
+export function NotebookEditor({
+  initialContent,
+  editable = true,
+  onChange,
+  placeholder,
+  ariaLabel = "Entry text",
+  className,
+  onEditorReady,
+}: NotebookEditorProps) {
   const [prompt, setPrompt] = useState<ToolbarPrompt | null>(null);
   const onChangeRef = useRef(onChange);
   onChangeRef.current = onChange;
@@ -40,7 +48,8 @@ export function NotebookEditor({ initialContent, editable = true, onChange, plac
     () =>
       buildEditorExtensions({
         placeholder,
-        onEditMath: (kind, latex, pos) => promptRef.current({ kind: "math", display: kind === "block", latex, pos }),
+        onEditMath: (kind, latex, pos) =>
+          promptRef.current({ kind: "math", display: kind === "block", latex, pos }),
       }),
     // The schema is fixed for the editor's lifetime.
     [],
@@ -50,7 +59,12 @@ export function NotebookEditor({ initialContent, editable = true, onChange, plac
   // every keystroke of the parent's state; build it once per label.
   const editorProps = useMemo(
     () => ({
-      attributes: { "aria-label": ariaLabel, "aria-multiline": "true", role: "textbox", class: "ionleaf-prose" },
+      attributes: {
+        "aria-label": ariaLabel,
+        "aria-multiline": "true",
+        role: "textbox",
+        class: "ionleaf-prose",
+      },
       handleKeyDown: (_view: unknown, event: KeyboardEvent) => {
         if ((event.ctrlKey || event.metaKey) && event.key.toLowerCase() === "k") {
           event.preventDefault();
@@ -82,11 +96,18 @@ export function NotebookEditor({ initialContent, editable = true, onChange, plac
   }, [editor, editable]);
 
   return (
-    <div className={cx("ionleaf-editor relative rounded-lg border border-ink-faint/40 bg-paper text-ink", className)}>
+    <div
+      className={cx(
+        "ionleaf-editor relative rounded-lg border border-ink-faint/40 bg-paper text-ink",
+        className,
+      )}
+    >
       {editor && editable ? (
         <div className="sticky top-0 z-10 rounded-t-lg">
           <EditorToolbar editor={editor} onPrompt={setPrompt} />
-          {prompt ? <EditorPrompts editor={editor} prompt={prompt} onClose={() => setPrompt(null)} /> : null}
+          {prompt ? (
+            <EditorPrompts editor={editor} prompt={prompt} onClose={() => setPrompt(null)} />
+          ) : null}
         </div>
       ) : null}
       <EditorContent editor={editor} className="px-6 py-4" />

@@ -13,18 +13,67 @@ import { isSafeHref } from "@/lib/entries/safe-href";
 
 /** Elements whose content is dropped with them. */
 const DROP_WITH_CONTENT = new Set([
-  "script", "style", "template", "iframe", "object", "embed", "noscript", "textarea", "select", "option",
-  "svg", "math", "head", "title", "meta", "link", "base", "form", "button", "video", "audio", "canvas", "img", "picture", "source",
+  "script",
+  "style",
+  "template",
+  "iframe",
+  "object",
+  "embed",
+  "noscript",
+  "textarea",
+  "select",
+  "option",
+  "svg",
+  "math",
+  "head",
+  "title",
+  "meta",
+  "link",
+  "base",
+  "form",
+  "button",
+  "video",
+  "audio",
+  "canvas",
+  "img",
+  "picture",
+  "source",
 ]);
 
 /** Allowed elements and their allowed attributes; others are unwrapped (their text kept). */
 const ALLOWED: Record<string, readonly string[]> = {
-  p: [], br: [], h1: [], h2: [], h3: [], h4: [], h5: [], h6: [], strong: [], b: [], em: [], i: [], u: [], s: [], del: [],
-  code: ["class"], pre: [], blockquote: [], hr: [], thead: [], tbody: [], tr: [],
-  table: [], th: ["colspan", "rowspan"], td: ["colspan", "rowspan"],
-  ol: ["start"], a: ["href", "title"],
+  p: [],
+  br: [],
+  h1: [],
+  h2: [],
+  h3: [],
+  h4: [],
+  h5: [],
+  h6: [],
+  strong: [],
+  b: [],
+  em: [],
+  i: [],
+  u: [],
+  s: [],
+  del: [],
+  code: ["class"],
+  pre: [],
+  blockquote: [],
+  hr: [],
+  thead: [],
+  tbody: [],
+  tr: [],
+  table: [],
+  th: ["colspan", "rowspan"],
+  td: ["colspan", "rowspan"],
+  ol: ["start"],
+  a: ["href", "title"],
   // tiptap's own clipboard markup: task items and math keep their data attributes.
-  ul: ["data-type"], li: ["data-type", "data-checked"], label: [], input: ["type", "checked"],
+  ul: ["data-type"],
+  li: ["data-type", "data-checked"],
+  label: [],
+  input: ["type", "checked"],
   span: ["data-type", "data-latex"],
   // Live blocks travel as one JSON attribute, validated by the block's zod schema on parse.
   div: ["data-type", "data-latex", "data-block"],
@@ -59,9 +108,11 @@ function cleanChildren(parent: Element) {
     }
     for (const attribute of Array.from(element.attributes)) {
       const name = attribute.name.toLowerCase();
-      if (!allowed.includes(name) && !ALLOWED_EVERYWHERE.includes(name)) element.removeAttribute(attribute.name);
+      if (!allowed.includes(name) && !ALLOWED_EVERYWHERE.includes(name))
+        element.removeAttribute(attribute.name);
     }
-    if (tag === "a" && !isSafeHref(element.getAttribute("href") ?? "")) element.removeAttribute("href");
+    if (tag === "a" && !isSafeHref(element.getAttribute("href") ?? ""))
+      element.removeAttribute("href");
     if (tag === "input" && element.getAttribute("type") !== "checkbox") element.remove();
   }
 }

@@ -32,7 +32,11 @@ export class AppError extends Error {
   readonly fieldErrors?: FieldErrors;
   readonly details?: Record<string, unknown>;
 
-  constructor(code: AppErrorCode, message: string, extra: { fieldErrors?: FieldErrors; details?: Record<string, unknown> } = {}) {
+  constructor(
+    code: AppErrorCode,
+    message: string,
+    extra: { fieldErrors?: FieldErrors; details?: Record<string, unknown> } = {},
+  ) {
     super(message);
     this.name = "AppError";
     this.code = code;
@@ -45,7 +49,9 @@ export class AppError extends Error {
 export const isAppError = (e: unknown): e is AppError => e instanceof AppError;
 
 /** zod issues → { "field.path": ["message"] } for forms and API responses. */
-export function fieldErrorsFromZod(issues: { path: PropertyKey[]; message: string }[]): FieldErrors {
+export function fieldErrorsFromZod(
+  issues: { path: PropertyKey[]; message: string }[],
+): FieldErrors {
   const out: FieldErrors = {};
   for (const issue of issues) {
     const key = issue.path.map(String).join(".") || "_form";

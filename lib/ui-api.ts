@@ -18,14 +18,34 @@ export class ApiError extends Error {
 export async function apiFetch<T>(path: string, init: RequestInit = {}): Promise<T> {
   let response: Response;
   try {
-    response = await fetch(path, { ...init, headers: { "content-type": "application/json", ...(init.headers ?? {}) } });
+    response = await fetch(path, {
+      ...init,
+      headers: { "content-type": "application/json", ...(init.headers ?? {}) },
+    });
   } catch {
-    throw new ApiError(0, "offline", "The server cannot be reached. Your work is kept in this browser.");
+    throw new ApiError(
+      0,
+      "offline",
+      "The server cannot be reached. Your work is kept in this browser.",
+    );
   }
-  const body = (await response.json().catch(() => null)) as { error?: { code: string; message: string; fieldErrors?: Record<string, string[]>; details?: Record<string, unknown> } } | null;
+  const body = (await response.json().catch(() => null)) as {
+    error?: {
+      code: string;
+      message: string;
+      fieldErrors?: Record<string, string[]>;
+      details?: Record<string, unknown>;
+    };
+  } | null;
   if (!response.ok) {
     const e = body?.error;
-    throw new ApiError(response.status, e?.code ?? "http_error", e?.message ?? `The server answered ${response.status}.`, e?.fieldErrors, e?.details);
+    throw new ApiError(
+      response.status,
+      e?.code ?? "http_error",
+      e?.message ?? `The server answered ${response.status}.`,
+      e?.fieldErrors,
+      e?.details,
+    );
   }
   return body as T;
 }

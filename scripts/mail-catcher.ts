@@ -52,7 +52,9 @@ function persist() {
 function addressList(value: unknown): string[] {
   if (!value) return [];
   const list = Array.isArray(value) ? value : [value];
-  return list.flatMap((a: { value?: { address?: string }[] }) => (a.value ?? []).map((v) => v.address ?? "")).filter(Boolean);
+  return list
+    .flatMap((a: { value?: { address?: string }[] }) => (a.value ?? []).map((v) => v.address ?? ""))
+    .filter(Boolean);
 }
 
 const smtp = new SMTPServer({
@@ -103,7 +105,9 @@ const http = createServer((req, res) => {
 
 smtp.listen(smtpPort, "127.0.0.1", () => {
   http.listen(httpPort, "127.0.0.1", () => {
-    console.log(`mail catcher: SMTP 127.0.0.1:${smtpPort}, messages at http://127.0.0.1:${httpPort}/messages`);
+    console.log(
+      `mail catcher: SMTP 127.0.0.1:${smtpPort}, messages at http://127.0.0.1:${httpPort}/messages`,
+    );
   });
 });
 

@@ -9,7 +9,9 @@ import { Pool } from "pg";
 export async function runMigrations(databaseUrl: string): Promise<void> {
   const pool = new Pool({ connectionString: databaseUrl, max: 1 });
   try {
-    await migrate(drizzle(pool), { migrationsFolder: new URL("../drizzle", import.meta.url).pathname });
+    await migrate(drizzle(pool), {
+      migrationsFolder: new URL("../drizzle", import.meta.url).pathname,
+    });
   } finally {
     await pool.end();
   }

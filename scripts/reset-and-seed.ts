@@ -5,7 +5,8 @@ import { closeDb, getDb } from "@/lib/server/database";
 import { truncateAll } from "@/tests/support/truncate";
 
 async function main() {
-  if (!/ionleaf_test/.test(process.env.DATABASE_URL ?? "")) throw new Error("reset-and-seed refuses to run outside the test database");
+  if (!/ionleaf_test/.test(process.env.DATABASE_URL ?? ""))
+    throw new Error("reset-and-seed refuses to run outside the test database");
   try {
     await truncateAll(getDb());
     await seedDemo(getDb(), { afterLab: demoContent });
@@ -13,4 +14,7 @@ async function main() {
     await closeDb();
   }
 }
-main().catch((e: unknown) => { console.error(e); process.exit(1); });
+main().catch((e: unknown) => {
+  console.error(e);
+  process.exit(1);
+});

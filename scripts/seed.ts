@@ -10,7 +10,8 @@ async function main() {
   try {
     const { created, skipped } = await seedDemo(getDb(), { afterLab: demoContent });
     if (created.length) console.log(`[ionleaf] demo labs created: ${created.join(", ")}`);
-    if (skipped.length) console.log(`[ionleaf] demo labs already present, left unchanged: ${skipped.join(", ")}`);
+    if (skipped.length)
+      console.log(`[ionleaf] demo labs already present, left unchanged: ${skipped.join(", ")}`);
   } finally {
     await closeDb();
   }

@@ -11,7 +11,8 @@ for (const file of process.argv.slice(2)) {
   passed += report.numPassedTests ?? 0;
   failed += report.numFailedTests ?? 0;
   skipped += (report.numPendingTests ?? 0) + (report.numTodoTests ?? 0);
-  if (!report.success && (report.numFailedTests ?? 0) === 0) failed += Math.max(1, report.numFailedTestSuites ?? 0);
+  if (!report.success && (report.numFailedTests ?? 0) === 0)
+    failed += Math.max(1, report.numFailedTestSuites ?? 0);
 }
 console.log("");
 console.log(`tests: ${passed} passed, ${failed} failed${skipped ? `, ${skipped} skipped` : ""}`);

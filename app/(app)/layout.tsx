@@ -18,10 +18,19 @@ export default async function AppLayout({ children }: { children: React.ReactNod
 
   return (
     <div className="min-h-screen">
-      <AppHeader labName={labName} userName={actor.name} role={actor.role} items={navigationFor(actor.role)} signOut={signOutAction} />
-      <main className="mx-auto max-w-7xl px-5 py-8"><QueryProvider>{children}</QueryProvider></main>
+      <AppHeader
+        labName={labName}
+        userName={actor.name}
+        role={actor.role}
+        items={navigationFor(actor.role)}
+        signOut={signOutAction}
+      />
+      <main className="mx-auto max-w-7xl px-5 py-8">
+        <QueryProvider>{children}</QueryProvider>
+      </main>
       <footer className="mx-auto max-w-7xl px-5 pb-8 text-xs text-ink-faint">
-        Computed activities are model estimates: verify against measurement, read the safety data sheet of every reagent and follow your institution&apos;s chemical hygiene plan.
+        Computed activities are model estimates: verify against measurement, read the safety data
+        sheet of every reagent and follow your institution&apos;s chemical hygiene plan.
       </footer>
     </div>
   );

@@ -27,17 +27,34 @@ export function EntryWorkspace(props: EntryWorkspaceProps) {
   useEffect(() => {
     const draft = props.editable ? readLocalDraft(props.entryId) : null;
     if (draft && draft.baseRevision <= props.revision) {
-      setStart({ revision: draft.baseRevision, title: draft.title, content: draft.content, unsaved: true });
+      setStart({
+        revision: draft.baseRevision,
+        title: draft.title,
+        content: draft.content,
+        unsaved: true,
+      });
     } else {
-      setStart({ revision: props.revision, title: props.title, content: props.content, unsaved: false });
+      setStart({
+        revision: props.revision,
+        title: props.title,
+        content: props.content,
+        unsaved: false,
+      });
     }
   }, []);
 
-  if (!start) return <div className="card h-96 animate-pulse bg-paper-deep" aria-label="Loading the editor" />;
+  if (!start)
+    return (
+      <div className="h-96 animate-pulse card bg-paper-deep" aria-label="Loading the editor" />
+    );
   return <EntrySession {...props} start={start} />;
 }
 
-function EntrySession({ entryId, editable, start }: EntryWorkspaceProps & { start: AutosaveStart }) {
+function EntrySession({
+  entryId,
+  editable,
+  start,
+}: EntryWorkspaceProps & { start: AutosaveStart }) {
   const restored = start.unsaved;
   const { state, change, keepMine, discardMine } = useAutosave(entryId, start);
   const [title, setTitle] = useState(start.title);
@@ -45,10 +62,12 @@ function EntrySession({ entryId, editable, start }: EntryWorkspaceProps & { star
   return (
     <div className="space-y-4">
       <div className="flex flex-wrap items-center gap-3">
-        <label htmlFor="entry-title" className="sr-only">Entry title</label>
+        <label htmlFor="entry-title" className="sr-only">
+          Entry title
+        </label>
         <input
           id="entry-title"
-          className="min-w-0 flex-1 border-0 bg-transparent text-2xl font-semibold tracking-tight focus:outline-none focus:ring-0 disabled:text-ink"
+          className="min-w-0 flex-1 border-0 bg-transparent text-2xl font-semibold tracking-tight focus:ring-0 focus:outline-none disabled:text-ink"
           value={title}
           disabled={!editable}
           maxLength={200}
@@ -60,16 +79,38 @@ function EntrySession({ entryId, editable, start }: EntryWorkspaceProps & { star
         {editable ? <SaveIndicator state={state} /> : null}
       </div>
       {restored ? (
-        <p role="status" className="rounded-md border border-copper-100 bg-copper-50 px-3 py-2 text-xs text-copper-700">
+        <p
+          role="status"
+          className="rounded-md border border-copper-100 bg-copper-50 px-3 py-2 text-xs text-copper-700"
+        >
           Restored edits this browser kept from your last visit; they are being saved now.
         </p>
       ) : null}
-      {!title.trim() && editable ? <p role="alert" className="text-xs text-red-700">An entry needs a title; the last title is kept until you type one.</p> : null}
-      {state.status === "conflict" ? <ConflictPanel onKeepMine={() => void keepMine()} onDiscardMine={discardMine} choiceFailed={state.choiceFailed} /> : null}
+      {!title.trim() && editable ? (
+        <p role="alert" className="text-xs text-red-700">
+          An entry needs a title; the last title is kept until you type one.
+        </p>
+      ) : null}
+      {state.status === "conflict" ? (
+        <ConflictPanel
+          onKeepMine={() => void keepMine()}
+          onDiscardMine={discardMine}
+          choiceFailed={state.choiceFailed}
+        />
+      ) : null}
       {state.status === "refused" ? (
-        <div role="alert" className="rounded-md border border-red-200 bg-red-50 px-3 py-2 text-sm text-red-800">
+        <div
+          role="alert"
+          className="rounded-md border border-red-200 bg-red-50 px-3 py-2 text-sm text-red-800"
+        >
           <p>{state.message} Your edits stay in this browser.</p>
-          {state.problems?.length ? <ul className="mt-1 list-disc pl-5 text-xs">{state.problems.map((p) => <li key={p}>{p}</li>)}</ul> : null}
+          {state.problems?.length ? (
+            <ul className="mt-1 list-disc pl-5 text-xs">
+              {state.problems.map((p) => (
+                <li key={p}>{p}</li>
+              ))}
+            </ul>
+          ) : null}
         </div>
       ) : null}
       <NotebookEditor

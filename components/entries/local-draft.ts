@@ -22,7 +22,10 @@ export function readLocalDraft(entryId: string): LocalDraft | null {
 
 export function writeLocalDraft(entryId: string, draft: Omit<LocalDraft, "keptAt">): void {
   try {
-    window.localStorage.setItem(key(entryId), JSON.stringify({ ...draft, keptAt: new Date().toISOString() }));
+    window.localStorage.setItem(
+      key(entryId),
+      JSON.stringify({ ...draft, keptAt: new Date().toISOString() }),
+    );
   } catch {
     // Storage full or disabled: the server save still runs; nothing else to do here.
   }

@@ -12,10 +12,16 @@ const LOOK: Record<AutosaveState["status"], { label: string; dot: string }> = {
 export function SaveIndicator({ state }: { state: AutosaveState }) {
   const look = LOOK[state.status];
   return (
-    <p role="status" aria-live="polite" className="inline-flex items-center gap-2 text-xs text-ink-soft" data-testid="save-status" data-status={state.status}>
+    <p
+      role="status"
+      aria-live="polite"
+      className="inline-flex items-center gap-2 text-xs text-ink-soft"
+      data-testid="save-status"
+      data-status={state.status}
+    >
       <span className={`h-2 w-2 rounded-full ${look.dot}`} aria-hidden="true" />
       {look.label}
-      <span className="font-mono tabular text-ink-faint">r{state.revision}</span>
+      <span className="font-mono text-ink-faint tabular">r{state.revision}</span>
     </p>
   );
 }

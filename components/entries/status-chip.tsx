@@ -6,5 +6,9 @@ const TONES: Record<string, string> = {
 };
 
 export function StatusChip({ status }: { status: string }) {
-  return <span className={`chip ${TONES[status] ?? TONES.draft}`} data-status={status}>{status}</span>;
+  return (
+    <span className={`chip ${TONES[status] ?? TONES.draft}`} data-status={status}>
+      {status}
+    </span>
+  );
 }

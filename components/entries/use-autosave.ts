@@ -32,7 +32,10 @@ const RETRY_MS = 5000;
  * the local copy), 409 (the user chooses), 422 (refused, local copy kept), offline (retry).
  */
 export function useAutosave(entryId: string, start: AutosaveStart) {
-  const [state, setState] = useState<AutosaveState>({ status: start.unsaved ? "unsaved" : "saved", revision: start.revision });
+  const [state, setState] = useState<AutosaveState>({
+    status: start.unsaved ? "unsaved" : "saved",
+    revision: start.revision,
+  });
   const latest = useRef({ title: start.title, content: start.content });
   const base = useRef(start.revision);
   const timer = useRef<ReturnType<typeof setTimeout> | null>(null);
@@ -41,44 +44,57 @@ export function useAutosave(entryId: string, start: AutosaveStart) {
   // While a conflict waits for the user's choice, autosave holds back (no PUT every 1.2 s).
   const inConflict = useRef(false);
 
-  const save = useCallback(async (force = false) => {
-    if (timer.current) clearTimeout(timer.current);
-    timer.current = null;
-    if (inFlight.current || !dirty.current || (inConflict.current && !force)) return;
-    inConflict.current = false;
-    inFlight.current = true;
-    dirty.current = false;
-    const sent = latest.current;
-    setState((s) => ({ ...s, status: "saving", message: undefined, choiceFailed: undefined }));
-    let retryIn: number | null = null;
-    try {
-      const result = await apiFetch<{ revision: number }>(`/api/entries/${entryId}/content`, {
-        method: "PUT",
-        body: JSON.stringify({ baseRevision: base.current, title: sent.title, content: sent.content }),
-      });
-      base.current = result.revision;
-      if (dirty.current) writeLocalDraft(entryId, { baseRevision: base.current, ...latest.current });
-      else clearLocalDraft(entryId);
-      setState({ status: dirty.current ? "unsaved" : "saved", revision: result.revision });
-      if (dirty.current) retryIn = DEBOUNCE_MS;
-    } catch (error) {
-      dirty.current = true; // what was sent is not on the server: it must go again
-      const e = error instanceof ApiError ? error : new ApiError(0, "offline", "The server cannot be reached.");
-      if (e.status === 409 && e.details && "currentRevision" in e.details) {
-        inConflict.current = true;
-        setState((s) => ({ ...s, status: "conflict", message: e.message }));
-      } else if (e.status === 0 || e.status >= 500) {
-        setState((s) => ({ ...s, status: "offline", message: e.message }));
-        retryIn = RETRY_MS;
-      } else {
-        const problems = Array.isArray(e.details?.problems) ? (e.details.problems as string[]) : undefined;
-        setState((s) => ({ ...s, status: "refused", message: e.message, problems }));
+  const save = useCallback(
+    async (force = false) => {
+      if (timer.current) clearTimeout(timer.current);
+      timer.current = null;
+      if (inFlight.current || !dirty.current || (inConflict.current && !force)) return;
+      inConflict.current = false;
+      inFlight.current = true;
+      dirty.current = false;
+      const sent = latest.current;
+      setState((s) => ({ ...s, status: "saving", message: undefined, choiceFailed: undefined }));
+      let retryIn: number | null = null;
+      try {
+        const result = await apiFetch<{ revision: number }>(`/api/entries/${entryId}/content`, {
+          method: "PUT",
+          body: JSON.stringify({
+            baseRevision: base.current,
+            title: sent.title,
+            content: sent.content,
+          }),
+        });
+        base.current = result.revision;
+        if (dirty.current)
+          writeLocalDraft(entryId, { baseRevision: base.current, ...latest.current });
+        else clearLocalDraft(entryId);
+        setState({ status: dirty.current ? "unsaved" : "saved", revision: result.revision });
+        if (dirty.current) retryIn = DEBOUNCE_MS;
+      } catch (error) {
+        dirty.current = true; // what was sent is not on the server: it must go again
+        const e =
+          error instanceof ApiError
+            ? error
+            : new ApiError(0, "offline", "The server cannot be reached.");
+        if (e.status === 409 && e.details && "currentRevision" in e.details) {
+          inConflict.current = true;
+          setState((s) => ({ ...s, status: "conflict", message: e.message }));
+        } else if (e.status === 0 || e.status >= 500) {
+          setState((s) => ({ ...s, status: "offline", message: e.message }));
+          retryIn = RETRY_MS;
+        } else {
+          const problems = Array.isArray(e.details?.problems)
+            ? (e.details.problems as string[])
+            : undefined;
+          setState((s) => ({ ...s, status: "refused", message: e.message, problems }));
+        }
+      } finally {
+        inFlight.current = false;
       }
-    } finally {
-      inFlight.current = false;
-    }
-    if (retryIn !== null) timer.current = setTimeout(() => void save(), retryIn);
-  }, [entryId]);
+      if (retryIn !== null) timer.current = setTimeout(() => void save(), retryIn);
+    },
+    [entryId],
+  );
 
   const change = useCallback(
     (next: { title?: string; content?: unknown }) => {
@@ -86,7 +102,9 @@ export function useAutosave(entryId: string, start: AutosaveStart) {
       dirty.current = true;
       writeLocalDraft(entryId, { baseRevision: base.current, ...latest.current });
       // Same object when nothing changes, so a keystroke does not re-render the page.
-      setState((s) => (s.status === "conflict" || s.status === "unsaved" ? s : { ...s, status: "unsaved" }));
+      setState((s) =>
+        s.status === "conflict" || s.status === "unsaved" ? s : { ...s, status: "unsaved" },
+      );
       if (timer.current) clearTimeout(timer.current);
       timer.current = setTimeout(() => void save(), DEBOUNCE_MS);
     },
@@ -99,7 +117,10 @@ export function useAutosave(entryId: string, start: AutosaveStart) {
       const current = await apiFetch<{ entry: { revision: number } }>(`/api/entries/${entryId}`);
       base.current = current.entry.revision;
     } catch (error) {
-      setState((s) => ({ ...s, choiceFailed: error instanceof Error ? error.message : "The server cannot be reached." }));
+      setState((s) => ({
+        ...s,
+        choiceFailed: error instanceof Error ? error.message : "The server cannot be reached.",
+      }));
       return; // still in conflict: the choice stays on screen
     }
     dirty.current = true;

@@ -20,12 +20,16 @@ export function NavLinks({ items }: { items: NavItem[] }) {
             href={item.href}
             aria-current={active ? "page" : undefined}
             className={`relative rounded-md px-3 py-1.5 text-sm font-medium transition ${
-              active ? "bg-white text-ink shadow-sm ring-1 ring-ink/10" : "text-ink-soft hover:bg-white/70 hover:text-ink"
+              active
+                ? "bg-white text-ink shadow-sm ring-1 ring-ink/10"
+                : "text-ink-soft hover:bg-white/70 hover:text-ink"
             }`}
           >
             {item.label}
             {item.badge ? (
-              <span className="ml-1.5 rounded-full bg-copper-500 px-1.5 py-0.5 text-[10px] font-semibold text-white tabular">{item.badge}</span>
+              <span className="ml-1.5 rounded-full bg-copper-500 px-1.5 py-0.5 text-[10px] font-semibold text-white tabular">
+                {item.badge}
+              </span>
             ) : null}
           </Link>
         );

@@ -4,17 +4,31 @@ export function Field(props: {
   label: string;
   errors?: string[];
   hint?: string;
-  children: (aria: { id: string; "aria-invalid": boolean; "aria-describedby"?: string }) => React.ReactNode;
+  children: (aria: {
+    id: string;
+    "aria-invalid": boolean;
+    "aria-describedby"?: string;
+  }) => React.ReactNode;
 }) {
   const { id, label, errors, hint, children } = props;
-  const describedBy = [hint ? `${id}-hint` : null, errors?.length ? `${id}-error` : null].filter(Boolean).join(" ") || undefined;
+  const describedBy =
+    [hint ? `${id}-hint` : null, errors?.length ? `${id}-error` : null].filter(Boolean).join(" ") ||
+    undefined;
   return (
     <div className="space-y-1.5">
-      <label htmlFor={id} className="label">{label}</label>
+      <label htmlFor={id} className="label">
+        {label}
+      </label>
       {children({ id, "aria-invalid": Boolean(errors?.length), "aria-describedby": describedBy })}
-      {hint ? <p id={`${id}-hint`} className="text-xs text-ink-soft">{hint}</p> : null}
+      {hint ? (
+        <p id={`${id}-hint`} className="text-xs text-ink-soft">
+          {hint}
+        </p>
+      ) : null}
       {errors?.length ? (
-        <p id={`${id}-error`} role="alert" className="text-xs font-medium text-red-700">{errors.join(" ")}</p>
+        <p id={`${id}-error`} role="alert" className="text-xs font-medium text-red-700">
+          {errors.join(" ")}
+        </p>
       ) : null}
     </div>
   );

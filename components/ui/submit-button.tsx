@@ -1,11 +1,19 @@
 "use client";
 import { useFormStatus } from "react-dom";
 
-export function SubmitButton({ children, pendingLabel, className = "btn-primary" }: { children: React.ReactNode; pendingLabel?: string; className?: string }) {
+export function SubmitButton({
+  children,
+  pendingLabel,
+  className = "btn-primary",
+}: {
+  children: React.ReactNode;
+  pendingLabel?: string;
+  className?: string;
+}) {
   const { pending } = useFormStatus();
   return (
     <button type="submit" className={className} disabled={pending} aria-busy={pending}>
-      {pending ? pendingLabel ?? "Working…" : children}
+      {pending ? (pendingLabel ?? "Working…") : children}
     </button>
   );
 }

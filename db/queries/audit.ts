@@ -17,7 +17,15 @@ export async function insertAuditEvent(db: Executor, record: AuditRecord) {
 
 export async function listAuditEvents(db: Executor, labId: string, limit = 50) {
   return db
-    .select({ id: auditEvents.id, action: auditEvents.action, targetType: auditEvents.targetType, targetId: auditEvents.targetId, at: auditEvents.at, details: auditEvents.details, actorName: users.name })
+    .select({
+      id: auditEvents.id,
+      action: auditEvents.action,
+      targetType: auditEvents.targetType,
+      targetId: auditEvents.targetId,
+      at: auditEvents.at,
+      details: auditEvents.details,
+      actorName: users.name,
+    })
     .from(auditEvents)
     .leftJoin(users, eq(users.id, auditEvents.actorId))
     .where(eq(auditEvents.labId, labId))

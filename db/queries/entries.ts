@@ -14,20 +14,37 @@ export interface EntryListFilter {
   limit: number;
 }
 
-const SORT_COLUMNS = { updatedAt: entries.updatedAt, createdAt: entries.createdAt, title: entries.title, status: entries.status };
+const SORT_COLUMNS = {
+  updatedAt: entries.updatedAt,
+  createdAt: entries.createdAt,
+  title: entries.title,
+  status: entries.status,
+};
 
 export async function listEntries(db: Executor, f: EntryListFilter) {
-  const where: SQL[] = [eq(entries.labId, f.labId), f.archived ? isNotNull(entries.archivedAt) : isNull(entries.archivedAt)];
+  const where: SQL[] = [
+    eq(entries.labId, f.labId),
+    f.archived ? isNotNull(entries.archivedAt) : isNull(entries.archivedAt),
+  ];
   if (f.projectId) where.push(eq(entries.projectId, f.projectId));
   if (f.status) where.push(eq(entries.status, f.status));
   if (f.authorId) where.push(eq(entries.authorId, f.authorId));
-  if (f.search) where.push(ilike(entries.title, `%${f.search.replace(/[%_\\]/g, (c) => `\\${c}`)}%`));
+  if (f.search)
+    where.push(ilike(entries.title, `%${f.search.replace(/[%_\\]/g, (c) => `\\${c}`)}%`));
   const column = SORT_COLUMNS[f.sort];
   return db
     .select({
-      id: entries.id, title: entries.title, status: entries.status, revision: entries.currentRevisionNumber,
-      createdAt: entries.createdAt, updatedAt: entries.updatedAt, archivedAt: entries.archivedAt,
-      authorId: entries.authorId, authorName: users.name, projectId: entries.projectId, projectName: projects.name,
+      id: entries.id,
+      title: entries.title,
+      status: entries.status,
+      revision: entries.currentRevisionNumber,
+      createdAt: entries.createdAt,
+      updatedAt: entries.updatedAt,
+      archivedAt: entries.archivedAt,
+      authorId: entries.authorId,
+      authorName: users.name,
+      projectId: entries.projectId,
+      projectName: projects.name,
     })
     .from(entries)
     .innerJoin(users, eq(users.id, entries.authorId))
@@ -46,8 +63,17 @@ export async function countEntriesByStatus(db: Executor, labId: string, status: 
 }
 
 /** The entry row, scoped to a lab; `forUpdate` locks it for the rest of the transaction. */
-export async function findLabEntry(db: Executor, labId: string, entryId: string, forUpdate = false) {
-  const query = db.select().from(entries).where(and(eq(entries.labId, labId), eq(entries.id, entryId))).limit(1);
+export async function findLabEntry(
+  db: Executor,
+  labId: string,
+  entryId: string,
+  forUpdate = false,
+) {
+  const query = db
+    .select()
+    .from(entries)
+    .where(and(eq(entries.labId, labId), eq(entries.id, entryId)))
+    .limit(1);
   const rows = forUpdate ? await query.for("update") : await query;
   return rows[0] ?? null;
 }
@@ -68,8 +94,17 @@ export async function insertEntry(db: Executor, values: typeof entries.$inferIns
   return rows[0];
 }
 
-export async function updateEntry(db: Executor, labId: string, entryId: string, values: Partial<typeof entries.$inferInsert>) {
-  const rows = await db.update(entries).set(values).where(and(eq(entries.labId, labId), eq(entries.id, entryId))).returning();
+export async function updateEntry(
+  db: Executor,
+  labId: string,
+  entryId: string,
+  values: Partial<typeof entries.$inferInsert>,
+) {
+  const rows = await db
+    .update(entries)
+    .set(values)
+    .where(and(eq(entries.labId, labId), eq(entries.id, entryId)))
+    .returning();
   return rows[0] ?? null;
 }
 
@@ -90,7 +125,15 @@ export async function findRevision(db: Executor, entryId: string, number: number
 
 export async function listRevisions(db: Executor, entryId: string) {
   return db
-    .select({ id: revisions.id, number: revisions.number, title: revisions.title, content: revisions.content, contentHash: revisions.contentHash, createdAt: revisions.createdAt, authorName: users.name })
+    .select({
+      id: revisions.id,
+      number: revisions.number,
+      title: revisions.title,
+      content: revisions.content,
+      contentHash: revisions.contentHash,
+      createdAt: revisions.createdAt,
+      authorName: users.name,
+    })
     .from(revisions)
     .innerJoin(users, eq(users.id, revisions.authorId))
     .where(eq(revisions.entryId, entryId))

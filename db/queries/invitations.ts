@@ -26,17 +26,38 @@ export async function markInvitationAccepted(db: Executor, id: string, userId: s
   const rows = await db
     .update(invitations)
     .set({ acceptedAt: new Date(), acceptedUserId: userId })
-    .where(and(eq(invitations.id, id), isNull(invitations.acceptedAt), isNull(invitations.revokedAt), sql`${invitations.expiresAt} > now()`))
+    .where(
+      and(
+        eq(invitations.id, id),
+        isNull(invitations.acceptedAt),
+        isNull(invitations.revokedAt),
+        sql`${invitations.expiresAt} > now()`,
+      ),
+    )
     .returning({ id: invitations.id });
   return rows.length === 1;
 }
 
 export async function listOpenInvitations(db: Executor, labId: string) {
   return db
-    .select({ id: invitations.id, email: invitations.email, role: invitations.role, expiresAt: invitations.expiresAt, createdAt: invitations.createdAt, invitedBy: users.name })
+    .select({
+      id: invitations.id,
+      email: invitations.email,
+      role: invitations.role,
+      expiresAt: invitations.expiresAt,
+      createdAt: invitations.createdAt,
+      invitedBy: users.name,
+    })
     .from(invitations)
     .innerJoin(users, eq(users.id, invitations.invitedById))
-    .where(and(eq(invitations.labId, labId), isNull(invitations.acceptedAt), isNull(invitations.revokedAt), sql`${invitations.expiresAt} > now()`))
+    .where(
+      and(
+        eq(invitations.labId, labId),
+        isNull(invitations.acceptedAt),
+        isNull(invitations.revokedAt),
+        sql`${invitations.expiresAt} > now()`,
+      ),
+    )
     .orderBy(desc(invitations.createdAt));
 }
 
@@ -44,7 +65,9 @@ export async function revokeInvitation(db: Executor, labId: string, id: string) 
   const rows = await db
     .update(invitations)
     .set({ revokedAt: new Date() })
-    .where(and(eq(invitations.labId, labId), eq(invitations.id, id), isNull(invitations.acceptedAt)))
+    .where(
+      and(eq(invitations.labId, labId), eq(invitations.id, id), isNull(invitations.acceptedAt)),
+    )
     .returning({ id: invitations.id });
   return rows.length === 1;
 }
@@ -54,5 +77,12 @@ export async function revokeOpenInvitationsFor(db: Executor, labId: string, emai
   await db
     .update(invitations)
     .set({ revokedAt: new Date() })
-    .where(and(eq(invitations.labId, labId), sql`lower(${invitations.email}) = lower(${email})`, isNull(invitations.acceptedAt), isNull(invitations.revokedAt)));
+    .where(
+      and(
+        eq(invitations.labId, labId),
+        sql`lower(${invitations.email}) = lower(${email})`,
+        isNull(invitations.acceptedAt),
+        isNull(invitations.revokedAt),
+      ),
+    );
 }

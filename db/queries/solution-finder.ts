@@ -18,9 +18,15 @@ export interface SolutionFinderFilter {
 
 /** Solutions as they stand in each entry's current revision (older revisions are history). */
 export async function findSolutions(db: Executor, f: SolutionFinderFilter) {
-  const where: SQL[] = [eq(solutions.labId, f.labId), isNull(entries.archivedAt), sql`${revisions.number} = ${entries.currentRevisionNumber}`];
-  if (f.ionicStrengthMin !== undefined) where.push(gte(solutions.ionicStrengthMolal, f.ionicStrengthMin));
-  if (f.ionicStrengthMax !== undefined) where.push(lte(solutions.ionicStrengthMolal, f.ionicStrengthMax));
+  const where: SQL[] = [
+    eq(solutions.labId, f.labId),
+    isNull(entries.archivedAt),
+    sql`${revisions.number} = ${entries.currentRevisionNumber}`,
+  ];
+  if (f.ionicStrengthMin !== undefined)
+    where.push(gte(solutions.ionicStrengthMolal, f.ionicStrengthMin));
+  if (f.ionicStrengthMax !== undefined)
+    where.push(lte(solutions.ionicStrengthMolal, f.ionicStrengthMax));
   if (f.species.length) where.push(sql`${solutions.species} @> ${sql.param(f.species)}::text[]`);
   if (f.temperatureMin !== undefined) where.push(gte(solutions.temperatureC, f.temperatureMin));
   if (f.temperatureMax !== undefined) where.push(lte(solutions.temperatureC, f.temperatureMax));
@@ -30,10 +36,20 @@ export async function findSolutions(db: Executor, f: SolutionFinderFilter) {
   if (f.createdTo) where.push(lte(solutions.createdAt, f.createdTo));
   return db
     .select({
-      id: solutions.id, name: solutions.name, blockId: solutions.blockId, entryId: entries.id, entryTitle: entries.title,
-      ionicStrengthMolal: solutions.ionicStrengthMolal, ionicStrengthMolar: solutions.ionicStrengthMolar, debyeLengthNm: solutions.debyeLengthNm,
-      temperatureC: solutions.temperatureC, solvent: solutions.solvent, modelUsed: solutions.modelUsed, species: solutions.species,
-      authorName: users.name, createdAt: solutions.createdAt,
+      id: solutions.id,
+      name: solutions.name,
+      blockId: solutions.blockId,
+      entryId: entries.id,
+      entryTitle: entries.title,
+      ionicStrengthMolal: solutions.ionicStrengthMolal,
+      ionicStrengthMolar: solutions.ionicStrengthMolar,
+      debyeLengthNm: solutions.debyeLengthNm,
+      temperatureC: solutions.temperatureC,
+      solvent: solutions.solvent,
+      modelUsed: solutions.modelUsed,
+      species: solutions.species,
+      authorName: users.name,
+      createdAt: solutions.createdAt,
     })
     .from(solutions)
     .innerJoin(revisions, eq(revisions.id, solutions.revisionId))

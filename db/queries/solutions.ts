@@ -8,7 +8,10 @@ export async function insertSolutionWithComponents(
   components: Omit<typeof solutionComponents.$inferInsert, "solutionId">[],
 ) {
   const [row] = await db.insert(solutions).values(solution).returning({ id: solutions.id });
-  if (components.length) await db.insert(solutionComponents).values(components.map((c) => ({ ...c, solutionId: row.id })));
+  if (components.length)
+    await db
+      .insert(solutionComponents)
+      .values(components.map((c) => ({ ...c, solutionId: row.id })));
   return row.id;
 }
 
@@ -22,5 +25,9 @@ export async function listRevisionSolutions(db: Executor, labId: string, revisio
 
 export async function listComponentsOf(db: Executor, solutionIds: string[]) {
   if (!solutionIds.length) return [];
-  return db.select().from(solutionComponents).where(inArray(solutionComponents.solutionId, solutionIds)).orderBy(asc(solutionComponents.position));
+  return db
+    .select()
+    .from(solutionComponents)
+    .where(inArray(solutionComponents.solutionId, solutionIds))
+    .orderBy(asc(solutionComponents.position));
 }

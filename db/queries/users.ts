@@ -3,7 +3,11 @@ import type { Executor } from "../client";
 import { users, type NewUser, type Role } from "../schema";
 
 export async function findUserByEmail(db: Executor, email: string) {
-  const rows = await db.select().from(users).where(sql`lower(${users.email}) = lower(${email})`).limit(1);
+  const rows = await db
+    .select()
+    .from(users)
+    .where(sql`lower(${users.email}) = lower(${email})`)
+    .limit(1);
   return rows[0] ?? null;
 }
 
@@ -15,14 +19,25 @@ export async function findUserById(db: Executor, id: string) {
 /** Members of one lab; the lab id is always part of the query. */
 export async function listLabMembers(db: Executor, labId: string) {
   return db
-    .select({ id: users.id, email: users.email, name: users.name, role: users.role, active: users.active, createdAt: users.createdAt })
+    .select({
+      id: users.id,
+      email: users.email,
+      name: users.name,
+      role: users.role,
+      active: users.active,
+      createdAt: users.createdAt,
+    })
     .from(users)
     .where(eq(users.labId, labId))
     .orderBy(asc(users.name));
 }
 
 export async function findLabMember(db: Executor, labId: string, userId: string) {
-  const rows = await db.select().from(users).where(and(eq(users.labId, labId), eq(users.id, userId))).limit(1);
+  const rows = await db
+    .select()
+    .from(users)
+    .where(and(eq(users.labId, labId), eq(users.id, userId)))
+    .limit(1);
   return rows[0] ?? null;
 }
 
@@ -32,11 +47,20 @@ export async function insertUser(db: Executor, user: NewUser) {
 }
 
 export async function updateMemberRole(db: Executor, labId: string, userId: string, role: Role) {
-  const rows = await db.update(users).set({ role }).where(and(eq(users.labId, labId), eq(users.id, userId))).returning();
+  const rows = await db
+    .update(users)
+    .set({ role })
+    .where(and(eq(users.labId, labId), eq(users.id, userId)))
+    .returning();
   return rows[0] ?? null;
 }
 
-export async function setMemberActive(db: Executor, labId: string, userId: string, active: boolean) {
+export async function setMemberActive(
+  db: Executor,
+  labId: string,
+  userId: string,
+  active: boolean,
+) {
   const rows = await db
     .update(users)
     .set({ active, deactivatedAt: active ? null : new Date() })

@@ -1,6 +1,13 @@
 import { relations } from "drizzle-orm";
 import { auditEvents, invitations, labs, users } from "./labs";
-import { entries, projects, revisions, signatures, solutionComponents, solutions } from "./notebook";
+import {
+  entries,
+  projects,
+  revisions,
+  signatures,
+  solutionComponents,
+  solutions,
+} from "./notebook";
 
 export const labsRelations = relations(labs, ({ many }) => ({
   users: many(users),

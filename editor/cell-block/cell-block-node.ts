@@ -33,7 +33,13 @@ export const CellBlock = Node.create({
   },
 
   renderHTML({ node, HTMLAttributes }) {
-    return ["div", mergeAttributes(HTMLAttributes, { "data-type": "cell-block", "data-block": JSON.stringify(node.attrs) })];
+    return [
+      "div",
+      mergeAttributes(HTMLAttributes, {
+        "data-type": "cell-block",
+        "data-block": JSON.stringify(node.attrs),
+      }),
+    ];
   },
 
   addCommands() {
@@ -48,7 +54,11 @@ export const CellBlock = Node.create({
           });
           return insertBlockContent(props, {
             type: this.name,
-            attrs: defaultCellBlockInput({ electrolyteBlockId: lastSolution, ...input, blockId: newBlockId() }),
+            attrs: defaultCellBlockInput({
+              electrolyteBlockId: lastSolution,
+              ...input,
+              blockId: newBlockId(),
+            }),
           });
         },
     };

@@ -7,7 +7,9 @@ import { BlockLoading } from "../block-loading";
 import { useEntrySolutionBlocks } from "./use-entry-solution-blocks";
 
 // Fetched with the first block, like the solution panel (it needs lib/chem too).
-const CellBlockPanel = lazy(() => import("./cell-block-panel").then((m) => ({ default: m.CellBlockPanel })));
+const CellBlockPanel = lazy(() =>
+  import("./cell-block-panel").then((m) => ({ default: m.CellBlockPanel })),
+);
 
 /** tiptap node view of a cell block; it reads the entry's solution blocks for the electrolyte link. */
 export function CellBlockView({ node, editor, updateAttributes }: ReactNodeViewProps) {
@@ -16,7 +18,12 @@ export function CellBlockView({ node, editor, updateAttributes }: ReactNodeViewP
   return (
     <NodeViewWrapper contentEditable={false}>
       <Suspense fallback={<BlockLoading kind="cell" />}>
-        <CellBlockPanel value={node.attrs as CellBlockInput} solutions={solutions} editable={editable} onChange={(next) => updateAttributes(next)} />
+        <CellBlockPanel
+          value={node.attrs as CellBlockInput}
+          solutions={solutions}
+          editable={editable}
+          onChange={(next) => updateAttributes(next)}
+        />
       </Suspense>
     </NodeViewWrapper>
   );

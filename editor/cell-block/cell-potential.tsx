@@ -21,7 +21,8 @@ export function CellPotential({ cell, electrolyte, editable, onChange }: CellPot
   const potential = useMemo(() => computeCellPotential(cell, electrolyte), [cell, electrolyte]);
   const couples = coupleOptions();
   const needsPh = cell.referenceElectrode.type === "RHE";
-  const phError = potential.status === "error" && potential.field === "pH" ? potential.message : undefined;
+  const phError =
+    potential.status === "error" && potential.field === "pH" ? potential.message : undefined;
   return (
     <div className="space-y-2">
       <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
@@ -31,30 +32,53 @@ export function CellPotential({ cell, electrolyte, editable, onChange }: CellPot
           value={cell.couple ?? ""}
           options={[{ value: "", label: "— choose a couple —" }, ...couples]}
           disabled={!editable}
-          error={potential.status === "error" && potential.field === "couple" ? potential.message : undefined}
+          error={
+            potential.status === "error" && potential.field === "couple"
+              ? potential.message
+              : undefined
+          }
           onValueChange={(couple) => onChange({ couple: couple === "" ? null : couple })}
         />
         {needsPh || cell.pH !== null ? (
-          <NumberField label="pH (for RHE)" placeholder="from electrolyte" bounds={{ min: -20, max: 30 }} value={cell.pH} disabled={!editable} error={phError} onValueChange={(pH) => onChange({ pH })} />
+          <NumberField
+            label="pH (for RHE)"
+            placeholder="from electrolyte"
+            bounds={{ min: -20, max: 30 }}
+            value={cell.pH}
+            disabled={!editable}
+            error={phError}
+            onValueChange={(pH) => onChange({ pH })}
+          />
         ) : null}
       </div>
       {potential.status === "ok" ? (
         <dl className="grid grid-cols-2 gap-3 sm:grid-cols-3" aria-live="polite">
           <div className="rounded-md border border-lagoon-100 bg-lagoon-50/60 px-3 py-1.5">
-            <dt className="text-xs font-medium text-ink-soft">E vs {referenceElectrodeLabel(potential.reference)}</dt>
-            <dd className="font-mono text-base tabular-nums text-lagoon-700" data-testid="potential-vs-reference">
-              {formatPotentialV(potential.vsReference)} <span className="font-sans text-xs text-ink-soft">V</span>
+            <dt className="text-xs font-medium text-ink-soft">
+              E vs {referenceElectrodeLabel(potential.reference)}
+            </dt>
+            <dd
+              className="font-mono text-base text-lagoon-700 tabular-nums"
+              data-testid="potential-vs-reference"
+            >
+              {formatPotentialV(potential.vsReference)}{" "}
+              <span className="font-sans text-xs text-ink-soft">V</span>
             </dd>
           </div>
           <div className="rounded-md border border-lagoon-100 bg-lagoon-50/60 px-3 py-1.5">
             <dt className="text-xs font-medium text-ink-soft">E vs SHE</dt>
-            <dd className="font-mono text-base tabular-nums text-lagoon-700" data-testid="potential-vs-she">
-              {formatPotentialV(potential.vsShe)} <span className="font-sans text-xs text-ink-soft">V</span>
+            <dd
+              className="font-mono text-base text-lagoon-700 tabular-nums"
+              data-testid="potential-vs-she"
+            >
+              {formatPotentialV(potential.vsShe)}{" "}
+              <span className="font-sans text-xs text-ink-soft">V</span>
             </dd>
           </div>
           <p className="col-span-2 self-center text-xs text-ink-soft sm:col-span-1">
-            {potential.reaction}, E° = {formatPotentialV(potential.standardPotentialV)} V vs SHE. Nernst equation at{" "}
-            {potential.temperatureC} °C with the activities computed for the linked solution.
+            {potential.reaction}, E° = {formatPotentialV(potential.standardPotentialV)} V vs SHE.
+            Nernst equation at {potential.temperatureC} °C with the activities computed for the
+            linked solution.
           </p>
           {potential.notes.length > 0 ? (
             <ul className="col-span-full list-disc pl-4 text-xs text-ink-soft">
@@ -64,8 +88,15 @@ export function CellPotential({ cell, electrolyte, editable, onChange }: CellPot
             </ul>
           ) : null}
         </dl>
-      ) : potential.status === "error" && potential.field !== "couple" && potential.field !== "pH" ? (
-        <p role="alert" className="rounded-md border border-red-300 bg-red-50 px-3 py-2 text-sm text-red-900">{potential.message}</p>
+      ) : potential.status === "error" &&
+        potential.field !== "couple" &&
+        potential.field !== "pH" ? (
+        <p
+          role="alert"
+          className="rounded-md border border-red-300 bg-red-50 px-3 py-2 text-sm text-red-900"
+        >
+          {potential.message}
+        </p>
       ) : potential.status === "idle" ? (
         <p className="text-sm text-ink-soft">{potential.message}</p>
       ) : null}

@@ -21,30 +21,55 @@ export type CellPotentialResult =
  * (lib/chem's nernstPotential), then on the chosen reference scale (convertPotential).
  * The cell's temperature wins over the solution's when both are given.
  */
-export function computeCellPotential(cell: CellBlockInput, electrolyte: SolutionBlockInput | null): CellPotentialResult {
-  if (!cell.couple) return { status: "idle", message: "Choose a couple to see its equilibrium potential." };
-  if (!electrolyte) return { status: "idle", message: "Link the electrolyte to a solution block of this entry." };
+export function computeCellPotential(
+  cell: CellBlockInput,
+  electrolyte: SolutionBlockInput | null,
+): CellPotentialResult {
+  if (!cell.couple)
+    return { status: "idle", message: "Choose a couple to see its equilibrium potential." };
+  if (!electrolyte)
+    return { status: "idle", message: "Link the electrolyte to a solution block of this entry." };
   const evaluation = evaluateSolutionBlockCached(electrolyte);
-  if (evaluation.status === "empty") return { status: "idle", message: "The linked solution has no components yet." };
+  if (evaluation.status === "empty")
+    return { status: "idle", message: "The linked solution has no components yet." };
   if (evaluation.status === "error") {
-    return { status: "error", message: `The linked solution cannot be computed: ${evaluation.message}` };
+    return {
+      status: "error",
+      message: `The linked solution cannot be computed: ${evaluation.message}`,
+    };
   }
   const temperatureC = cell.temperatureC ?? electrolyte.temperatureC ?? 25;
   const activities: Record<string, number> = {};
   for (const ion of evaluation.result.ions) activities[ion.formula] = ion.activity;
   try {
     const notes: string[] = [];
-    if (cell.temperatureC !== null && electrolyte.temperatureC !== null && cell.temperatureC !== electrolyte.temperatureC) {
-      notes.push(`Activities are those of the solution at ${electrolyte.temperatureC} °C; the Nernst slope uses the cell's ${cell.temperatureC} °C.`);
+    if (
+      cell.temperatureC !== null &&
+      electrolyte.temperatureC !== null &&
+      cell.temperatureC !== electrolyte.temperatureC
+    ) {
+      notes.push(
+        `Activities are those of the solution at ${electrolyte.temperatureC} °C; the Nernst slope uses the cell's ${cell.temperatureC} °C.`,
+      );
     }
     // pH = −log10 a(H⁺) by definition (IUPAC); taken from the electrolyte when not typed.
     const hydrogen = evaluation.result.ions.find((ion) => ion.formula === "H+");
-    const pHValue = cell.pH ?? (hydrogen && hydrogen.activity > 0 ? -Math.log10(hydrogen.activity) : null);
-    if (cell.pH === null && pHValue !== null) notes.push(`pH ${pHValue.toFixed(2)} from the electrolyte's computed a(H⁺).`);
+    const pHValue =
+      cell.pH ?? (hydrogen && hydrogen.activity > 0 ? -Math.log10(hydrogen.activity) : null);
+    if (cell.pH === null && pHValue !== null)
+      notes.push(`pH ${pHValue.toFixed(2)} from the electrolyte's computed a(H⁺).`);
     const pH = pHValue === null ? {} : { pH: pHValue };
-    const nernst = nernstPotentialDetailed({ couple: cell.couple, activities, temperatureC, ...pH });
+    const nernst = nernstPotentialDetailed({
+      couple: cell.couple,
+      activities,
+      temperatureC,
+      ...pH,
+    });
     const reference = cell.referenceElectrode.type;
-    const converted = convertPotentialDetailed(nernst.potentialV, "SHE", reference, { temperatureC, ...pH });
+    const converted = convertPotentialDetailed(nernst.potentialV, "SHE", reference, {
+      temperatureC,
+      ...pH,
+    });
     return {
       status: "ok",
       vsShe: nernst.potentialV,

@@ -21,7 +21,12 @@ export function useEntrySolutionBlocks(editor: Editor): SolutionBlockInput[] {
         });
         return found;
       },
-      equalityFn: (a, b) => a === b || (a !== null && b !== null && a.length === b.length && a.every((block, i) => block === b[i])),
+      equalityFn: (a, b) =>
+        a === b ||
+        (a !== null &&
+          b !== null &&
+          a.length === b.length &&
+          a.every((block, i) => block === b[i])),
     }) ?? []
   );
 }

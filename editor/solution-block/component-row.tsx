@@ -1,7 +1,12 @@
 "use client";
 
 import type { KeyboardEvent } from "react";
-import { AMOUNT_UNITS, PER_UNITS, UNITS_NEEDING_PER, type SolutionComponentInput } from "@/lib/entries/block-schemas";
+import {
+  AMOUNT_UNITS,
+  PER_UNITS,
+  UNITS_NEEDING_PER,
+  type SolutionComponentInput,
+} from "@/lib/entries/block-schemas";
 import { NumberField } from "../ui/number-field";
 import { SelectField } from "../ui/select-field";
 import { quietButtonClass } from "../ui/field-styles";
@@ -20,7 +25,10 @@ const UNIT_LABELS: Record<string, string> = {
   "wt%": "wt% (mass percent)",
   "mass fraction": "mass fraction",
 };
-const UNIT_OPTIONS = AMOUNT_UNITS.map((unit) => ({ value: unit, label: UNIT_LABELS[unit] ?? unit }));
+const UNIT_OPTIONS = AMOUNT_UNITS.map((unit) => ({
+  value: unit,
+  label: UNIT_LABELS[unit] ?? unit,
+}));
 const PER_OPTIONS = PER_UNITS.map((unit) => ({
   value: unit,
   label: unit === "g" || unit === "kg" ? `${unit} of solvent` : `${unit} final volume`,
@@ -38,7 +46,17 @@ interface ComponentRowProps {
   showBasis: boolean;
 }
 
-export function ComponentRow({ index, component, errors, editable, onChange, onRemove, onKeyDown, speciesRef, showBasis }: ComponentRowProps) {
+export function ComponentRow({
+  index,
+  component,
+  errors,
+  editable,
+  onChange,
+  onRemove,
+  onKeyDown,
+  speciesRef,
+  showBasis,
+}: ComponentRowProps) {
   const prefix = `components[${index}]`;
   const needsPer = UNITS_NEEDING_PER.includes(component.unit);
   const rowNumber = index + 1;
@@ -77,7 +95,8 @@ export function ComponentRow({ index, component, errors, editable, onChange, onR
           onValueChange={(unit) =>
             onChange({
               unit: unit as SolutionComponentInput["unit"],
-              ...(UNITS_NEEDING_PER.includes(unit as SolutionComponentInput["unit"]) && !component.perUnit
+              ...(UNITS_NEEDING_PER.includes(unit as SolutionComponentInput["unit"]) &&
+              !component.perUnit
                 ? { perAmount: component.perAmount ?? null, perUnit: "mL" }
                 : {}),
             })
@@ -107,7 +126,9 @@ export function ComponentRow({ index, component, errors, editable, onChange, onR
                 options={PER_OPTIONS}
                 disabled={!editable}
                 error={errors.get(`${prefix}.per.unit`)}
-                onValueChange={(perUnit) => onChange({ perUnit: perUnit as SolutionComponentInput["perUnit"] })}
+                onValueChange={(perUnit) =>
+                  onChange({ perUnit: perUnit as SolutionComponentInput["perUnit"] })
+                }
               />
             </div>
           ) : (
@@ -117,7 +138,13 @@ export function ComponentRow({ index, component, errors, editable, onChange, onR
       ) : null}
       <td className="w-8 py-1">
         {editable ? (
-          <button type="button" className={quietButtonClass} aria-label={`Remove row ${rowNumber}`} title="Remove row (Ctrl+Backspace on an empty row)" onClick={onRemove}>
+          <button
+            type="button"
+            className={quietButtonClass}
+            aria-label={`Remove row ${rowNumber}`}
+            title="Remove row (Ctrl+Backspace on an empty row)"
+            onClick={onRemove}
+          >
             <span aria-hidden>×</span>
           </button>
         ) : null}

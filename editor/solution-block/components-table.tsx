@@ -45,7 +45,15 @@ export function ComponentsTable({ components, errors, editable, onChange }: Comp
     if (components.length >= MAX_ROWS) return;
     // A new row copies the unit above it: stocks are usually written in one unit.
     const last = components[components.length - 1];
-    onChange([...components, { ...emptyRow(), unit: last?.unit ?? "mol/kg", perAmount: last?.perAmount, perUnit: last?.perUnit }]);
+    onChange([
+      ...components,
+      {
+        ...emptyRow(),
+        unit: last?.unit ?? "mol/kg",
+        perAmount: last?.perAmount,
+        perUnit: last?.perUnit,
+      },
+    ]);
     setFocusRow(components.length);
   };
   const removeRow = (index: number) => {
@@ -61,7 +69,12 @@ export function ComponentsTable({ components, errors, editable, onChange }: Comp
     } else if (event.key === "Enter") {
       event.preventDefault();
       speciesInputs.current[index + 1]?.focus();
-    } else if (event.key === "Backspace" && (event.ctrlKey || event.metaKey) && row.formula.trim() === "" && row.amount === null) {
+    } else if (
+      event.key === "Backspace" &&
+      (event.ctrlKey || event.metaKey) &&
+      row.formula.trim() === "" &&
+      row.amount === null
+    ) {
       event.preventDefault();
       if (components.length > 1) removeRow(index);
     }
@@ -72,12 +85,24 @@ export function ComponentsTable({ components, errors, editable, onChange }: Comp
       <table className="w-full border-collapse text-sm">
         <caption className="sr-only">Components</caption>
         <thead>
-          <tr className="border-b border-ink-faint/30 text-left text-[11px] uppercase tracking-wide text-ink-soft">
-            <th scope="col" className="pb-1 pr-2 font-medium">Species</th>
-            <th scope="col" className="pb-1 pr-2 text-right font-medium">Amount</th>
-            <th scope="col" className="pb-1 pl-1 pr-2 font-medium">Unit</th>
-            {showBasis ? <th scope="col" className="pb-1 pr-2 font-medium">Basis</th> : null}
-            <th scope="col" className="pb-1"><span className="sr-only">Remove</span></th>
+          <tr className="border-b border-ink-faint/30 text-left text-[11px] tracking-wide text-ink-soft uppercase">
+            <th scope="col" className="pr-2 pb-1 font-medium">
+              Species
+            </th>
+            <th scope="col" className="pr-2 pb-1 text-right font-medium">
+              Amount
+            </th>
+            <th scope="col" className="pr-2 pb-1 pl-1 font-medium">
+              Unit
+            </th>
+            {showBasis ? (
+              <th scope="col" className="pr-2 pb-1 font-medium">
+                Basis
+              </th>
+            ) : null}
+            <th scope="col" className="pb-1">
+              <span className="sr-only">Remove</span>
+            </th>
           </tr>
         </thead>
         <tbody>
@@ -100,7 +125,12 @@ export function ComponentsTable({ components, errors, editable, onChange }: Comp
         </tbody>
       </table>
       {editable ? (
-        <button type="button" className={`${actionButtonClass} mt-1`} onClick={addRow} disabled={components.length >= MAX_ROWS}>
+        <button
+          type="button"
+          className={`${actionButtonClass} mt-1`}
+          onClick={addRow}
+          disabled={components.length >= MAX_ROWS}
+        >
           <span aria-hidden>+</span> Add component
         </button>
       ) : null}

@@ -11,16 +11,21 @@ import type { SolutionResult } from "@/lib/entries/evaluate-solution-block";
 export function FormulaApplied({ result }: { result: SolutionResult }) {
   return (
     <figure className="rounded-md border border-ink-faint/30 bg-paper px-3 py-2">
-      <figcaption className="mb-1 text-[11px] font-medium uppercase tracking-wide text-ink-soft">
+      <figcaption className="mb-1 text-[11px] font-medium tracking-wide text-ink-soft uppercase">
         Formula applied — {result.model.label}
       </figcaption>
       <div className="overflow-x-auto text-ink">
         {result.formulaTexGeneral ? <Tex tex={result.formulaTexGeneral} display /> : null}
-        {result.formulaTex && result.formulaTex !== result.formulaTexGeneral ? <Tex tex={result.formulaTex} display className="text-lagoon-700" /> : null}
+        {result.formulaTex && result.formulaTex !== result.formulaTexGeneral ? (
+          <Tex tex={result.formulaTex} display className="text-lagoon-700" />
+        ) : null}
       </div>
-      <p className="mt-1 font-mono text-xs tabular-nums text-ink-soft">
-        A = {formatSignificant(result.constants.aLog10)} (kg/mol)<sup>1/2</sup> · I = {formatSignificant(result.ionicStrength.molal)} mol/kg
-        {result.salts.map((salt) => ` · γ±(${salt.formula}) = ${formatSignificant(salt.meanGamma)}`).join("")}
+      <p className="mt-1 font-mono text-xs text-ink-soft tabular-nums">
+        A = {formatSignificant(result.constants.aLog10)} (kg/mol)<sup>1/2</sup> · I ={" "}
+        {formatSignificant(result.ionicStrength.molal)} mol/kg
+        {result.salts
+          .map((salt) => ` · γ±(${salt.formula}) = ${formatSignificant(salt.meanGamma)}`)
+          .join("")}
       </p>
     </figure>
   );

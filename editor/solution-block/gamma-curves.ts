@@ -2,7 +2,9 @@ import { ACTIVITY_MODELS, computeSolution, isChemInputError } from "@/lib/chem";
 import type { ChemInput, SolutionResult } from "@/lib/entries/evaluate-solution-block";
 
 /** Every model lib/chem offers (not "auto"), in its own order: newly registered ones appear too. */
-export const CHART_MODELS: readonly string[] = ACTIVITY_MODELS.map((model) => model.id).filter((id) => id !== "auto");
+export const CHART_MODELS: readonly string[] = ACTIVITY_MODELS.map((model) => model.id).filter(
+  (id) => id !== "auto",
+);
 
 export interface CurvePoint {
   sqrtI: number;
@@ -25,7 +27,11 @@ const STEPS = 24;
  * model it used. Each point is a real computeSolution call; a model that refuses a
  * composition (no parameters for it) simply has no curve there.
  */
-export function computeGammaCurves(input: ChemInput, result: SolutionResult, saltFormula: string): GammaCurves {
+export function computeGammaCurves(
+  input: ChemInput,
+  result: SolutionResult,
+  saltFormula: string,
+): GammaCurves {
   const ownI = result.ionicStrength.molal;
   const own = result.salts.find((s) => s.formula === saltFormula);
   const maxSqrtI = Math.max(Math.sqrt(ownI) * 1.5, 0.5);
@@ -47,7 +53,11 @@ export function computeGammaCurves(input: ChemInput, result: SolutionResult, sal
   return {
     points,
     models: CHART_MODELS.filter((m) => seen.has(m)),
-    own: { sqrtI: Math.sqrt(ownI), meanGamma: own?.meanGamma ?? Number.NaN, model: result.model.used },
+    own: {
+      sqrtI: Math.sqrt(ownI),
+      meanGamma: own?.meanGamma ?? Number.NaN,
+      model: result.model.used,
+    },
   };
 }
 
@@ -73,7 +83,11 @@ function bridgeRangeEdges(points: CurvePoint[]) {
   for (let i = 1; i < points.length; i++) {
     for (const model of CHART_MODELS) {
       const outside = `${model}:outside`;
-      if (points[i][outside] !== undefined && points[i - 1][model] !== undefined && points[i - 1][outside] === undefined) {
+      if (
+        points[i][outside] !== undefined &&
+        points[i - 1][model] !== undefined &&
+        points[i - 1][outside] === undefined
+      ) {
         points[i - 1][outside] = points[i - 1][model];
       }
     }

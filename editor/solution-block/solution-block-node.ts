@@ -37,7 +37,13 @@ export const SolutionBlock = Node.create({
   },
 
   renderHTML({ node, HTMLAttributes }) {
-    return ["div", mergeAttributes(HTMLAttributes, { "data-type": "solution-block", "data-block": JSON.stringify(node.attrs) })];
+    return [
+      "div",
+      mergeAttributes(HTMLAttributes, {
+        "data-type": "solution-block",
+        "data-block": JSON.stringify(node.attrs),
+      }),
+    ];
   },
 
   addCommands() {
@@ -45,7 +51,10 @@ export const SolutionBlock = Node.create({
       insertSolutionBlock:
         (input = {}) =>
         (props) =>
-          insertBlockContent(props, { type: this.name, attrs: defaultSolutionBlockInput({ ...input, blockId: newBlockId() }) }),
+          insertBlockContent(props, {
+            type: this.name,
+            attrs: defaultSolutionBlockInput({ ...input, blockId: newBlockId() }),
+          }),
     };
   },
 

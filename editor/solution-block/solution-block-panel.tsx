@@ -22,11 +22,16 @@ interface SolutionBlockPanelProps {
 export function SolutionBlockPanel({ value, onChange, editable = true }: SolutionBlockPanelProps) {
   const evaluation = useMemo(() => evaluateSolutionBlockCached(value), [value]);
   const errors: FieldMessages = useMemo(
-    () => (evaluation.status === "error" && evaluation.field ? new Map([[evaluation.field, evaluation.message]]) : NO_MESSAGES),
+    () =>
+      evaluation.status === "error" && evaluation.field
+        ? new Map([[evaluation.field, evaluation.message]])
+        : NO_MESSAGES,
     [evaluation],
   );
   const patch = (changes: Partial<SolutionBlockInput>) => onChange({ ...value, ...changes });
-  const formulas = value.components.map((row) => row.formula).filter((formula) => formula.trim() !== "");
+  const formulas = value.components
+    .map((row) => row.formula)
+    .filter((formula) => formula.trim() !== "");
 
   return (
     <section
@@ -35,10 +40,17 @@ export function SolutionBlockPanel({ value, onChange, editable = true }: Solutio
       className="my-4 rounded-lg border border-ink-faint/40 bg-white/70 shadow-sm"
     >
       <header className="flex items-center gap-2 border-b border-ink-faint/30 bg-paper-deep/60 px-3 py-1.5">
-        <span data-drag-handle title="Drag to move" className="cursor-grab select-none text-ink-faint" aria-hidden>
+        <span
+          data-drag-handle
+          title="Drag to move"
+          className="cursor-grab text-ink-faint select-none"
+          aria-hidden
+        >
           ⠿
         </span>
-        <span className="rounded bg-lagoon-600 px-1.5 py-0.5 text-[10px] font-semibold uppercase tracking-wider text-white">Solution</span>
+        <span className="rounded bg-lagoon-600 px-1.5 py-0.5 text-[10px] font-semibold tracking-wider text-white uppercase">
+          Solution
+        </span>
         <TextField
           label="Solution name"
           hideLabel
@@ -49,13 +61,21 @@ export function SolutionBlockPanel({ value, onChange, editable = true }: Solutio
           disabled={!editable}
           onValueChange={(name) => patch({ name })}
         />
-        <span className="hidden font-mono text-[10px] text-ink-faint sm:inline" title={`Block id ${value.blockId ?? ""}`}>
+        <span
+          className="hidden font-mono text-[10px] text-ink-faint sm:inline"
+          title={`Block id ${value.blockId ?? ""}`}
+        >
           #{String(value.blockId ?? "").slice(0, 8)}
         </span>
       </header>
       <div className="space-y-4 px-3 py-3">
         <SolutionSettings value={value} errors={errors} editable={editable} onChange={patch} />
-        <ComponentsTable components={value.components} errors={errors} editable={editable} onChange={(components) => patch({ components })} />
+        <ComponentsTable
+          components={value.components}
+          errors={errors}
+          editable={editable}
+          onChange={(components) => patch({ components })}
+        />
         <div className="border-t border-dashed border-ink-faint/40 pt-3">
           <SolutionResults evaluation={evaluation} formulas={formulas} />
         </div>

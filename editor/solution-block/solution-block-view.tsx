@@ -7,7 +7,9 @@ import { BlockLoading } from "../block-loading";
 
 // The panel brings lib/chem (about 110 kB gzip with its unit parser): fetched with the first
 // block, so an entry of plain text opens without it.
-const SolutionBlockPanel = lazy(() => import("./solution-block-panel").then((m) => ({ default: m.SolutionBlockPanel })));
+const SolutionBlockPanel = lazy(() =>
+  import("./solution-block-panel").then((m) => ({ default: m.SolutionBlockPanel })),
+);
 
 /** tiptap node view: the panel inside a non-editable wrapper, writing back through updateAttributes. */
 export function SolutionBlockView({ node, editor, updateAttributes }: ReactNodeViewProps) {
@@ -15,7 +17,11 @@ export function SolutionBlockView({ node, editor, updateAttributes }: ReactNodeV
   return (
     <NodeViewWrapper contentEditable={false}>
       <Suspense fallback={<BlockLoading kind="solution" />}>
-        <SolutionBlockPanel value={node.attrs as SolutionBlockInput} editable={editable} onChange={(next) => updateAttributes(next)} />
+        <SolutionBlockPanel
+          value={node.attrs as SolutionBlockInput}
+          editable={editable}
+          onChange={(next) => updateAttributes(next)}
+        />
       </Suspense>
     </NodeViewWrapper>
   );

@@ -24,17 +24,29 @@ interface SolutionResultsProps {
 export function SolutionResults({ evaluation, formulas }: SolutionResultsProps) {
   const [chartOpen, setChartOpen] = useState(false);
   const [chartSalt, setChartSalt] = useState<string | null>(null);
-  const hazards = hazardNotesFor(formulas, evaluation.status === "ok" ? evaluation.result : undefined);
+  const hazards = hazardNotesFor(
+    formulas,
+    evaluation.status === "ok" ? evaluation.result : undefined,
+  );
 
   if (evaluation.status === "empty") {
-    return <p className="text-sm text-ink-soft">Add a species and an amount to see ionic strength and activities.</p>;
+    return (
+      <p className="text-sm text-ink-soft">
+        Add a species and an amount to see ionic strength and activities.
+      </p>
+    );
   }
 
   return (
     <div className="space-y-3" aria-live="polite">
       {evaluation.status === "error" ? (
-        <p role="status" className="rounded-md border border-red-300 bg-red-50 px-3 py-2 text-sm text-red-900">
-          {evaluation.field ? `Results paused until ${describeField(evaluation.field)} is corrected (marked above).` : evaluation.message}
+        <p
+          role="status"
+          className="rounded-md border border-red-300 bg-red-50 px-3 py-2 text-sm text-red-900"
+        >
+          {evaluation.field
+            ? `Results paused until ${describeField(evaluation.field)} is corrected (marked above).`
+            : evaluation.message}
         </p>
       ) : (
         <>
@@ -51,17 +63,31 @@ export function SolutionResults({ evaluation, formulas }: SolutionResultsProps) 
             <ComponentResults result={evaluation.result} />
           </div>
           <FormulaApplied result={evaluation.result} />
-          <MessagesList title="Outside the model's range" tone="validity" messages={evaluation.result.validity.messages} />
+          <MessagesList
+            title="Outside the model's range"
+            tone="validity"
+            messages={evaluation.result.validity.messages}
+          />
           <MessagesList title="Warnings" tone="warning" messages={evaluation.result.warnings} />
           <MessagesList title="Notes" tone="note" messages={evaluation.result.notes ?? []} />
           {evaluation.result.salts.length > 0 ? (
             <div>
-              <button type="button" className={actionButtonClass} aria-expanded={chartOpen} onClick={() => setChartOpen((open) => !open)}>
+              <button
+                type="button"
+                className={actionButtonClass}
+                aria-expanded={chartOpen}
+                onClick={() => setChartOpen((open) => !open)}
+              >
                 {chartOpen ? "Hide" : "Show"} γ± against √I for each model
               </button>
               {chartOpen ? (
                 <Suspense fallback={<p className="mt-2 text-xs text-ink-soft">Loading chart…</p>}>
-                  <GammaChart input={evaluation.input} result={evaluation.result} salt={chartSalt} onSaltChange={setChartSalt} />
+                  <GammaChart
+                    input={evaluation.input}
+                    result={evaluation.result}
+                    salt={chartSalt}
+                    onSaltChange={setChartSalt}
+                  />
                 </Suspense>
               ) : null}
             </div>

@@ -22,11 +22,22 @@ interface SpeciesComboboxProps {
  * stays allowed: the engine says whether it knows the species, in place.
  * ARIA 1.2 combobox pattern: the input owns a listbox; arrows move, Enter picks, Escape closes.
  */
-export function SpeciesCombobox({ value, onValueChange, label, error, disabled, onRowKeyDown, inputRef }: SpeciesComboboxProps) {
+export function SpeciesCombobox({
+  value,
+  onValueChange,
+  label,
+  error,
+  disabled,
+  onRowKeyDown,
+  inputRef,
+}: SpeciesComboboxProps) {
   const id = useId();
   const [open, setOpen] = useState(false);
   const [active, setActive] = useState(0);
-  const options = useMemo<SpeciesOption[]>(() => (open ? searchSpeciesOptions(value, 8) : []), [open, value]);
+  const options = useMemo<SpeciesOption[]>(
+    () => (open ? searchSpeciesOptions(value, 8) : []),
+    [open, value],
+  );
   const showList = open && options.length > 0 && !disabled;
   // While suggestions are open the person is still choosing: the engine's "unknown species"
   // for a half-typed name would only be noise. It shows as soon as the list closes.
@@ -92,7 +103,7 @@ export function SpeciesCombobox({ value, onValueChange, label, error, disabled, 
           id={`${id}-list`}
           role="listbox"
           aria-label={`${label} suggestions`}
-          className="absolute left-0 top-full z-20 mt-1 max-h-60 w-72 overflow-auto rounded-md border border-ink-faint/40 bg-white py-1 shadow-lg"
+          className="absolute top-full left-0 z-20 mt-1 max-h-60 w-72 overflow-auto rounded-md border border-ink-faint/40 bg-white py-1 shadow-lg"
         >
           {options.map((option, index) => (
             <li

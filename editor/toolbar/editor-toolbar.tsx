@@ -5,7 +5,8 @@ import { useEditorState } from "@tiptap/react";
 import type { KeyboardEvent } from "react";
 import { ToolbarButton, ToolbarDivider } from "./toolbar-button";
 
-export type ToolbarPrompt = { kind: "link" } | { kind: "math"; display: boolean; latex: string; pos?: number };
+export type ToolbarPrompt =
+  { kind: "link" } | { kind: "math"; display: boolean; latex: string; pos?: number };
 
 interface EditorToolbarProps {
   editor: Editor;
@@ -33,33 +34,76 @@ export function EditorToolbar({ editor, onPrompt }: EditorToolbarProps) {
   });
   const chain = () => editor.chain().focus();
   return (
-    <div role="toolbar" aria-label="Entry formatting" onKeyDown={moveFocusWithArrows} className="flex flex-wrap items-center gap-0.5 border-b border-ink-faint/30 bg-paper px-2 py-1">
+    <div
+      role="toolbar"
+      aria-label="Entry formatting"
+      onKeyDown={moveFocusWithArrows}
+      className="flex flex-wrap items-center gap-0.5 border-b border-ink-faint/30 bg-paper px-2 py-1"
+    >
       {([1, 2, 3] as const).map((level) => (
-        <ToolbarButton key={level} label={`Heading ${level}`} shortcut={`Ctrl+Alt+${level}`} active={state[`h${level}`]} onClick={() => chain().toggleHeading({ level }).run()}>
+        <ToolbarButton
+          key={level}
+          label={`Heading ${level}`}
+          shortcut={`Ctrl+Alt+${level}`}
+          active={state[`h${level}`]}
+          onClick={() => chain().toggleHeading({ level }).run()}
+        >
           H{level}
         </ToolbarButton>
       ))}
       <ToolbarDivider />
-      <ToolbarButton label="Bold" shortcut="Ctrl+B" active={state.bold} onClick={() => chain().toggleBold().run()}>
+      <ToolbarButton
+        label="Bold"
+        shortcut="Ctrl+B"
+        active={state.bold}
+        onClick={() => chain().toggleBold().run()}
+      >
         <strong>B</strong>
       </ToolbarButton>
-      <ToolbarButton label="Italic" shortcut="Ctrl+I" active={state.italic} onClick={() => chain().toggleItalic().run()}>
+      <ToolbarButton
+        label="Italic"
+        shortcut="Ctrl+I"
+        active={state.italic}
+        onClick={() => chain().toggleItalic().run()}
+      >
         <em className="font-serif">I</em>
       </ToolbarButton>
-      <ToolbarButton label="Inline code" shortcut="Ctrl+E" active={state.code} onClick={() => chain().toggleCode().run()}>
+      <ToolbarButton
+        label="Inline code"
+        shortcut="Ctrl+E"
+        active={state.code}
+        onClick={() => chain().toggleCode().run()}
+      >
         <span className="font-mono">`a`</span>
       </ToolbarButton>
-      <ToolbarButton label="Code block" shortcut="Ctrl+Alt+C" active={state.codeBlock} onClick={() => chain().toggleCodeBlock().run()}>
+      <ToolbarButton
+        label="Code block"
+        shortcut="Ctrl+Alt+C"
+        active={state.codeBlock}
+        onClick={() => chain().toggleCodeBlock().run()}
+      >
         <span className="font-mono">{"{ }"}</span>
       </ToolbarButton>
       <ToolbarDivider />
-      <ToolbarButton label="Bulleted list" active={state.bulletList} onClick={() => chain().toggleBulletList().run()}>
+      <ToolbarButton
+        label="Bulleted list"
+        active={state.bulletList}
+        onClick={() => chain().toggleBulletList().run()}
+      >
         • List
       </ToolbarButton>
-      <ToolbarButton label="Numbered list" active={state.orderedList} onClick={() => chain().toggleOrderedList().run()}>
+      <ToolbarButton
+        label="Numbered list"
+        active={state.orderedList}
+        onClick={() => chain().toggleOrderedList().run()}
+      >
         1. List
       </ToolbarButton>
-      <ToolbarButton label="Checklist" active={state.taskList} onClick={() => chain().toggleTaskList().run()}>
+      <ToolbarButton
+        label="Checklist"
+        active={state.taskList}
+        onClick={() => chain().toggleTaskList().run()}
+      >
         ☐ Checklist
       </ToolbarButton>
       {state.inTable ? (
@@ -67,7 +111,10 @@ export function EditorToolbar({ editor, onPrompt }: EditorToolbarProps) {
           <ToolbarButton label="Add table row below" onClick={() => chain().addRowAfter().run()}>
             + Row
           </ToolbarButton>
-          <ToolbarButton label="Add table column right" onClick={() => chain().addColumnAfter().run()}>
+          <ToolbarButton
+            label="Add table column right"
+            onClick={() => chain().addColumnAfter().run()}
+          >
             + Col
           </ToolbarButton>
           <ToolbarButton label="Delete table row" onClick={() => chain().deleteRow().run()}>
@@ -81,25 +128,47 @@ export function EditorToolbar({ editor, onPrompt }: EditorToolbarProps) {
           </ToolbarButton>
         </>
       ) : (
-        <ToolbarButton label="Insert table" onClick={() => chain().insertTable({ rows: 3, cols: 3, withHeaderRow: true }).run()}>
+        <ToolbarButton
+          label="Insert table"
+          onClick={() => chain().insertTable({ rows: 3, cols: 3, withHeaderRow: true }).run()}
+        >
           Table
         </ToolbarButton>
       )}
       <ToolbarDivider />
-      <ToolbarButton label="Link" shortcut="Ctrl+K" active={state.link} onClick={() => onPrompt({ kind: "link" })}>
+      <ToolbarButton
+        label="Link"
+        shortcut="Ctrl+K"
+        active={state.link}
+        onClick={() => onPrompt({ kind: "link" })}
+      >
         Link
       </ToolbarButton>
-      <ToolbarButton label="Inline equation (TeX)" onClick={() => onPrompt({ kind: "math", display: false, latex: "" })}>
+      <ToolbarButton
+        label="Inline equation (TeX)"
+        onClick={() => onPrompt({ kind: "math", display: false, latex: "" })}
+      >
         <span className="font-serif italic">x²</span>
       </ToolbarButton>
-      <ToolbarButton label="Display equation (TeX)" onClick={() => onPrompt({ kind: "math", display: true, latex: "" })}>
+      <ToolbarButton
+        label="Display equation (TeX)"
+        onClick={() => onPrompt({ kind: "math", display: true, latex: "" })}
+      >
         <span className="font-serif">∑</span>
       </ToolbarButton>
       <span className="ml-auto" />
-      <ToolbarButton accent label="Insert solution block" onClick={() => chain().insertSolutionBlock().run()}>
+      <ToolbarButton
+        accent
+        label="Insert solution block"
+        onClick={() => chain().insertSolutionBlock().run()}
+      >
         + Solution
       </ToolbarButton>
-      <ToolbarButton accent label="Insert cell block" onClick={() => chain().insertCellBlock().run()}>
+      <ToolbarButton
+        accent
+        label="Insert cell block"
+        onClick={() => chain().insertCellBlock().run()}
+      >
         + Cell
       </ToolbarButton>
     </div>
@@ -108,15 +177,21 @@ export function EditorToolbar({ editor, onPrompt }: EditorToolbarProps) {
 
 /** Arrow keys, Home and End move between the toolbar's buttons (ARIA toolbar pattern). */
 function moveFocusWithArrows(event: KeyboardEvent<HTMLDivElement>) {
-  const buttons = Array.from(event.currentTarget.querySelectorAll<HTMLButtonElement>("button:not(:disabled)"));
+  const buttons = Array.from(
+    event.currentTarget.querySelectorAll<HTMLButtonElement>("button:not(:disabled)"),
+  );
   const index = buttons.indexOf(document.activeElement as HTMLButtonElement);
   if (index < 0) return;
   const next =
-    event.key === "ArrowRight" ? (index + 1) % buttons.length
-    : event.key === "ArrowLeft" ? (index - 1 + buttons.length) % buttons.length
-    : event.key === "Home" ? 0
-    : event.key === "End" ? buttons.length - 1
-    : null;
+    event.key === "ArrowRight"
+      ? (index + 1) % buttons.length
+      : event.key === "ArrowLeft"
+        ? (index - 1 + buttons.length) % buttons.length
+        : event.key === "Home"
+          ? 0
+          : event.key === "End"
+            ? buttons.length - 1
+            : null;
   if (next === null) return;
   event.preventDefault();
   buttons[next].focus();

@@ -18,7 +18,18 @@ interface PromptPopoverProps {
 }
 
 /** A small dialog under the toolbar for a link address or an equation's TeX. */
-export function PromptPopover({ title, label, initialValue, submitLabel, onSubmit, onCancel, onRemove, multiline, children, validate }: PromptPopoverProps) {
+export function PromptPopover({
+  title,
+  label,
+  initialValue,
+  submitLabel,
+  onSubmit,
+  onCancel,
+  onRemove,
+  multiline,
+  children,
+  validate,
+}: PromptPopoverProps) {
   const id = useId();
   const [value, setValue] = useState(initialValue);
   const field = useRef<HTMLInputElement & HTMLTextAreaElement>(null);
@@ -44,7 +55,11 @@ export function PromptPopover({ title, label, initialValue, submitLabel, onSubmi
     },
   };
   return (
-    <div role="dialog" aria-label={title} className="absolute left-2 top-full z-30 mt-1 w-[26rem] max-w-[calc(100vw-2rem)] rounded-lg border border-ink-faint/40 bg-white p-3 shadow-xl">
+    <div
+      role="dialog"
+      aria-label={title}
+      className="absolute top-full left-2 z-30 mt-1 w-[26rem] max-w-[calc(100vw-2rem)] rounded-lg border border-ink-faint/40 bg-white p-3 shadow-xl"
+    >
       <label htmlFor={id} className={`${labelClass} mb-1`}>
         {label}
       </label>
@@ -53,14 +68,23 @@ export function PromptPopover({ title, label, initialValue, submitLabel, onSubmi
       {children?.(value)}
       <div className="mt-3 flex items-center justify-end gap-2">
         {onRemove ? (
-          <button type="button" className="mr-auto text-xs text-ink-soft underline hover:text-ink" onClick={onRemove}>
+          <button
+            type="button"
+            className="mr-auto text-xs text-ink-soft underline hover:text-ink"
+            onClick={onRemove}
+          >
             Remove
           </button>
         ) : null}
         <button type="button" className="text-xs text-ink-soft hover:text-ink" onClick={onCancel}>
           Cancel
         </button>
-        <button type="button" className={actionButtonClass} disabled={Boolean(problem)} onClick={submit}>
+        <button
+          type="button"
+          className={actionButtonClass}
+          disabled={Boolean(problem)}
+          onClick={submit}
+        >
           {submitLabel}
         </button>
       </div>

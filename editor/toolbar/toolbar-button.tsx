@@ -13,7 +13,15 @@ interface ToolbarButtonProps {
   accent?: boolean;
 }
 
-export function ToolbarButton({ label, shortcut, active, disabled, onClick, children, accent }: ToolbarButtonProps) {
+export function ToolbarButton({
+  label,
+  shortcut,
+  active,
+  disabled,
+  onClick,
+  children,
+  accent,
+}: ToolbarButtonProps) {
   return (
     <button
       type="button"

@@ -9,7 +9,8 @@ export const inputClass =
 
 export const numberInputClass = `${inputClass} font-mono tabular-nums text-right`;
 
-export const invalidClass = "border-red-700/70 bg-red-50 focus:border-red-700 focus:ring-red-300/60";
+export const invalidClass =
+  "border-red-700/70 bg-red-50 focus:border-red-700 focus:ring-red-300/60";
 
 export const labelClass = "block text-[11px] font-medium uppercase tracking-wide text-ink-soft";
 

@@ -26,23 +26,49 @@ const DEFAULT_BOUNDS = { min: -1e9, max: 1e9 };
  * A number input that keeps what the person is typing ("0.", "1e-") as text and passes on a
  * number only when the text reads as one. Text that does not parse is kept and marked.
  */
-export function NumberField({ value, onValueChange, label, hideLabel, unit, error, className, bounds = DEFAULT_BOUNDS, ...rest }: NumberFieldProps) {
+export function NumberField({
+  value,
+  onValueChange,
+  label,
+  hideLabel,
+  unit,
+  error,
+  className,
+  bounds = DEFAULT_BOUNDS,
+  ...rest
+}: NumberFieldProps) {
   const id = useId();
-  const [text, setText] = useState(() => (value === null || value === undefined ? "" : String(value)));
+  const [text, setText] = useState(() =>
+    value === null || value === undefined ? "" : String(value),
+  );
   // Follow outside changes (undo, a template) without fighting the person typing: the
   // text is replaced only when it no longer reads as the stored value.
   useEffect(() => {
-    if (parseTypedNumber(text) !== (value ?? null)) setText(value === null || value === undefined ? "" : String(value));
+    if (parseTypedNumber(text) !== (value ?? null))
+      setText(value === null || value === undefined ? "" : String(value));
   }, [value]);
   const typed = parseTypedNumber(text);
   const unparsable = text.trim() !== "" && typed === null;
   const outOfBounds = typed !== null && (typed < bounds.min || typed > bounds.max);
-  const message = unparsable ? "Not a number." : outOfBounds ? `Out of the range this field takes (${bounds.min} to ${bounds.max}).` : error;
+  const message = unparsable
+    ? "Not a number."
+    : outOfBounds
+      ? `Out of the range this field takes (${bounds.min} to ${bounds.max}).`
+      : error;
   return (
     <div className={className}>
-      <label htmlFor={id} className={hideLabel ? "sr-only" : "mb-0.5 block text-[11px] font-medium uppercase tracking-wide text-ink-soft"}>
+      <label
+        htmlFor={id}
+        className={
+          hideLabel
+            ? "sr-only"
+            : "mb-0.5 block text-[11px] font-medium tracking-wide text-ink-soft uppercase"
+        }
+      >
         {label}
-        {unit && !hideLabel ? <span className="normal-case tracking-normal text-ink-faint"> ({unit})</span> : null}
+        {unit && !hideLabel ? (
+          <span className="tracking-normal text-ink-faint normal-case"> ({unit})</span>
+        ) : null}
       </label>
       <div className="flex items-center gap-1">
         <input

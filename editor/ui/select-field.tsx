@@ -21,7 +21,16 @@ interface SelectFieldProps {
   className?: string;
 }
 
-export function SelectField({ label, value, options, onValueChange, error, hideLabel, disabled, className }: SelectFieldProps) {
+export function SelectField({
+  label,
+  value,
+  options,
+  onValueChange,
+  error,
+  hideLabel,
+  disabled,
+  className,
+}: SelectFieldProps) {
   const id = useId();
   return (
     <div className={className}>

@@ -13,7 +13,15 @@ interface TextFieldProps extends Omit<InputHTMLAttributes<HTMLInputElement>, "va
   hideLabel?: boolean;
 }
 
-export function TextField({ label, value, onValueChange, error, hideLabel, className, ...rest }: TextFieldProps) {
+export function TextField({
+  label,
+  value,
+  onValueChange,
+  error,
+  hideLabel,
+  className,
+  ...rest
+}: TextFieldProps) {
   const id = useId();
   return (
     <div className={className}>

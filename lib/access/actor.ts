@@ -13,7 +13,13 @@ export { assertCan, type Actor } from "./authorize";
 export async function actorForUserId(userId: string): Promise<Actor | null> {
   const user = await findUserById(getDb(), userId);
   if (!user || !user.active) return null;
-  return { userId: user.id, labId: user.labId, role: user.role as Role, name: user.name, email: user.email };
+  return {
+    userId: user.id,
+    labId: user.labId,
+    role: user.role as Role,
+    name: user.name,
+    email: user.email,
+  };
 }
 
 /** Once per request: the session's member, or null. */

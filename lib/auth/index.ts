@@ -14,13 +14,20 @@ export const { handlers, auth, signIn, signOut } = NextAuth({
   logger: {
     // A wrong password is an expected event, not a server error worth a stack trace.
     error(error) {
-      if (error.name === "CredentialsSignin" || (error as { type?: string }).type === "CredentialsSignin") return;
+      if (
+        error.name === "CredentialsSignin" ||
+        (error as { type?: string }).type === "CredentialsSignin"
+      )
+        return;
       console.error("[auth]", error);
     },
   },
   providers: [
     Credentials({
-      credentials: { email: { label: "E-mail", type: "email" }, password: { label: "Password", type: "password" } },
+      credentials: {
+        email: { label: "E-mail", type: "email" },
+        password: { label: "Password", type: "password" },
+      },
       async authorize(credentials) {
         const result = await verifyCredentials(getDb(), credentials);
         if (result.kind === "throttled") {

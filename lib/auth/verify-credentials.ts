@@ -16,19 +16,29 @@ export type CredentialsResult =
  * address and a deactivated member all answer "invalid", so a stranger learns nothing
  * about who has an account.
  */
-export async function verifyCredentials(db: Database, raw: unknown, now = new Date()): Promise<CredentialsResult> {
+export async function verifyCredentials(
+  db: Database,
+  raw: unknown,
+  now = new Date(),
+): Promise<CredentialsResult> {
   const parsed = signInSchema.safeParse(raw);
   if (!parsed.success) return { kind: "invalid" };
   const { email, password } = parsed.data;
 
   const attempts = await recentSignInAttempts(db, email, new Date(now.getTime() - WINDOW_MS));
   const decision = throttleDecision(attempts, now);
-  if (!decision.allowed) return { kind: "throttled", retryAfterSeconds: decision.retryAfterSeconds };
+  if (!decision.allowed)
+    return { kind: "throttled", retryAfterSeconds: decision.retryAfterSeconds };
 
   const user = await findUserByEmail(db, email);
-  const passwordOk = user ? await verifyPassword(user.passwordHash, password) : await verifyDecoy(password);
+  const passwordOk = user
+    ? await verifyPassword(user.passwordHash, password)
+    : await verifyDecoy(password);
   const ok = Boolean(user && passwordOk && user.active);
   await recordSignInAttempt(db, email, ok);
   if (!ok || !user) return { kind: "invalid" };
-  return { kind: "ok", user: { id: user.id, email: user.email, name: user.name, labId: user.labId, role: user.role } };
+  return {
+    kind: "ok",
+    user: { id: user.id, email: user.email, name: user.name, labId: user.labId, role: user.role },
+  };
 }

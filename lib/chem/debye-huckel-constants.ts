@@ -14,7 +14,12 @@
  * reproduce Robinson & Stokes (1959) App. 7.1 within 0.2 % over 0–100 °C (see tests).
  */
 import {
-  AVOGADRO_PER_MOL, BOLTZMANN_J_PER_K, ELEMENTARY_CHARGE_C, LN10, VACUUM_PERMITTIVITY_F_PER_M, kelvin,
+  AVOGADRO_PER_MOL,
+  BOLTZMANN_J_PER_K,
+  ELEMENTARY_CHARGE_C,
+  LN10,
+  VACUUM_PERMITTIVITY_F_PER_M,
+  kelvin,
 } from "./constants";
 import type { DebyeHuckelConstants } from "./models/types";
 import { solventState } from "./solvents/properties";
@@ -27,8 +32,16 @@ export function debyeHuckelConstantsFrom(
   const temperatureK = kelvin(temperatureC);
   const rhoKgPerM3 = densityGPerMl * 1000;
   const e2 = ELEMENTARY_CHARGE_C * ELEMENTARY_CHARGE_C;
-  const bjerrum = e2 / (4 * Math.PI * VACUUM_PERMITTIVITY_F_PER_M * relativePermittivity * BOLTZMANN_J_PER_K * temperatureK);
-  const aPhi = (1 / 3) * Math.sqrt(2 * Math.PI * AVOGADRO_PER_MOL * rhoKgPerM3) * Math.pow(bjerrum, 1.5);
+  const bjerrum =
+    e2 /
+    (4 *
+      Math.PI *
+      VACUUM_PERMITTIVITY_F_PER_M *
+      relativePermittivity *
+      BOLTZMANN_J_PER_K *
+      temperatureK);
+  const aPhi =
+    (1 / 3) * Math.sqrt(2 * Math.PI * AVOGADRO_PER_MOL * rhoKgPerM3) * Math.pow(bjerrum, 1.5);
   const bPerMetre = Math.sqrt(
     (2 * AVOGADRO_PER_MOL * rhoKgPerM3 * e2) /
       (VACUUM_PERMITTIVITY_F_PER_M * relativePermittivity * BOLTZMANN_J_PER_K * temperatureK),
@@ -37,7 +50,10 @@ export function debyeHuckelConstantsFrom(
 }
 
 /** A, B and Aφ (molal scale) for a catalogue solvent at a temperature. */
-export function debyeHuckelConstants(temperatureC: number, solventId = "water"): DebyeHuckelConstants {
+export function debyeHuckelConstants(
+  temperatureC: number,
+  solventId = "water",
+): DebyeHuckelConstants {
   const state = solventState(solventId, temperatureC);
   return debyeHuckelConstantsFrom(state.relativePermittivity, state.densityGPerMl, temperatureC);
 }

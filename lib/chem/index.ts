@@ -10,15 +10,48 @@ export { searchSpecies } from "./species/catalogue";
 export { resolveSpecies } from "./species/resolve";
 export type { ResolvedSpecies } from "./species/resolve";
 export { computeSolution } from "./solution/compute-solution";
-export type { SolutionInput, SolutionResult, SolutionComponentInput, IonResult, SaltResult, ComponentResult } from "./solution/types";
+export type {
+  SolutionInput,
+  SolutionResult,
+  SolutionComponentInput,
+  IonResult,
+  SaltResult,
+  ComponentResult,
+} from "./solution/types";
 export { ACTIVITY_MODELS, listActivityModels, MODEL_REGISTRY, getModel } from "./models/registry";
 export type { ActivityModelSummary, RequestedModel } from "./models/registry";
 export { chooseModel, AUTO_CANDIDATES } from "./models/auto";
 export type { AutoCandidate, AutoContext, AutoChoice } from "./models/auto";
-export type { ActivityModel, ActivityModelInput, ActivityModelOutput, ActivityModelOptions, ModelIon } from "./models/types";
-export { nernstPotential, nernstPotentialDetailed, nernstSlopeV, listCouples } from "./electrochem/nernst";
+export type {
+  ActivityModel,
+  ActivityModelInput,
+  ActivityModelOutput,
+  ActivityModelOptions,
+  ModelIon,
+} from "./models/types";
+export {
+  nernstPotential,
+  nernstPotentialDetailed,
+  nernstSlopeV,
+  listCouples,
+} from "./electrochem/nernst";
 export type { NernstInput, NernstResult } from "./electrochem/nernst";
-export { convertPotential, convertPotentialDetailed, listReferenceElectrodes, referencePotentialVsShe } from "./electrochem/reference-electrodes";
+export {
+  convertPotential,
+  convertPotentialDetailed,
+  listReferenceElectrodes,
+  referencePotentialVsShe,
+} from "./electrochem/reference-electrodes";
 export type { ReferenceElectrodeId, PotentialOptions } from "./electrochem/reference-electrodes";
 export { designBuffer, speciate } from "./acid-base";
-export type { DesignBufferInput, DesignBufferResult, SpeciateInput, SpeciateResult, SpeciateComponent, RecipeComponent, SpeciesResult, ActivityConvention, BufferSystemId } from "./acid-base";
+export type {
+  DesignBufferInput,
+  DesignBufferResult,
+  SpeciateInput,
+  SpeciateResult,
+  SpeciateComponent,
+  RecipeComponent,
+  SpeciesResult,
+  ActivityConvention,
+  BufferSystemId,
+} from "./acid-base";

@@ -17,24 +17,47 @@ import { getDb } from "@/lib/server/database";
  */
 const text = (value: string) => ({ type: "text", text: value });
 const paragraph = (value: string) => ({ type: "paragraph", content: [text(value)] });
-const heading = (value: string) => ({ type: "heading", attrs: { level: 2 }, content: [text(value)] });
+const heading = (value: string) => ({
+  type: "heading",
+  attrs: { level: 2 },
+  content: [text(value)],
+});
 const solution = (attrs: SolutionBlockInput) => ({ type: "solutionBlock", attrs });
 
 async function actorsOf(labId: string): Promise<Record<string, Actor>> {
   const rows = await getDb().select().from(users).where(eq(users.labId, labId));
-  return Object.fromEntries(rows.map((u) => [u.email, { userId: u.id, labId: u.labId, role: u.role as Role, name: u.name, email: u.email }]));
+  return Object.fromEntries(
+    rows.map((u) => [
+      u.email,
+      { userId: u.id, labId: u.labId, role: u.role as Role, name: u.name, email: u.email },
+    ]),
+  );
 }
 
-async function write(actor: Actor, projectName: string, title: string, nodes: unknown[] | { template: string }, submit = false) {
+async function write(
+  actor: Actor,
+  projectName: string,
+  title: string,
+  nodes: unknown[] | { template: string },
+  submit = false,
+) {
   const project = (await listProjects(actor)).find((p) => p.name === projectName);
   if (!project) throw new Error(`demo project missing: ${projectName}`);
   if (!Array.isArray(nodes)) {
-    const { id } = await createEntry(actor, { projectId: project.id, title, template: nodes.template });
+    const { id } = await createEntry(actor, {
+      projectId: project.id,
+      title,
+      template: nodes.template,
+    });
     if (submit) await submitEntry(actor, id);
     return id;
   }
   const { id } = await createEntry(actor, { projectId: project.id, title });
-  await saveEntryContent(actor, id, { baseRevision: 0, title, content: { type: "doc", content: nodes } });
+  await saveEntryContent(actor, id, {
+    baseRevision: 0,
+    title,
+    content: { type: "doc", content: nodes },
+  });
   if (submit) await submitEntry(actor, id);
   return id;
 }
@@ -44,7 +67,12 @@ async function saltmarsh(labId: string) {
   const tobin = a["tobin.bench@saltmarsh.example"];
   const mira = a["mira.bench@saltmarsh.example"];
 
-  await write(tobin, "Copper corrosion in chloride media", "Cu disc in 0.1 m NaCl — polarisation run 1", { template: "cell-preparation" });
+  await write(
+    tobin,
+    "Copper corrosion in chloride media",
+    "Cu disc in 0.1 m NaCl — polarisation run 1",
+    { template: "cell-preparation" },
+  );
 
   const mixed = defaultSolutionBlockInput({
     name: "Chloride–sulfate mix, I ≈ 0.3",
@@ -53,12 +81,20 @@ async function saltmarsh(labId: string) {
       { formula: "Na2SO4", amount: 0.0667, unit: "mol/kg" },
     ],
   });
-  await write(tobin, "Copper corrosion in chloride media", "Mixed chloride–sulfate electrolyte at I = 0.3 mol/kg", [
-    heading("Aim"),
-    paragraph("Hold the ionic strength near 0.3 mol/kg while the chloride fraction changes, so that activity effects do not masquerade as a chloride effect."),
-    solution(mixed),
-    paragraph("Weighed on the analytical balance; dissolved in 18 MΩ·cm water."),
-  ], true);
+  await write(
+    tobin,
+    "Copper corrosion in chloride media",
+    "Mixed chloride–sulfate electrolyte at I = 0.3 mol/kg",
+    [
+      heading("Aim"),
+      paragraph(
+        "Hold the ionic strength near 0.3 mol/kg while the chloride fraction changes, so that activity effects do not masquerade as a chloride effect.",
+      ),
+      solution(mixed),
+      paragraph("Weighed on the analytical balance; dissolved in 18 MΩ·cm water."),
+    ],
+    true,
+  );
 
   const redox = defaultSolutionBlockInput({
     name: "Ferri/ferro 5 mM in 1 M KCl",
@@ -72,9 +108,18 @@ async function saltmarsh(labId: string) {
     name: "Glassy carbon RDE cell",
     electrolyteBlockId: redox.blockId,
     couple: "Fe(CN)6 3-/4-",
-    workingElectrode: { material: "glassy carbon disc", areaCm2: 0.0707, pretreatment: ["0.05 µm alumina polish, 2 min", "sonicate in water, 5 min"] },
+    workingElectrode: {
+      material: "glassy carbon disc",
+      areaCm2: 0.0707,
+      pretreatment: ["0.05 µm alumina polish, 2 min", "sonicate in water, 5 min"],
+    },
     counterElectrode: { material: "Pt coil", areaCm2: null, pretreatment: ["flame-annealed"] },
-    referenceElectrode: { material: "Ag/AgCl", areaCm2: null, pretreatment: [], type: "Ag/AgCl-3MKCl" },
+    referenceElectrode: {
+      material: "Ag/AgCl",
+      areaCm2: null,
+      pretreatment: [],
+      type: "Ag/AgCl-3MKCl",
+    },
     purgeMinutes: 15,
     instrument: "bench potentiostat B",
     channel: "2",
@@ -84,9 +129,17 @@ async function saltmarsh(labId: string) {
     solution(redox),
     heading("Cell"),
     { type: "cellBlock", attrs: cell },
-    paragraph("Hexacyanoferrates release hydrogen cyanide with strong acid: keep acids away from these solutions."),
+    paragraph(
+      "Hexacyanoferrates release hydrogen cyanide with strong acid: keep acids away from these solutions.",
+    ),
   ]);
-  await write(mira, "Ferrocyanide kinetics", "KCl stock for the reference compartment", { template: "electrolyte-stock" }, true);
+  await write(
+    mira,
+    "Ferrocyanide kinetics",
+    "KCl stock for the reference compartment",
+    { template: "electrolyte-stock" },
+    true,
+  );
 }
 
 async function ridgeback(labId: string) {
@@ -100,7 +153,9 @@ async function ridgeback(labId: string) {
   await write(juno, "LiTFSI electrolytes", "1 M LiTFSI in propylene carbonate — batch 4", [
     paragraph("Dried salt 12 h at 120 °C under vacuum; mixed in the glovebox (H2O < 1 ppm)."),
     solution(litfsi),
-    paragraph("Far outside the Debye–Hückel range: the block says so. Conductivity measured separately."),
+    paragraph(
+      "Far outside the Debye–Hückel range: the block says so. Conductivity measured separately.",
+    ),
   ]);
 }
 

@@ -31,8 +31,16 @@ export const DEMO_LABS: DemoLab[] = [
       { email: "mira.bench@saltmarsh.example", name: "Mira Quennell", role: "researcher" },
     ],
     projects: [
-      { name: "Copper corrosion in chloride media", description: "Polarisation studies of Cu electrodes in NaCl/Na2SO4 electrolytes at controlled ionic strength." },
-      { name: "Ferrocyanide kinetics", description: "Heterogeneous rate constants of the hexacyanoferrate couple on glassy carbon." },
+      {
+        name: "Copper corrosion in chloride media",
+        description:
+          "Polarisation studies of Cu electrodes in NaCl/Na2SO4 electrolytes at controlled ionic strength.",
+      },
+      {
+        name: "Ferrocyanide kinetics",
+        description:
+          "Heterogeneous rate constants of the hexacyanoferrate couple on glassy carbon.",
+      },
     ],
   },
   {
@@ -43,6 +51,11 @@ export const DEMO_LABS: DemoLab[] = [
       { email: "piet.pi@ridgeback.example", name: "Dr. Piet Varnham", role: "supervisor" },
       { email: "juno.bench@ridgeback.example", name: "Juno Marchetti", role: "researcher" },
     ],
-    projects: [{ name: "LiTFSI electrolytes", description: "Conductivity and window of concentrated LiTFSI in propylene carbonate." }],
+    projects: [
+      {
+        name: "LiTFSI electrolytes",
+        description: "Conductivity and window of concentrated LiTFSI in propylene carbonate.",
+      },
+    ],
   },
 ];

@@ -13,7 +13,10 @@ export interface SeedHooks {
 }
 
 /** Seeds the demo scenario once; labs that already exist are left exactly as they are. */
-export async function seedDemo(db: Database, hooks: SeedHooks = {}): Promise<{ created: string[]; skipped: string[] }> {
+export async function seedDemo(
+  db: Database,
+  hooks: SeedHooks = {},
+): Promise<{ created: string[]; skipped: string[] }> {
   const created: string[] = [];
   const skipped: string[] = [];
   const passwordHash = await hashPassword(DEMO_PASSWORD);
@@ -26,14 +29,36 @@ export async function seedDemo(db: Database, hooks: SeedHooks = {}): Promise<{ c
       const lab = await insertLab(tx, { slug: demo.slug, name: demo.name });
       const memberIds: Record<string, string> = {};
       for (const m of demo.members) {
-        const user = await insertUser(tx, { labId: lab.id, email: m.email, name: m.name, role: m.role, passwordHash });
+        const user = await insertUser(tx, {
+          labId: lab.id,
+          email: m.email,
+          name: m.name,
+          role: m.role,
+          passwordHash,
+        });
         memberIds[m.email] = user.id;
       }
-      const creator = memberIds[demo.members.find((m) => m.role === "supervisor")?.email ?? demo.members[0].email];
+      const creator =
+        memberIds[
+          demo.members.find((m) => m.role === "supervisor")?.email ?? demo.members[0].email
+        ];
       for (const p of demo.projects) {
-        await tx.insert(projects).values({ labId: lab.id, name: p.name, description: p.description, createdById: creator });
+        await tx
+          .insert(projects)
+          .values({
+            labId: lab.id,
+            name: p.name,
+            description: p.description,
+            createdById: creator,
+          });
       }
-      await insertAuditEvent(tx, { labId: lab.id, actorId: null, action: "lab.seeded", targetType: "lab", targetId: lab.id });
+      await insertAuditEvent(tx, {
+        labId: lab.id,
+        actorId: null,
+        action: "lab.seeded",
+        targetType: "lab",
+        targetId: lab.id,
+      });
       return lab;
     });
     if (hooks.afterLab) await hooks.afterLab({ id: lab.id, slug: lab.slug });

@@ -2,7 +2,9 @@ import { newBlockId } from "./block-id";
 import type { CellBlockInput, ElectrodeInput, SolutionBlockInput } from "./block-schemas";
 
 /** Inputs of a freshly inserted solution block: water at 25 °C, one empty row. */
-export function defaultSolutionBlockInput(overrides: Partial<SolutionBlockInput> = {}): SolutionBlockInput {
+export function defaultSolutionBlockInput(
+  overrides: Partial<SolutionBlockInput> = {},
+): SolutionBlockInput {
   return {
     blockId: newBlockId(),
     name: "",

@@ -7,7 +7,8 @@ export function newBlockId(): string {
   if (cryptoApi && typeof cryptoApi.randomUUID === "function") return cryptoApi.randomUUID();
   // Plain-http origins other than localhost have no randomUUID; getRandomValues still works.
   const bytes = new Uint8Array(16);
-  if (cryptoApi && typeof cryptoApi.getRandomValues === "function") cryptoApi.getRandomValues(bytes);
+  if (cryptoApi && typeof cryptoApi.getRandomValues === "function")
+    cryptoApi.getRandomValues(bytes);
   else for (let i = 0; i < bytes.length; i++) bytes[i] = Math.floor(Math.random() * 256);
   bytes[6] = (bytes[6] & 0x0f) | 0x40;
   bytes[8] = (bytes[8] & 0x3f) | 0x80;

@@ -28,7 +28,8 @@ function serialise(value: unknown, ancestors: Set<object>): string {
     case "boolean":
       return value ? "true" : "false";
     case "number":
-      if (!Number.isFinite(value)) throw new TypeError("Canonical JSON cannot hold NaN or Infinity.");
+      if (!Number.isFinite(value))
+        throw new TypeError("Canonical JSON cannot hold NaN or Infinity.");
       return JSON.stringify(value);
     case "object":
       break;

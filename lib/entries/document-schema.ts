@@ -24,12 +24,22 @@ const NODE_ATTRS = {
   text: z.strictObject({}),
   heading: z.strictObject({ level: z.number().int().min(1).max(4) }),
   bulletList: z.strictObject({}),
-  orderedList: z.strictObject({ start: z.number().int().min(0).max(100000).optional(), type: z.string().max(8).nullable().optional() }),
+  orderedList: z.strictObject({
+    start: z.number().int().min(0).max(100000).optional(),
+    type: z.string().max(8).nullable().optional(),
+  }),
   listItem: z.strictObject({}),
   taskList: z.strictObject({}),
   taskItem: z.strictObject({ checked: z.boolean().optional() }),
   blockquote: z.strictObject({}),
-  codeBlock: z.strictObject({ language: z.string().max(40).regex(/^[\w+#.-]*$/).nullable().optional() }),
+  codeBlock: z.strictObject({
+    language: z
+      .string()
+      .max(40)
+      .regex(/^[\w+#.-]*$/)
+      .nullable()
+      .optional(),
+  }),
   horizontalRule: z.strictObject({}),
   hardBreak: z.strictObject({}),
   table: z.strictObject({}),
@@ -73,7 +83,10 @@ const MARK_ATTRS = {
 export const ALLOWED_MARK_TYPES = Object.keys(MARK_ATTRS) as (keyof typeof MARK_ATTRS)[];
 
 const markSchema = z
-  .strictObject({ type: z.enum(ALLOWED_MARK_TYPES), attrs: z.record(z.string(), z.unknown()).optional() })
+  .strictObject({
+    type: z.enum(ALLOWED_MARK_TYPES),
+    attrs: z.record(z.string(), z.unknown()).optional(),
+  })
   .superRefine((mark, ctx) => {
     const parsed = MARK_ATTRS[mark.type].safeParse(mark.attrs ?? {});
     if (!parsed.success) addIssues(ctx, parsed.error, ["attrs"]);
@@ -100,17 +113,28 @@ const nodeSchema: z.ZodType<EntryNode> = z.lazy(() =>
       const parsed = NODE_ATTRS[node.type].safeParse(node.attrs ?? {});
       if (!parsed.success) addIssues(ctx, parsed.error, ["attrs"]);
       if (node.type === "text" && (!node.text || node.content)) {
-        ctx.addIssue({ code: "custom", message: "A text node holds non-empty text and no content." });
+        ctx.addIssue({
+          code: "custom",
+          message: "A text node holds non-empty text and no content.",
+        });
       }
       if (node.type !== "text" && node.text !== undefined) {
-        ctx.addIssue({ code: "custom", message: `A ${node.type} node cannot hold text directly.`, path: ["text"] });
+        ctx.addIssue({
+          code: "custom",
+          message: `A ${node.type} node cannot hold text directly.`,
+          path: ["text"],
+        });
       }
     }),
 );
 
 function addIssues(ctx: z.RefinementCtx, error: z.ZodError, prefix: (string | number)[]) {
   for (const issue of error.issues) {
-    ctx.addIssue({ code: "custom", message: issue.message, path: [...prefix, ...issue.path.map((p) => (typeof p === "symbol" ? String(p) : p))] });
+    ctx.addIssue({
+      code: "custom",
+      message: issue.message,
+      path: [...prefix, ...issue.path.map((p) => (typeof p === "symbol" ? String(p) : p))],
+    });
   }
 }
 
@@ -121,19 +145,26 @@ function checkWholeDocument(doc: EntryNode, ctx: z.RefinementCtx) {
   const walk = (node: EntryNode, depth: number) => {
     count += 1;
     if (depth > LIMITS.maxDepth) {
-      ctx.addIssue({ code: "custom", message: `The document nests deeper than ${LIMITS.maxDepth} levels.` });
+      ctx.addIssue({
+        code: "custom",
+        message: `The document nests deeper than ${LIMITS.maxDepth} levels.`,
+      });
       return;
     }
     if (node.type === "solutionBlock" || node.type === "cellBlock") {
       const id = String(node.attrs?.blockId ?? "");
-      if (seenIds.has(id)) ctx.addIssue({ code: "custom", message: `Two blocks share the id "${id}".` });
+      if (seenIds.has(id))
+        ctx.addIssue({ code: "custom", message: `Two blocks share the id "${id}".` });
       seenIds.add(id);
     }
     node.content?.forEach((child) => walk(child, depth + 1));
   };
   walk(doc, 0);
   if (count > LIMITS.maxNodes) {
-    ctx.addIssue({ code: "custom", message: `The document has more than ${LIMITS.maxNodes} nodes.` });
+    ctx.addIssue({
+      code: "custom",
+      message: `The document has more than ${LIMITS.maxNodes} nodes.`,
+    });
   }
 }
 
@@ -149,5 +180,7 @@ export type EntryDocument = z.infer<typeof entryDocumentSchema>;
 
 /** Field-level messages for a refused save, e.g. "content.3.attrs.temperatureC: …". */
 export function describeDocumentErrors(error: z.ZodError): string[] {
-  return error.issues.slice(0, 20).map((issue) => `${issue.path.join(".") || "document"}: ${issue.message}`);
+  return error.issues
+    .slice(0, 20)
+    .map((issue) => `${issue.path.join(".") || "document"}: ${issue.message}`);
 }

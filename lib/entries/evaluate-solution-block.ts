@@ -20,13 +20,20 @@ export type SolutionEvaluation =
  * typed); `rowIndex` maps the engine's component index back to the row on screen, so its
  * message lands on the right input.
  */
-export function toChemInput(block: SolutionBlockInput): { input: ChemInput; rowIndex: number[] } | { missing: { field: string; message: string } } | null {
-  if (block.temperatureC === null) return { missing: { field: "temperatureC", message: "Enter the temperature." } };
+export function toChemInput(
+  block: SolutionBlockInput,
+):
+  | { input: ChemInput; rowIndex: number[] }
+  | { missing: { field: string; message: string } }
+  | null {
+  if (block.temperatureC === null)
+    return { missing: { field: "temperatureC", message: "Enter the temperature." } };
   const rowIndex: number[] = [];
   const components: ChemInput["components"] = [];
   for (const [index, row] of block.components.entries()) {
     if (row.formula.trim() === "") continue;
-    if (row.amount === null) return { missing: { field: `components[${index}].amount`, message: "Enter an amount." } };
+    if (row.amount === null)
+      return { missing: { field: `components[${index}].amount`, message: "Enter an amount." } };
     const hasPer = row.perAmount !== null && row.perAmount !== undefined && row.perUnit;
     components.push({
       formula: row.formula.trim(),
@@ -42,7 +49,9 @@ export function toChemInput(block: SolutionBlockInput): { input: ChemInput; rowI
     solvent: block.solvent || "water",
     model: block.model,
     components,
-    ...(block.densityGPerMl !== null && block.densityGPerMl !== undefined ? { densityGPerMl: block.densityGPerMl } : {}),
+    ...(block.densityGPerMl !== null && block.densityGPerMl !== undefined
+      ? { densityGPerMl: block.densityGPerMl }
+      : {}),
   } as ChemInput;
   return { input, rowIndex };
 }
@@ -56,13 +65,20 @@ export function evaluateSolutionBlock(block: SolutionBlockInput): SolutionEvalua
     return { status: "ok", input: prepared.input, result: computeSolution(prepared.input) };
   } catch (error) {
     if (!isChemInputError(error)) throw error;
-    return { status: "error", field: remapField(error.field, prepared.rowIndex), message: error.message };
+    return {
+      status: "error",
+      field: remapField(error.field, prepared.rowIndex),
+      message: error.message,
+    };
   }
 }
 
 function remapField(field: string | undefined, rowIndex: number[]): string | undefined {
   if (!field) return undefined;
-  return normaliseFieldPath(field).replace(/^components\[(\d+)\]/, (_m, i: string) => `components[${rowIndex[Number(i)] ?? i}]`);
+  return normaliseFieldPath(field).replace(
+    /^components\[(\d+)\]/,
+    (_m, i: string) => `components[${rowIndex[Number(i)] ?? i}]`,
+  );
 }
 
 const cache = new Map<string, SolutionEvaluation>();

@@ -17,7 +17,9 @@ const K = new Uint32Array([
 ]);
 
 // First 32 bits of the fractional parts of the square roots of the first 8 primes (§5.3.3).
-const H0 = [0x6a09e667, 0xbb67ae85, 0x3c6ef372, 0xa54ff53a, 0x510e527f, 0x9b05688c, 0x1f83d9ab, 0x5be0cd19];
+const H0 = [
+  0x6a09e667, 0xbb67ae85, 0x3c6ef372, 0xa54ff53a, 0x510e527f, 0x9b05688c, 0x1f83d9ab, 0x5be0cd19,
+];
 
 export function sha256Hex(text: string): string {
   return sha256Bytes(new TextEncoder().encode(text));

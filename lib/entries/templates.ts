@@ -15,14 +15,27 @@ export interface EntryTemplate {
 type Json = EntryNode;
 
 const text = (value: string): Json => ({ type: "text", text: value });
-const heading = (level: number, value: string): Json => ({ type: "heading", attrs: { level }, content: [text(value)] });
-const paragraph = (value?: string): Json => ({ type: "paragraph", ...(value ? { content: [text(value)] } : {}) });
-const cell = (type: "tableHeader" | "tableCell", value: string): Json => ({ type, content: [paragraph(value)] });
+const heading = (level: number, value: string): Json => ({
+  type: "heading",
+  attrs: { level },
+  content: [text(value)],
+});
+const paragraph = (value?: string): Json => ({
+  type: "paragraph",
+  ...(value ? { content: [text(value)] } : {}),
+});
+const cell = (type: "tableHeader" | "tableCell", value: string): Json => ({
+  type,
+  content: [paragraph(value)],
+});
 const table = (header: string[], rows: string[][]): Json => ({
   type: "table",
   content: [
     { type: "tableRow", content: header.map((h) => cell("tableHeader", h)) },
-    ...rows.map((row) => ({ type: "tableRow" as const, content: row.map((v) => cell("tableCell", v)) })),
+    ...rows.map((row) => ({
+      type: "tableRow" as const,
+      content: row.map((v) => cell("tableCell", v)),
+    })),
   ],
 });
 const checklist = (items: string[]): Json => ({
@@ -56,8 +69,17 @@ function buildCellPreparation(): EntryDocument {
         "Rinse with deionised water and dry under N2",
       ],
     },
-    counterElectrode: { material: "platinum wire, coiled", areaCm2: 1.0, pretreatment: ["Flame-anneal and rinse"] },
-    referenceElectrode: { type: "Ag/AgCl-3MKCl", material: "Ag/AgCl, 3 M KCl, ceramic frit", areaCm2: null, pretreatment: ["Check against a master reference electrode"] },
+    counterElectrode: {
+      material: "platinum wire, coiled",
+      areaCm2: 1.0,
+      pretreatment: ["Flame-anneal and rinse"],
+    },
+    referenceElectrode: {
+      type: "Ag/AgCl-3MKCl",
+      material: "Ag/AgCl, 3 M KCl, ceramic frit",
+      areaCm2: null,
+      pretreatment: ["Check against a master reference electrode"],
+    },
     electrolyteBlockId: electrolyte.blockId,
     purgeGas: "N2",
     purgeMinutes: 15,
@@ -125,7 +147,8 @@ export const entryTemplates: EntryTemplate[] = [
   {
     id: "cell-preparation",
     title: "Cell preparation",
-    description: "Electrolyte, electrodes and their pretreatment, gas purge, and a checklist before the first scan.",
+    description:
+      "Electrolyte, electrodes and their pretreatment, gas purge, and a checklist before the first scan.",
     build: buildCellPreparation,
   },
   {

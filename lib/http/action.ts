@@ -10,13 +10,21 @@ export type { ActionState } from "./action-state";
  * errors or a message; anything else is logged and reported without internals. Next.js
  * redirects and not-found signals pass through.
  */
-export async function runAction(body: () => Promise<ActionState | void>, values?: Record<string, string>): Promise<ActionState> {
+export async function runAction(
+  body: () => Promise<ActionState | void>,
+  values?: Record<string, string>,
+): Promise<ActionState> {
   try {
     return (await body()) ?? { ok: true };
   } catch (error) {
     unstable_rethrow(error);
-    if (isAppError(error)) return { ok: false, message: error.message, fieldErrors: error.fieldErrors, values };
+    if (isAppError(error))
+      return { ok: false, message: error.message, fieldErrors: error.fieldErrors, values };
     console.error("[ionleaf] action failed", error);
-    return { ok: false, message: "Something went wrong on our side. Nothing was saved; please try again.", values };
+    return {
+      ok: false,
+      message: "Something went wrong on our side. Nothing was saved; please try again.",
+      values,
+    };
   }
 }

@@ -4,11 +4,23 @@ import { AppError, isAppError } from "@/lib/errors";
 
 /** The JSON body of every API error: a code a client can switch on and a message a person can read. */
 export interface ApiErrorBody {
-  error: { code: string; message: string; fieldErrors?: Record<string, string[]>; details?: Record<string, unknown> };
+  error: {
+    code: string;
+    message: string;
+    fieldErrors?: Record<string, string[]>;
+    details?: Record<string, unknown>;
+  };
 }
 
 export function errorResponse(error: AppError): Response {
-  const body: ApiErrorBody = { error: { code: error.code, message: error.message, fieldErrors: error.fieldErrors, details: error.details } };
+  const body: ApiErrorBody = {
+    error: {
+      code: error.code,
+      message: error.message,
+      fieldErrors: error.fieldErrors,
+      details: error.details,
+    },
+  };
   return Response.json(body, { status: error.status });
 }
 
@@ -21,7 +33,12 @@ export function route<C>(handler: (request: Request, context: C) => Promise<Resp
       if (isAppError(error)) return errorResponse(error);
       console.error("[ionleaf] route failed", request.method, new URL(request.url).pathname, error);
       return Response.json(
-        { error: { code: "internal", message: "Something went wrong on our side; nothing was changed." } },
+        {
+          error: {
+            code: "internal",
+            message: "Something went wrong on our side; nothing was changed.",
+          },
+        },
         { status: 500 },
       );
     }
@@ -45,7 +62,9 @@ export async function readJson(request: Request, maxBytes = MAX_JSON_BYTES): Pro
 }
 
 /** A route handler that needs a signed-in member: resolves the actor first (401 otherwise). */
-export function authedRoute<P>(handler: (request: Request, actor: Actor, params: P) => Promise<Response>) {
+export function authedRoute<P>(
+  handler: (request: Request, actor: Actor, params: P) => Promise<Response>,
+) {
   return route<{ params: Promise<P> }>(async (request, context) => {
     const actor = await requireActor();
     return handler(request, actor, await context.params);

@@ -1,6 +1,12 @@
 import "server-only";
 import { insertAuditEvent } from "@/db/queries/audit";
-import { findInvitationByTokenHash, insertInvitation, markInvitationAccepted, revokeInvitation, revokeOpenInvitationsFor } from "@/db/queries/invitations";
+import {
+  findInvitationByTokenHash,
+  insertInvitation,
+  markInvitationAccepted,
+  revokeInvitation,
+  revokeOpenInvitationsFor,
+} from "@/db/queries/invitations";
 import { findLabById } from "@/db/queries/labs";
 import { findUserByEmail, insertUser } from "@/db/queries/users";
 import type { Role } from "@/db/schema/enums";
@@ -18,12 +24,17 @@ import { hashLinkToken, newLinkToken } from "./tokens";
 export const INVITATION_LIFETIME_MS = 7 * 24 * 60 * 60 * 1000;
 
 /** Invites a person by e-mail; the link goes only into the mail, its hash into the database. */
-export async function inviteMember(actor: Actor, raw: unknown): Promise<{ invitationId: string; link: string }> {
+export async function inviteMember(
+  actor: Actor,
+  raw: unknown,
+): Promise<{ invitationId: string; link: string }> {
   assertCan(actor, "lab.manage");
   const { email, role } = parseInput(inviteMemberSchema, raw);
   const db = getDb();
   if (await findUserByEmail(db, email)) {
-    throw new AppError("conflict", "Someone with that e-mail already has an Ionleaf account.", { fieldErrors: { email: ["Already has an account."] } });
+    throw new AppError("conflict", "Someone with that e-mail already has an Ionleaf account.", {
+      fieldErrors: { email: ["Already has an account."] },
+    });
   }
   const lab = await findLabById(db, actor.labId);
   if (!lab) throw new AppError("not_found", "Lab not found.");
@@ -33,12 +44,29 @@ export async function inviteMember(actor: Actor, raw: unknown): Promise<{ invita
 
   const invitation = await db.transaction(async (tx) => {
     await revokeOpenInvitationsFor(tx, actor.labId, email); // the newest link is the only one that works
-    const row = await insertInvitation(tx, { labId: actor.labId, email, role, tokenHash, invitedById: actor.userId, expiresAt });
-    await insertAuditEvent(tx, { labId: actor.labId, actorId: actor.userId, action: "invitation.sent", targetType: "invitation", targetId: row.id, details: { email, role } });
+    const row = await insertInvitation(tx, {
+      labId: actor.labId,
+      email,
+      role,
+      tokenHash,
+      invitedById: actor.userId,
+      expiresAt,
+    });
+    await insertAuditEvent(tx, {
+      labId: actor.labId,
+      actorId: actor.userId,
+      action: "invitation.sent",
+      targetType: "invitation",
+      targetId: row.id,
+      details: { email, role },
+    });
     return row;
   });
   // Sent after the commit: a mail for an invitation that was rolled back would be a dead link.
-  await sendMail({ to: email, ...invitationMail({ labName: lab.name, inviterName: actor.name, role, link, expiresAt }) });
+  await sendMail({
+    to: email,
+    ...invitationMail({ labName: lab.name, inviterName: actor.name, role, link, expiresAt }),
+  });
   return { invitationId: invitation.id, link };
 }
 
@@ -79,12 +107,28 @@ export async function acceptInvitation(raw: unknown): Promise<{ userId: string; 
     const found = await findInvitationByTokenHash(tx, hashLinkToken(input.token));
     if (!found) throw new AppError("gone", invitationStateMessage("unknown"));
     const { invitation } = found;
-    if (await findUserByEmail(tx, invitation.email)) throw new AppError("conflict", "An account with this e-mail already exists. Sign in instead.");
-    const user = await insertUser(tx, { labId: invitation.labId, email: invitation.email, name: input.name, passwordHash, role: invitation.role });
+    if (await findUserByEmail(tx, invitation.email))
+      throw new AppError(
+        "conflict",
+        "An account with this e-mail already exists. Sign in instead.",
+      );
+    const user = await insertUser(tx, {
+      labId: invitation.labId,
+      email: invitation.email,
+      name: input.name,
+      passwordHash,
+      role: invitation.role,
+    });
     if (!(await markInvitationAccepted(tx, invitation.id, user.id))) {
       throw new AppError("gone", invitationStateMessage("used")); // rolls back the new user too
     }
-    await insertAuditEvent(tx, { labId: invitation.labId, actorId: user.id, action: "invitation.accepted", targetType: "invitation", targetId: invitation.id });
+    await insertAuditEvent(tx, {
+      labId: invitation.labId,
+      actorId: user.id,
+      action: "invitation.accepted",
+      targetType: "invitation",
+      targetId: invitation.id,
+    });
     return { userId: user.id, email: user.email };
   });
 }
@@ -93,5 +137,11 @@ export async function withdrawInvitation(actor: Actor, invitationId: string): Pr
   assertCan(actor, "lab.manage");
   const done = await revokeInvitation(getDb(), actor.labId, invitationId);
   if (!done) throw new AppError("not_found", "That invitation is not open.");
-  await insertAuditEvent(getDb(), { labId: actor.labId, actorId: actor.userId, action: "invitation.revoked", targetType: "invitation", targetId: invitationId });
+  await insertAuditEvent(getDb(), {
+    labId: actor.labId,
+    actorId: actor.userId,
+    action: "invitation.revoked",
+    targetType: "invitation",
+    targetId: invitationId,
+  });
 }

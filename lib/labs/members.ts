@@ -2,7 +2,11 @@ import "server-only";
 import { insertAuditEvent } from "@/db/queries/audit";
 import { findLabById } from "@/db/queries/labs";
 import {
-  countActiveAdmins, findLabMember, listLabMembers, setMemberActive, updateMemberRole,
+  countActiveAdmins,
+  findLabMember,
+  listLabMembers,
+  setMemberActive,
+  updateMemberRole,
 } from "@/db/queries/users";
 import { listOpenInvitations } from "@/db/queries/invitations";
 import type { Role } from "@/db/schema/enums";
@@ -20,8 +24,20 @@ export interface MemberDto {
   active: boolean;
 }
 
-function toMemberDto(row: { id: string; email: string; name: string; role: string; active: boolean }): MemberDto {
-  return { id: row.id, email: row.email, name: row.name, role: row.role as Role, active: row.active };
+function toMemberDto(row: {
+  id: string;
+  email: string;
+  name: string;
+  role: string;
+  active: boolean;
+}): MemberDto {
+  return {
+    id: row.id,
+    email: row.email,
+    name: row.name,
+    role: row.role as Role,
+    active: row.active,
+  };
 }
 
 export async function listMembers(actor: Actor): Promise<MemberDto[]> {
@@ -44,29 +60,59 @@ export async function changeMemberRole(actor: Actor, raw: unknown): Promise<Memb
   return getDb().transaction(async (tx) => {
     const member = await findLabMember(tx, actor.labId, userId);
     if (!member) throw new AppError("not_found", "That person is not a member of your lab.");
-    if (member.role === "admin" && role !== "admin" && (await countActiveAdmins(tx, actor.labId)) <= 1) {
-      throw new AppError("conflict", "A lab needs at least one active admin. Make someone else admin first.");
+    if (
+      member.role === "admin" &&
+      role !== "admin" &&
+      (await countActiveAdmins(tx, actor.labId)) <= 1
+    ) {
+      throw new AppError(
+        "conflict",
+        "A lab needs at least one active admin. Make someone else admin first.",
+      );
     }
     const updated = await updateMemberRole(tx, actor.labId, userId, role);
     if (!updated) throw new AppError("not_found", "That person is not a member of your lab.");
-    await insertAuditEvent(tx, { labId: actor.labId, actorId: actor.userId, action: "member.role_changed", targetType: "user", targetId: userId, details: { from: member.role, to: role } });
+    await insertAuditEvent(tx, {
+      labId: actor.labId,
+      actorId: actor.userId,
+      action: "member.role_changed",
+      targetType: "user",
+      targetId: userId,
+      details: { from: member.role, to: role },
+    });
     return toMemberDto(updated);
   });
 }
 
-export async function setMemberActivation(actor: Actor, raw: unknown, active: boolean): Promise<MemberDto> {
+export async function setMemberActivation(
+  actor: Actor,
+  raw: unknown,
+  active: boolean,
+): Promise<MemberDto> {
   assertCan(actor, "lab.manage");
   const { userId } = parseInput(memberIdSchema, raw);
-  if (!active && userId === actor.userId) throw new AppError("conflict", "You cannot deactivate yourself.");
+  if (!active && userId === actor.userId)
+    throw new AppError("conflict", "You cannot deactivate yourself.");
   return getDb().transaction(async (tx) => {
     const member = await findLabMember(tx, actor.labId, userId);
     if (!member) throw new AppError("not_found", "That person is not a member of your lab.");
-    if (!active && member.role === "admin" && member.active && (await countActiveAdmins(tx, actor.labId)) <= 1) {
+    if (
+      !active &&
+      member.role === "admin" &&
+      member.active &&
+      (await countActiveAdmins(tx, actor.labId)) <= 1
+    ) {
       throw new AppError("conflict", "A lab needs at least one active admin.");
     }
     const updated = await setMemberActive(tx, actor.labId, userId, active);
     if (!updated) throw new AppError("not_found", "That person is not a member of your lab.");
-    await insertAuditEvent(tx, { labId: actor.labId, actorId: actor.userId, action: active ? "member.reactivated" : "member.deactivated", targetType: "user", targetId: userId });
+    await insertAuditEvent(tx, {
+      labId: actor.labId,
+      actorId: actor.userId,
+      action: active ? "member.reactivated" : "member.deactivated",
+      targetType: "user",
+      targetId: userId,
+    });
     return toMemberDto(updated);
   });
 }

@@ -1,5 +1,11 @@
 /** Mail texts, in Ionleaf's own words. Plain text first: it reads well in any client. */
-export function invitationMail(input: { labName: string; inviterName: string; role: string; link: string; expiresAt: Date }) {
+export function invitationMail(input: {
+  labName: string;
+  inviterName: string;
+  role: string;
+  link: string;
+  expiresAt: Date;
+}) {
   const expires = input.expiresAt.toISOString().slice(0, 16).replace("T", " ");
   const text = [
     `${input.inviterName} has invited you to join ${input.labName} on Ionleaf as a ${input.role}.`,

@@ -9,7 +9,12 @@ function getTransport(): Transporter {
     const env = getEnv();
     // Plain SMTP on loopback to the mail catcher in the demo and tests; a real relay is
     // configured by SMTP_HOST/SMTP_PORT alone.
-    transporter = nodemailer.createTransport({ host: env.SMTP_HOST, port: env.SMTP_PORT, secure: false, ignoreTLS: true });
+    transporter = nodemailer.createTransport({
+      host: env.SMTP_HOST,
+      port: env.SMTP_PORT,
+      secure: false,
+      ignoreTLS: true,
+    });
   }
   return transporter;
 }

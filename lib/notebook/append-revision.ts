@@ -26,17 +26,33 @@ export interface NewRevision {
  * it (one row per block), and moves the entry to that revision. The caller holds the
  * transaction and has already checked who may write and against which base revision.
  */
-export async function appendRevision(tx: Executor, r: NewRevision): Promise<{ contentHash: string; solutions: number }> {
+export async function appendRevision(
+  tx: Executor,
+  r: NewRevision,
+): Promise<{ contentHash: string; solutions: number }> {
   const contentHash = revisionHash(r.title, r.content);
   const revision = await insertRevision(tx, {
-    entryId: r.entryId, number: r.number, title: r.title, content: r.content as Record<string, unknown>,
-    contentText: documentPlainText(r.content), contentHash, authorId: r.authorId,
+    entryId: r.entryId,
+    number: r.number,
+    title: r.title,
+    content: r.content as Record<string, unknown>,
+    contentText: documentPlainText(r.content),
+    contentHash,
+    authorId: r.authorId,
   });
   const blocks = extractSolutionBlocks(r.content);
   for (const block of blocks) {
     const { components, ...record } = solutionRecordFor(block);
-    await insertSolutionWithComponents(tx, { labId: r.labId, entryId: r.entryId, revisionId: revision.id, ...record }, components);
+    await insertSolutionWithComponents(
+      tx,
+      { labId: r.labId, entryId: r.entryId, revisionId: revision.id, ...record },
+      components,
+    );
   }
-  await updateEntry(tx, r.labId, r.entryId, { currentRevisionNumber: r.number, title: r.title, updatedAt: new Date() });
+  await updateEntry(tx, r.labId, r.entryId, {
+    currentRevisionNumber: r.number,
+    title: r.title,
+    updatedAt: new Date(),
+  });
   return { contentHash, solutions: blocks.length };
 }

@@ -1,7 +1,12 @@
 import "server-only";
 import { insertAuditEvent } from "@/db/queries/audit";
 import {
-  countEntriesByStatus, findEntryHeader, findLabEntry, insertEntry, listEntries as queryEntries, updateEntry,
+  countEntriesByStatus,
+  findEntryHeader,
+  findLabEntry,
+  insertEntry,
+  listEntries as queryEntries,
+  updateEntry,
 } from "@/db/queries/entries";
 import { findLabProject } from "@/db/queries/projects";
 import type { EntryStatus } from "@/db/schema/enums";
@@ -33,12 +38,28 @@ export async function listEntries(actor: Actor, rawQuery: unknown): Promise<Entr
   assertCan(actor, "entry.read");
   const q = parseInput(entryListQuerySchema, rawQuery);
   const rows = await queryEntries(getDb(), {
-    labId: actor.labId, projectId: q.projectId, status: q.status, authorId: q.author === "me" ? actor.userId : undefined,
-    search: q.q || undefined, archived: q.archived, sort: q.sort, order: q.order, limit: q.limit,
+    labId: actor.labId,
+    projectId: q.projectId,
+    status: q.status,
+    authorId: q.author === "me" ? actor.userId : undefined,
+    search: q.q || undefined,
+    archived: q.archived,
+    sort: q.sort,
+    order: q.order,
+    limit: q.limit,
   });
   return rows.map((r) => ({
-    id: r.id, title: r.title, status: r.status as EntryStatus, revision: r.revision, projectId: r.projectId, projectName: r.projectName,
-    authorId: r.authorId, authorName: r.authorName, createdAt: r.createdAt.toISOString(), updatedAt: r.updatedAt.toISOString(), archived: r.archivedAt !== null,
+    id: r.id,
+    title: r.title,
+    status: r.status as EntryStatus,
+    revision: r.revision,
+    projectId: r.projectId,
+    projectName: r.projectName,
+    authorId: r.authorId,
+    authorName: r.authorName,
+    createdAt: r.createdAt.toISOString(),
+    updatedAt: r.updatedAt.toISOString(),
+    archived: r.archivedAt !== null,
   }));
 }
 
@@ -52,28 +73,65 @@ export async function createEntry(actor: Actor, raw: unknown): Promise<{ id: str
   assertCan(actor, "entry.write");
   const input = parseInput(createEntrySchema, raw);
   const template = input.template ? findTemplate(input.template) : undefined;
-  if (input.template && !template) throw new AppError("invalid_input", "Unknown template.", { fieldErrors: { template: ["Choose one of the listed templates."] } });
+  if (input.template && !template)
+    throw new AppError("invalid_input", "Unknown template.", {
+      fieldErrors: { template: ["Choose one of the listed templates."] },
+    });
   return getDb().transaction(async (tx) => {
     const project = await findLabProject(tx, actor.labId, input.projectId);
-    if (!project || project.archivedAt) throw new AppError("invalid_input", "Choose a project of your lab.", { fieldErrors: { projectId: ["Choose a project of your lab."] } });
-    const entry = await insertEntry(tx, { labId: actor.labId, projectId: project.id, title: input.title, authorId: actor.userId, template: template?.id ?? null });
+    if (!project || project.archivedAt)
+      throw new AppError("invalid_input", "Choose a project of your lab.", {
+        fieldErrors: { projectId: ["Choose a project of your lab."] },
+      });
+    const entry = await insertEntry(tx, {
+      labId: actor.labId,
+      projectId: project.id,
+      title: input.title,
+      authorId: actor.userId,
+      template: template?.id ?? null,
+    });
     if (template) {
-      await appendRevision(tx, { labId: actor.labId, entryId: entry.id, number: 1, title: input.title, content: template.build(), authorId: actor.userId });
+      await appendRevision(tx, {
+        labId: actor.labId,
+        entryId: entry.id,
+        number: 1,
+        title: input.title,
+        content: template.build(),
+        authorId: actor.userId,
+      });
     }
-    await insertAuditEvent(tx, { labId: actor.labId, actorId: actor.userId, action: "entry.created", targetType: "entry", targetId: entry.id, details: { template: template?.id ?? null } });
+    await insertAuditEvent(tx, {
+      labId: actor.labId,
+      actorId: actor.userId,
+      action: "entry.created",
+      targetType: "entry",
+      targetId: entry.id,
+      details: { template: template?.id ?? null },
+    });
     return { id: entry.id };
   });
 }
 
 /** Archive or restore: the entry and every revision stay; it leaves the default lists. */
-export async function setEntryArchived(actor: Actor, entryId: string, archived: boolean): Promise<void> {
+export async function setEntryArchived(
+  actor: Actor,
+  entryId: string,
+  archived: boolean,
+): Promise<void> {
   assertCan(actor, "entry.write");
   await getDb().transaction(async (tx) => {
     const entry = await findLabEntry(tx, actor.labId, parseRecordId(entryId, "Entry"), true);
     if (!entry) throw new AppError("not_found", "Entry not found.");
-    if (entry.authorId !== actor.userId && actor.role !== "admin") throw new AppError("forbidden", "Only the author or a lab admin can archive an entry.");
+    if (entry.authorId !== actor.userId && actor.role !== "admin")
+      throw new AppError("forbidden", "Only the author or a lab admin can archive an entry.");
     await updateEntry(tx, actor.labId, entryId, { archivedAt: archived ? new Date() : null });
-    await insertAuditEvent(tx, { labId: actor.labId, actorId: actor.userId, action: archived ? "entry.archived" : "entry.restored", targetType: "entry", targetId: entryId });
+    await insertAuditEvent(tx, {
+      labId: actor.labId,
+      actorId: actor.userId,
+      action: archived ? "entry.archived" : "entry.restored",
+      targetType: "entry",
+      targetId: entryId,
+    });
   });
 }
 
@@ -83,11 +141,27 @@ export async function submitEntry(actor: Actor, entryId: string): Promise<void> 
   await getDb().transaction(async (tx) => {
     const entry = await findLabEntry(tx, actor.labId, parseRecordId(entryId, "Entry"), true);
     if (!entry) throw new AppError("not_found", "Entry not found.");
-    if (entry.authorId !== actor.userId) throw new AppError("forbidden", "Only the author submits an entry.");
-    if (entry.status !== "draft" && entry.status !== "returned") throw new AppError("conflict", `This entry is ${entry.status}; only a draft can be submitted.`);
-    if (entry.currentRevisionNumber === 0) throw new AppError("conflict", "Write something before submitting: the entry has no saved revision.");
+    if (entry.authorId !== actor.userId)
+      throw new AppError("forbidden", "Only the author submits an entry.");
+    if (entry.status !== "draft" && entry.status !== "returned")
+      throw new AppError(
+        "conflict",
+        `This entry is ${entry.status}; only a draft can be submitted.`,
+      );
+    if (entry.currentRevisionNumber === 0)
+      throw new AppError(
+        "conflict",
+        "Write something before submitting: the entry has no saved revision.",
+      );
     await updateEntry(tx, actor.labId, entryId, { status: "submitted", updatedAt: new Date() });
-    await insertAuditEvent(tx, { labId: actor.labId, actorId: actor.userId, action: "entry.submitted", targetType: "entry", targetId: entryId, details: { revision: entry.currentRevisionNumber } });
+    await insertAuditEvent(tx, {
+      labId: actor.labId,
+      actorId: actor.userId,
+      action: "entry.submitted",
+      targetType: "entry",
+      targetId: entryId,
+      details: { revision: entry.currentRevisionNumber },
+    });
   });
 }
 

@@ -21,7 +21,8 @@ export function documentPlainText(doc: unknown, limit = 200_000): string {
       parts.push(piece);
       length += piece.length + 1;
     }
-    if (Array.isArray(node.content)) for (let i = node.content.length - 1; i >= 0; i -= 1) stack.push(node.content[i]);
+    if (Array.isArray(node.content))
+      for (let i = node.content.length - 1; i >= 0; i -= 1) stack.push(node.content[i]);
   }
   return parts.join(" ").slice(0, limit);
 }
@@ -29,9 +30,12 @@ export function documentPlainText(doc: unknown, limit = 200_000): string {
 function pieceOf(node: JsonNode): string {
   if (node.type === "text" && typeof node.text === "string") return node.text;
   const attrs = node.attrs ?? {};
-  if ((node.type === "inlineMath" || node.type === "blockMath") && typeof attrs.latex === "string") return attrs.latex;
+  if ((node.type === "inlineMath" || node.type === "blockMath") && typeof attrs.latex === "string")
+    return attrs.latex;
   if (node.type === "solutionBlock") {
-    const formulas = Array.isArray(attrs.components) ? attrs.components.map((c) => (c as { formula?: string }).formula ?? "") : [];
+    const formulas = Array.isArray(attrs.components)
+      ? attrs.components.map((c) => (c as { formula?: string }).formula ?? "")
+      : [];
     return [attrs.name, ...formulas].filter((s) => typeof s === "string" && s).join(" ");
   }
   if (node.type === "cellBlock") return typeof attrs.name === "string" ? attrs.name : "";

@@ -25,7 +25,8 @@ async function entryOf(actor: Actor, entryId: string) {
 }
 
 async function findRevisionOrThrow(entryId: string, number: number) {
-  if (!Number.isInteger(number) || number < 1) throw new AppError("not_found", "Revision not found.");
+  if (!Number.isInteger(number) || number < 1)
+    throw new AppError("not_found", "Revision not found.");
   const found = await findRevision(getDb(), entryId, number);
   if (!found) throw new AppError("not_found", "Revision not found.");
   return found;
@@ -35,19 +36,45 @@ async function revisionOf(entryId: string, number: number): Promise<RevisionDto>
   return toRevisionDto(await findRevisionOrThrow(entryId, number));
 }
 
-function toRevisionDto({ revision: r, authorName }: NonNullable<Awaited<ReturnType<typeof findRevision>>>): RevisionDto {
-  return { number: r.number, title: r.title, content: r.content, contentHash: r.contentHash, authorName, createdAt: r.createdAt.toISOString() };
+function toRevisionDto({
+  revision: r,
+  authorName,
+}: NonNullable<Awaited<ReturnType<typeof findRevision>>>): RevisionDto {
+  return {
+    number: r.number,
+    title: r.title,
+    content: r.content,
+    contentHash: r.contentHash,
+    authorName,
+    createdAt: r.createdAt.toISOString(),
+  };
 }
 
 /** The newest revision, or an empty document at revision 0 for a new entry. */
-function currentOf(entry: { id: string; title: string; currentRevisionNumber: number; createdAt: Date }): Promise<RevisionDto> | RevisionDto {
+function currentOf(entry: {
+  id: string;
+  title: string;
+  currentRevisionNumber: number;
+  createdAt: Date;
+}): Promise<RevisionDto> | RevisionDto {
   if (entry.currentRevisionNumber === 0) {
-    return { number: 0, title: entry.title, content: EMPTY_DOCUMENT, contentHash: "", authorName: "", createdAt: entry.createdAt.toISOString() };
+    return {
+      number: 0,
+      title: entry.title,
+      content: EMPTY_DOCUMENT,
+      contentHash: "",
+      authorName: "",
+      createdAt: entry.createdAt.toISOString(),
+    };
   }
   return revisionOf(entry.id, entry.currentRevisionNumber);
 }
 
-export async function getRevision(actor: Actor, entryId: string, number: number): Promise<RevisionDto> {
+export async function getRevision(
+  actor: Actor,
+  entryId: string,
+  number: number,
+): Promise<RevisionDto> {
   const entry = await entryOf(actor, entryId);
   return revisionOf(entry.id, number);
 }
@@ -66,7 +93,11 @@ export async function getRevisionHistory(actor: Actor, entryId: string) {
   const entry = await entryOf(actor, entryId);
   const rows = await listRevisions(getDb(), entry.id); // newest first
   return rows.map((r, i) => ({
-    number: r.number, title: r.title, contentHash: r.contentHash, authorName: r.authorName, createdAt: r.createdAt.toISOString(),
+    number: r.number,
+    title: r.title,
+    contentHash: r.contentHash,
+    authorName: r.authorName,
+    createdAt: r.createdAt.toISOString(),
     changes: summariseChange(rows[i + 1] ?? null, r),
   }));
 }
@@ -76,9 +107,15 @@ export async function getRevisionWithSolutions(actor: Actor, entryId: string, nu
   const entry = await entryOf(actor, entryId);
   const found = await findRevisionOrThrow(entry.id, number);
   const rows = await listRevisionSolutions(getDb(), actor.labId, found.revision.id);
-  const components = await listComponentsOf(getDb(), rows.map((r) => r.id));
+  const components = await listComponentsOf(
+    getDb(),
+    rows.map((r) => r.id),
+  );
   return {
     revision: toRevisionDto(found),
-    solutions: rows.map((r) => ({ ...r, components: components.filter((c) => c.solutionId === r.id) })),
+    solutions: rows.map((r) => ({
+      ...r,
+      components: components.filter((c) => c.solutionId === r.id),
+    })),
   };
 }

@@ -25,14 +25,22 @@ const EDITABLE = new Set(["draft", "returned"]);
  * content writes a new immutable revision and the server-computed solution rows, in one
  * transaction; a save that changes nothing writes nothing.
  */
-export async function saveEntryContent(actor: Actor, entryId: string, raw: unknown): Promise<SaveResult> {
+export async function saveEntryContent(
+  actor: Actor,
+  entryId: string,
+  raw: unknown,
+): Promise<SaveResult> {
   assertCan(actor, "entry.write");
   const input = parseInput(saveEntrySchema, raw);
   const parsedDoc = entryDocumentSchema.safeParse(input.content);
   if (!parsedDoc.success) {
-    throw new AppError("invalid_input", "The document was refused; the previous revision is unchanged.", {
-      details: { problems: describeDocumentErrors(parsedDoc.error).slice(0, 20) },
-    });
+    throw new AppError(
+      "invalid_input",
+      "The document was refused; the previous revision is unchanged.",
+      {
+        details: { problems: describeDocumentErrors(parsedDoc.error).slice(0, 20) },
+      },
+    );
   }
   const content = parsedDoc.data;
   const contentHash = revisionHash(input.title, content);
@@ -40,8 +48,12 @@ export async function saveEntryContent(actor: Actor, entryId: string, raw: unkno
   return getDb().transaction(async (tx) => {
     const entry = await findLabEntry(tx, actor.labId, parseRecordId(entryId, "Entry"), true);
     if (!entry) throw new AppError("not_found", "Entry not found.");
-    if (entry.authorId !== actor.userId) throw new AppError("forbidden", "Only the author edits this entry.");
-    if (!EDITABLE.has(entry.status)) throw new AppError("conflict", `This entry is ${entry.status}; it cannot be edited now.`, { details: { status: entry.status } });
+    if (entry.authorId !== actor.userId)
+      throw new AppError("forbidden", "Only the author edits this entry.");
+    if (!EDITABLE.has(entry.status))
+      throw new AppError("conflict", `This entry is ${entry.status}; it cannot be edited now.`, {
+        details: { status: entry.status },
+      });
     if (entry.currentRevisionNumber !== input.baseRevision) {
       throw new AppError("conflict", "This entry was saved elsewhere since you opened it.", {
         details: { currentRevision: entry.currentRevisionNumber, baseRevision: input.baseRevision },
@@ -54,8 +66,22 @@ export async function saveEntryContent(actor: Actor, entryId: string, raw: unkno
       }
     }
     const number = entry.currentRevisionNumber + 1;
-    const { solutions } = await appendRevision(tx, { labId: actor.labId, entryId: entry.id, number, title: input.title, content, authorId: actor.userId });
-    if (number === 1) await insertAuditEvent(tx, { labId: actor.labId, actorId: actor.userId, action: "entry.first_saved", targetType: "entry", targetId: entry.id });
+    const { solutions } = await appendRevision(tx, {
+      labId: actor.labId,
+      entryId: entry.id,
+      number,
+      title: input.title,
+      content,
+      authorId: actor.userId,
+    });
+    if (number === 1)
+      await insertAuditEvent(tx, {
+        labId: actor.labId,
+        actorId: actor.userId,
+        action: "entry.first_saved",
+        targetType: "entry",
+        targetId: entry.id,
+      });
     return { revision: number, contentHash, created: true, solutions };
   });
 }

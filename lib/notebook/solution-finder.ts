@@ -9,8 +9,17 @@ export async function searchSolutions(actor: Actor, rawQuery: unknown) {
   assertCan(actor, "solution.search");
   const q = parseInput(solutionFinderQuerySchema, rawQuery);
   const rows = await findSolutions(getDb(), {
-    labId: actor.labId, ionicStrengthMin: q.iMin, ionicStrengthMax: q.iMax, species: q.species, temperatureMin: q.tMin, temperatureMax: q.tMax,
-    solvent: q.solvent, authorId: q.author === "me" ? actor.userId : undefined, createdFrom: q.from, createdTo: q.to, limit: 200,
+    labId: actor.labId,
+    ionicStrengthMin: q.iMin,
+    ionicStrengthMax: q.iMax,
+    species: q.species,
+    temperatureMin: q.tMin,
+    temperatureMax: q.tMax,
+    solvent: q.solvent,
+    authorId: q.author === "me" ? actor.userId : undefined,
+    createdFrom: q.from,
+    createdTo: q.to,
+    limit: 200,
   });
   return rows.map((r) => ({ ...r, createdAt: r.createdAt.toISOString() }));
 }

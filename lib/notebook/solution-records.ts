@@ -31,7 +31,8 @@ export interface SolutionRecord {
   }[];
 }
 
-const finiteOrNull = (x: unknown): number | null => (typeof x === "number" && Number.isFinite(x) ? x : null);
+const finiteOrNull = (x: unknown): number | null =>
+  typeof x === "number" && Number.isFinite(x) ? x : null;
 
 export function solutionRecordFor(block: SolutionBlockInput): SolutionRecord {
   const evaluation = evaluateSolutionBlock(block);

@@ -24,13 +24,26 @@ export async function createProject(actor: Actor, raw: unknown): Promise<Project
   const input = parseInput(createProjectSchema, raw);
   try {
     return await getDb().transaction(async (tx) => {
-      const row = await insertProject(tx, { labId: actor.labId, name: input.name, description: input.description, createdById: actor.userId });
-      await insertAuditEvent(tx, { labId: actor.labId, actorId: actor.userId, action: "project.created", targetType: "project", targetId: row.id });
+      const row = await insertProject(tx, {
+        labId: actor.labId,
+        name: input.name,
+        description: input.description,
+        createdById: actor.userId,
+      });
+      await insertAuditEvent(tx, {
+        labId: actor.labId,
+        actorId: actor.userId,
+        action: "project.created",
+        targetType: "project",
+        targetId: row.id,
+      });
       return { id: row.id, name: row.name, description: row.description };
     });
   } catch (error) {
     if ((error as { code?: string }).code === "23505") {
-      throw new AppError("conflict", "Your lab already has a project with that name.", { fieldErrors: { name: ["Already used in this lab."] } });
+      throw new AppError("conflict", "Your lab already has a project with that name.", {
+        fieldErrors: { name: ["Already used in this lab."] },
+      });
     }
     throw error;
   }

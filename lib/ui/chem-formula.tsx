@@ -41,5 +41,7 @@ export function renderFormula(formula: string): ReactNode[] {
   }
   parts.push(body.slice(last));
   if (charge) parts.push(<sup key="charge">{charge}</sup>);
-  return parts.map((part, i) => (typeof part === "string" ? <Fragment key={`t${i}`}>{part}</Fragment> : part));
+  return parts.map((part, i) =>
+    typeof part === "string" ? <Fragment key={`t${i}`}>{part}</Fragment> : part,
+  );
 }

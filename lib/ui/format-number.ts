@@ -4,7 +4,17 @@
  * ×10ⁿ form instead of a run of zeros. Pure, shared by the editor and pages.
  */
 const SUPERSCRIPT_DIGITS: Record<string, string> = {
-  "0": "⁰", "1": "¹", "2": "²", "3": "³", "4": "⁴", "5": "⁵", "6": "⁶", "7": "⁷", "8": "⁸", "9": "⁹", "-": "⁻",
+  "0": "⁰",
+  "1": "¹",
+  "2": "²",
+  "3": "³",
+  "4": "⁴",
+  "5": "⁵",
+  "6": "⁶",
+  "7": "⁷",
+  "8": "⁸",
+  "9": "⁹",
+  "-": "⁻",
 };
 
 export function formatSignificant(value: number | null | undefined, digits = 4): string {
@@ -32,14 +42,21 @@ export function formatPotentialV(value: number | null | undefined): string {
 
 /** Parses what a person types into a number field: "1,5", "1e-3", "−0.2". Null when empty or not a number. */
 export function parseTypedNumber(text: string): number | null {
-  const cleaned = text.trim().replace(/\s+/g, "").replace(/[−–]/g, "-").replace(",", ".").replace(/[×x]10\^?/i, "e");
+  const cleaned = text
+    .trim()
+    .replace(/\s+/g, "")
+    .replace(/[−–]/g, "-")
+    .replace(",", ".")
+    .replace(/[×x]10\^?/i, "e");
   if (cleaned === "" || cleaned === "-" || cleaned === ".") return null;
   if (!/^[-+]?(\d+\.?\d*|\.\d+)(e[-+]?\d+)?$/i.test(cleaned)) return null;
   const value = Number(cleaned);
   return Number.isFinite(value) ? value : null;
 }
 
-const FROM_SUPERSCRIPT: Record<string, string> = Object.fromEntries(Object.entries(SUPERSCRIPT_DIGITS).map(([digit, sup]) => [sup, digit]));
+const FROM_SUPERSCRIPT: Record<string, string> = Object.fromEntries(
+  Object.entries(SUPERSCRIPT_DIGITS).map(([digit, sup]) => [sup, digit]),
+);
 
 /** The inverse of formatSignificant: "0.1000", "−2.217 × 10⁻⁴" → a number; null when unreadable. */
 export function parseShownNumber(text: string): number | null {

@@ -12,7 +12,10 @@ export const emailSchema = z
 
 export const signInSchema = z.object({
   email: emailSchema,
-  password: z.string({ error: "Enter your password." }).min(1, "Enter your password.").max(200, "That password is too long."),
+  password: z
+    .string({ error: "Enter your password." })
+    .min(1, "Enter your password.")
+    .max(200, "That password is too long."),
 });
 export type SignInInput = z.infer<typeof signInSchema>;
 
@@ -22,7 +25,9 @@ export const newPasswordSchema = z
   .max(200, "Use at most 200 characters.")
   .refine((p) => /[A-Za-z]/.test(p) && /[^A-Za-z]/.test(p), "Mix letters with digits or symbols.");
 
-export const roleSchema = z.enum(ROLES, { error: "Choose a role: researcher, supervisor or admin." });
+export const roleSchema = z.enum(ROLES, {
+  error: "Choose a role: researcher, supervisor or admin.",
+});
 
 export const inviteMemberSchema = z.object({
   email: emailSchema,
@@ -33,11 +38,18 @@ export type InviteMemberInput = z.infer<typeof inviteMemberSchema>;
 export const acceptInvitationSchema = z
   .object({
     token: z.string().min(20, "This invitation link is incomplete.").max(200),
-    name: z.string().trim().min(2, "Enter your name as colleagues know it.").max(120, "Use at most 120 characters."),
+    name: z
+      .string()
+      .trim()
+      .min(2, "Enter your name as colleagues know it.")
+      .max(120, "Use at most 120 characters."),
     password: newPasswordSchema,
     confirmPassword: z.string(),
   })
-  .refine((v) => v.password === v.confirmPassword, { path: ["confirmPassword"], message: "The two passwords differ." });
+  .refine((v) => v.password === v.confirmPassword, {
+    path: ["confirmPassword"],
+    message: "The two passwords differ.",
+  });
 export type AcceptInvitationInput = z.infer<typeof acceptInvitationSchema>;
 
 export const changeRoleSchema = z.object({

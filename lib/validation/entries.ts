@@ -1,7 +1,11 @@
 import { z } from "zod";
 import { ENTRY_STATUSES } from "@/db/schema/enums";
 
-export const entryTitleSchema = z.string().trim().min(1, "Give the entry a title.").max(200, "Use at most 200 characters.");
+export const entryTitleSchema = z
+  .string()
+  .trim()
+  .min(1, "Give the entry a title.")
+  .max(200, "Use at most 200 characters.");
 
 export const createEntrySchema = z.object({
   projectId: z.string().uuid("Choose a project."),
@@ -23,7 +27,10 @@ export const entryListQuerySchema = z.object({
   status: z.enum(ENTRY_STATUSES).optional(),
   author: z.enum(["me", "anyone"]).default("anyone"),
   q: z.string().trim().max(100).optional(),
-  archived: z.enum(["true", "false"]).default("false").transform((v) => v === "true"),
+  archived: z
+    .enum(["true", "false"])
+    .default("false")
+    .transform((v) => v === "true"),
   sort: z.enum(["updatedAt", "createdAt", "title", "status"]).default("updatedAt"),
   order: z.enum(["asc", "desc"]).default("desc"),
   limit: z.coerce.number().int().min(1).max(200).default(100),

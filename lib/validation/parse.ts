@@ -5,7 +5,9 @@ import { AppError, fieldErrorsFromZod } from "@/lib/errors";
 export function parseInput<S extends z.ZodType>(schema: S, input: unknown): z.infer<S> {
   const result = schema.safeParse(input);
   if (!result.success) {
-    throw new AppError("invalid_input", "Some fields need attention.", { fieldErrors: fieldErrorsFromZod(result.error.issues) });
+    throw new AppError("invalid_input", "Some fields need attention.", {
+      fieldErrors: fieldErrorsFromZod(result.error.issues),
+    });
   }
   return result.data;
 }

@@ -38,13 +38,36 @@ export const solutionFinderQuerySchema = z
   .object({
     iMin: optionalNumber("Lowest ionic strength", 0, 50),
     iMax: optionalNumber("Highest ionic strength", 0, 50),
-    species: z.string().trim().max(200).optional().transform((v) => (v ? v.split(/[,\s]+/).filter(Boolean).slice(0, 8) : [])),
+    species: z
+      .string()
+      .trim()
+      .max(200)
+      .optional()
+      .transform((v) =>
+        v
+          ? v
+              .split(/[,\s]+/)
+              .filter(Boolean)
+              .slice(0, 8)
+          : [],
+      ),
     tMin: optionalNumber("Lowest temperature", -50, 300),
     tMax: optionalNumber("Highest temperature", -50, 300),
-    solvent: z.string().trim().max(40).optional().transform((v) => v || undefined),
+    solvent: z
+      .string()
+      .trim()
+      .max(40)
+      .optional()
+      .transform((v) => v || undefined),
     author: z.enum(["anyone", "me"]).default("anyone"),
     from: optionalDate,
     to: optionalDate,
   })
-  .refine((q) => q.iMin === undefined || q.iMax === undefined || q.iMin <= q.iMax, { path: ["iMax"], message: "The highest ionic strength is below the lowest." })
-  .refine((q) => q.tMin === undefined || q.tMax === undefined || q.tMin <= q.tMax, { path: ["tMax"], message: "The highest temperature is below the lowest." });
+  .refine((q) => q.iMin === undefined || q.iMax === undefined || q.iMin <= q.iMax, {
+    path: ["iMax"],
+    message: "The highest ionic strength is below the lowest.",
+  })
+  .refine((q) => q.tMin === undefined || q.tMax === undefined || q.tMin <= q.tMax, {
+    path: ["tMax"],
+    message: "The highest temperature is below the lowest.",
+  });

@@ -1,13 +1,25 @@
 // @vitest-environment node
 /** The choice rules follow each model's documented range (see the model files and their sources). */
 import { describe, expect, it } from "vitest";
-import { ACTIVITY_MODELS, ChemInputError, MODEL_REGISTRY, chooseModel, computeSolution, type ModelIon } from "@/lib/chem";
+import {
+  ACTIVITY_MODELS,
+  ChemInputError,
+  MODEL_REGISTRY,
+  chooseModel,
+  computeSolution,
+  type ModelIon,
+} from "@/lib/chem";
 import { DH_FAMILY_CANDIDATES } from "@/lib/chem/models/auto";
-
 
 describe("model registry", () => {
   it("registers the Debye–Hückel family under the contract's ids", () => {
-    for (const id of ["dh-limiting", "dh-extended", "guntelberg", "davies", "truesdell-jones"] as const) {
+    for (const id of [
+      "dh-limiting",
+      "dh-extended",
+      "guntelberg",
+      "davies",
+      "truesdell-jones",
+    ] as const) {
       expect(MODEL_REGISTRY[id]?.id).toBe(id);
       expect(MODEL_REGISTRY[id]?.formulaTex).toMatch(/\\gamma_i/);
       expect(MODEL_REGISTRY[id]?.validityNote).toBeTruthy();
@@ -16,12 +28,17 @@ describe("model registry", () => {
 
   it("lists models for the UI with labels and formulaTex, auto first", () => {
     expect(ACTIVITY_MODELS[0].id).toBe("auto");
-    expect(ACTIVITY_MODELS.map((m) => m.id)).toEqual(expect.arrayContaining(["dh-limiting", "davies", "truesdell-jones"]));
+    expect(ACTIVITY_MODELS.map((m) => m.id)).toEqual(
+      expect.arrayContaining(["dh-limiting", "davies", "truesdell-jones"]),
+    );
   });
 
   it("an unknown model id is a ChemInputError on 'model' that lists the available ones", () => {
     try {
-      computeSolution({ model: "magic" as "auto", components: [{ formula: "NaCl", amount: 1, unit: "mol/kg" }] });
+      computeSolution({
+        model: "magic" as "auto",
+        components: [{ formula: "NaCl", amount: 1, unit: "mol/kg" }],
+      });
       expect.unreachable();
     } catch (error) {
       expect(error).toBeInstanceOf(ChemInputError);
@@ -33,7 +50,11 @@ describe("model registry", () => {
 
 const dh = (ions: ModelIon[], ionicStrengthMolal: number, solvent = "water") =>
   chooseModel({ ions, ionicStrengthMolal, temperatureC: 25, solvent }, DH_FAMILY_CANDIDATES);
-const ion = (formula: string, charge: number, molality: number): ModelIon => ({ formula, charge, molality });
+const ion = (formula: string, charge: number, molality: number): ModelIon => ({
+  formula,
+  charge,
+  molality,
+});
 
 describe('model "auto" among the Debye–Hückel family: the most accurate that covers, and why', () => {
   it("Truesdell–Jones when every ion has a fitted b (NaCl to 2 mol/kg)", () => {
@@ -73,8 +94,15 @@ describe('model "auto" among the Debye–Hückel family: the most accurate that 
 
 describe('computeSolution with model "auto" (whatever candidates are registered)', () => {
   it("reports requested, used and a reason, and uses a registered model", () => {
-    for (const [formula, amount] of [["NaCl", 1.5], ["LiPF6", 0.2], ["Cu(NO3)2", 0.01]] as const) {
-      const r = computeSolution({ model: "auto", components: [{ formula, amount, unit: "mol/kg" }] });
+    for (const [formula, amount] of [
+      ["NaCl", 1.5],
+      ["LiPF6", 0.2],
+      ["Cu(NO3)2", 0.01],
+    ] as const) {
+      const r = computeSolution({
+        model: "auto",
+        components: [{ formula, amount, unit: "mol/kg" }],
+      });
       expect(r.model.requested).toBe("auto");
       expect(MODEL_REGISTRY[r.model.used]).toBeDefined();
       expect(r.model.reason.length).toBeGreaterThan(10);
@@ -82,7 +110,11 @@ describe('computeSolution with model "auto" (whatever candidates are registered)
   });
 
   it("in a non-aqueous solvent never picks a water-only model when a dilute one fits", () => {
-    const r = computeSolution({ model: "auto", solvent: "acetonitrile", components: [{ formula: "TBAPF6", amount: 0.05, unit: "mM" }] });
+    const r = computeSolution({
+      model: "auto",
+      solvent: "acetonitrile",
+      components: [{ formula: "TBAPF6", amount: 0.05, unit: "mM" }],
+    });
     expect(r.model.used).toBe("dh-limiting");
   });
 });

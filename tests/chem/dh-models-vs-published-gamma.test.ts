@@ -14,27 +14,65 @@ import { limitingLawSqrtIMax } from "@/lib/chem/models/dh-limiting";
 import { readFixture, shortSource } from "./fixtures/read-fixture";
 
 const rows = readFixture("gamma-binary.csv").map((r) => ({
-  salt: r.salt, molality: Number(r.molality_mol_per_kg), temperatureC: Number(r.temperature_C),
-  gamma: Number(r.gamma_pm), source: shortSource(r), confidence: r.confidence,
+  salt: r.salt,
+  molality: Number(r.molality_mol_per_kg),
+  temperatureC: Number(r.temperature_C),
+  gamma: Number(r.gamma_pm),
+  source: shortSource(r),
+  confidence: r.confidence,
 }));
 
-interface Deviation { salt: string; m: number; t: number; I: number; published: number; model: number; deviationPct: number; inRange: boolean; source: string }
+interface Deviation {
+  salt: string;
+  m: number;
+  t: number;
+  I: number;
+  published: number;
+  model: number;
+  deviationPct: number;
+  inRange: boolean;
+  source: string;
+}
 
 function deviations(model: ActivityModelId, options = {}): Deviation[] {
   return rows.map((row) => {
-    const result = computeSolution({ model, temperatureC: row.temperatureC, components: [{ formula: row.salt, amount: row.molality, unit: "mol/kg" }], densityGPerMl: 1, modelOptions: options });
+    const result = computeSolution({
+      model,
+      temperatureC: row.temperatureC,
+      components: [{ formula: row.salt, amount: row.molality, unit: "mol/kg" }],
+      densityGPerMl: 1,
+      modelOptions: options,
+    });
     const gamma = result.salts[0].meanGamma;
     return {
-      salt: row.salt, m: row.molality, t: row.temperatureC, I: result.ionicStrength.molal, published: row.gamma,
-      model: Number(gamma.toFixed(4)), deviationPct: Number((100 * (gamma / row.gamma - 1)).toFixed(2)),
-      inRange: result.validity.ok, source: row.source,
+      salt: row.salt,
+      m: row.molality,
+      t: row.temperatureC,
+      I: result.ionicStrength.molal,
+      published: row.gamma,
+      model: Number(gamma.toFixed(4)),
+      deviationPct: Number((100 * (gamma / row.gamma - 1)).toFixed(2)),
+      inRange: result.validity.ok,
+      source: row.source,
     };
   });
 }
 
 function show(model: string, table: Deviation[]) {
   console.log(`\n${model}: deviation from published γ± (in range only)`);
-  console.table(table.filter((d) => d.inRange).map(({ salt, m, t, published, model: g, deviationPct, source }) => ({ salt, m, t, published, model: g, deviationPct, source })));
+  console.table(
+    table
+      .filter((d) => d.inRange)
+      .map(({ salt, m, t, published, model: g, deviationPct, source }) => ({
+        salt,
+        m,
+        t,
+        published,
+        model: g,
+        deviationPct,
+        source,
+      })),
+  );
 }
 
 const worst = (table: Deviation[]) => Math.max(...table.map((d) => Math.abs(d.deviationPct)));
@@ -99,7 +137,9 @@ describe("Davies (range I ≤ 0.5 mol/kg)", () => {
   });
   it("coefficient 0.2 gives lower γ± than 0.3 above I ≈ 0.05", () => {
     const with02 = deviations("davies", { daviesCoefficient: 0.2 });
-    const i = rows.findIndex((r) => r.salt === "NaCl" && r.molality === 0.5 && r.temperatureC === 25);
+    const i = rows.findIndex(
+      (r) => r.salt === "NaCl" && r.molality === 0.5 && r.temperatureC === 25,
+    );
     expect(with02[i].model).toBeLessThan(table[i].model);
   });
 });
@@ -107,7 +147,9 @@ describe("Davies (range I ≤ 0.5 mol/kg)", () => {
 describe("Truesdell–Jones with b-dot fallback (range I ≤ 2 with fitted b, ≤ 0.5 otherwise)", () => {
   const table = deviations("truesdell-jones");
   it("within 10 % up to I = 2 for NaCl, KCl, CaCl2, MgCl2 (fitted WATEQ4F b), 0–40 °C", () => {
-    const fitted = inRangeRows("truesdell-jones", table, 60).filter((d) => ["NaCl", "KCl", "CaCl2", "MgCl2"].includes(d.salt));
+    const fitted = inRangeRows("truesdell-jones", table, 60).filter((d) =>
+      ["NaCl", "KCl", "CaCl2", "MgCl2"].includes(d.salt),
+    );
     expect(fitted.some((d) => d.I >= 1.5)).toBe(true);
     expect(worst(fitted)).toBeLessThan(10);
     // at 25 °C the fitted salts stay within 2 % up to 2 mol/kg
@@ -122,7 +164,10 @@ describe("Truesdell–Jones with b-dot fallback (range I ≤ 2 with fitted b, �
 
 describe("charge types each model declares (common practice)", () => {
   const run = (model: ActivityModelId, formula: string) =>
-    computeSolution({ model, components: [{ formula, amount: 0.001, unit: "mol/kg" }] }).validity.messages.join(" ");
+    computeSolution({
+      model,
+      components: [{ formula, amount: 0.001, unit: "mol/kg" }],
+    }).validity.messages.join(" ");
   it("Davies and Güntelberg say so for a 3:1 salt; extended Debye–Hückel (Kielland, |z| ≤ 4) does not", () => {
     expect(run("davies", "LaCl3")).toMatch(/charge up to ±2; La\^3\+ is beyond it/);
     expect(run("guntelberg", "K3Fe(CN)6")).toMatch(/charge up to ±2/);

@@ -76,7 +76,9 @@ describe("molarMass: IUPAC 2021 abridged standard atomic weights", () => {
 
   it("has all 118 elements", () => {
     expect(ELEMENTS.size).toBe(118);
-    expect([...ELEMENTS.values()].map((e) => e.atomicNumber)).toEqual(Array.from({ length: 118 }, (_, i) => i + 1));
+    expect([...ELEMENTS.values()].map((e) => e.atomicNumber)).toEqual(
+      Array.from({ length: 118 }, (_, i) => i + 1),
+    );
   });
 
   // Source: IUPAC 2021 abridged standard atomic weights (CIAAW, Prohaska et al. 2022), constants.csv

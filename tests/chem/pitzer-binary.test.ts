@@ -33,15 +33,31 @@ const TOLERANCE_PERCENT: Record<string, { confirmed: number; memory: number; why
   NaCl: { confirmed: 1, memory: 1 },
   KCl: { confirmed: 1, memory: 1 },
   KNO3: { confirmed: 1, memory: 1 },
-  LiCl: { confirmed: 1.3, memory: 1.3, why: "May et al. (2011) run 1.0–1.2 % high at 3–6 mol/kg; within 0.5 % up to 2 mol/kg" },
-  NaOH: { confirmed: 1, memory: 1.7, why: "only memory rows (R&S); the 2 mol/kg recollection is ±1 %" },
+  LiCl: {
+    confirmed: 1.3,
+    memory: 1.3,
+    why: "May et al. (2011) run 1.0–1.2 % high at 3–6 mol/kg; within 0.5 % up to 2 mol/kg",
+  },
+  NaOH: {
+    confirmed: 1,
+    memory: 1.7,
+    why: "only memory rows (R&S); the 2 mol/kg recollection is ±1 %",
+  },
   MgCl2: {
     confirmed: 1.7,
     memory: 1.6,
     why: "the CRC 2:1 table sits about 1 % above Robinson & Stokes at 0.05–1 mol/kg (R&S 0.529 at 0.1 mol/kg, from memory), which every published Pitzer set reproduces",
   },
-  CaCl2: { confirmed: 1.8, memory: 1.8, why: "CRC 2 mol/kg point (0.784) is the row whose column assignment is uncertain; model 0.770" },
-  K2SO4: { confirmed: 2, memory: 2, why: "known disagreement: CRC 0.424 vs Pitzer-parameter 0.43–0.44 at 0.1 mol/kg (reference README item 7)" },
+  CaCl2: {
+    confirmed: 1.8,
+    memory: 1.8,
+    why: "CRC 2 mol/kg point (0.784) is the row whose column assignment is uncertain; model 0.770",
+  },
+  K2SO4: {
+    confirmed: 2,
+    memory: 2,
+    why: "known disagreement: CRC 0.424 vs Pitzer-parameter 0.43–0.44 at 0.1 mol/kg (reference README item 7)",
+  },
   Na2SO4: { confirmed: 2, memory: 2, why: "memory rows of low-medium confidence (1–2 %)" },
 };
 
@@ -63,7 +79,10 @@ const rows25 = GAMMA_REFERENCE.filter((r) => r.temperatureC === 25 && IONS[r.sal
 const salts = [...new Set(rows25.map((r) => r.salt))];
 
 describe("Pitzer γ± of binary salts at 25 °C against published tables", () => {
-  const summary: Record<string, { points: number; maxMolality: number; worstPercent: number; atMolality: number }> = {};
+  const summary: Record<
+    string,
+    { points: number; maxMolality: number; worstPercent: number; atMolality: number }
+  > = {};
 
   for (const salt of salts) {
     it(`${salt}: every tabulated point within the stated tolerance up to the fitted range`, () => {
@@ -75,10 +94,19 @@ describe("Pitzer γ± of binary salts at 25 °C against published tables", () =>
       let worst = { percent: 0, molality: 0 };
       for (const row of inRange) {
         const { result, percent } = deviationPercent(row);
-        expect(result.validityMessages, `${salt} ${row.molality} mol/kg is inside the fitted range`).toEqual([]);
-        const tol = row.confidence.startsWith("memory") ? TOLERANCE_PERCENT[salt].memory : TOLERANCE_PERCENT[salt].confirmed;
-        expect(Math.abs(percent), `${salt} at ${row.molality} mol/kg vs ${row.gammaPm} (${row.source})`).toBeLessThanOrEqual(tol);
-        if (Math.abs(percent) > Math.abs(worst.percent)) worst = { percent, molality: row.molality };
+        expect(
+          result.validityMessages,
+          `${salt} ${row.molality} mol/kg is inside the fitted range`,
+        ).toEqual([]);
+        const tol = row.confidence.startsWith("memory")
+          ? TOLERANCE_PERCENT[salt].memory
+          : TOLERANCE_PERCENT[salt].confirmed;
+        expect(
+          Math.abs(percent),
+          `${salt} at ${row.molality} mol/kg vs ${row.gammaPm} (${row.source})`,
+        ).toBeLessThanOrEqual(tol);
+        if (Math.abs(percent) > Math.abs(worst.percent))
+          worst = { percent, molality: row.molality };
       }
       summary[salt] = {
         points: inRange.length,
@@ -110,7 +138,10 @@ describe("Pitzer osmotic coefficient and water activity", () => {
     for (const row of rows) {
       const { result } = deviationPercent(row);
       const phi = result.osmoticCoefficient!;
-      expect(Math.abs(phi - row.osmoticCoefficient!) / row.osmoticCoefficient!, `φ at ${row.molality}`).toBeLessThan(0.003);
+      expect(
+        Math.abs(phi - row.osmoticCoefficient!) / row.osmoticCoefficient!,
+        `φ at ${row.molality}`,
+      ).toBeLessThan(0.003);
     }
   });
 
@@ -120,7 +151,15 @@ describe("Pitzer osmotic coefficient and water activity", () => {
       [1, 0.9669],
       [6, 0.7596],
     ] as const) {
-      const r = pitzerBinarySalt({ cation: "Na+", cationCharge: 1, anion: "Cl-", anionCharge: -1, molality: m, temperatureC: 25, aPhi: A_PHI_25C });
+      const r = pitzerBinarySalt({
+        cation: "Na+",
+        cationCharge: 1,
+        anion: "Cl-",
+        anionCharge: -1,
+        molality: m,
+        temperatureC: 25,
+        aPhi: A_PHI_25C,
+      });
       expect(Math.abs(r.waterActivity! - expected)).toBeLessThan(0.001);
     }
   });

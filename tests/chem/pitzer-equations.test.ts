@@ -40,7 +40,14 @@ describe("worked examples (reference worked_examples.md §9, evaluated from publ
   });
 
   it("MgSO4 (2:2, β2 term) with Harvie, Møller & Weare (1984) parameters: γ±(0.1) 0.1660, γ±(1.0) 0.0547, φ(1.0) 0.528", () => {
-    const mgso4 = { beta0: 0.221, beta1: 3.343, beta2: -37.23, alpha1: 1.4, alpha2: 12, cPhi: 0.025 };
+    const mgso4 = {
+      beta0: 0.221,
+      beta1: 3.343,
+      beta2: -37.23,
+      alpha1: 1.4,
+      alpha2: 12,
+      cPhi: 0.025,
+    };
     expect(single(mgso4, 2, -2, 1, 1, 0.1).gamma).toBeCloseTo(0.166, 3);
     const one = single(mgso4, 2, -2, 1, 1, 1);
     expect(one.gamma).toBeCloseTo(0.0547, 3);
@@ -103,8 +110,19 @@ describe("J(x) of the unsymmetrical mixing terms", () => {
 describe("Gibbs–Duhem consistency in a seawater-like mixture with Eθ, θ and ψ", () => {
   // Σ m_i d ln γ_i = d[(φ − 1) Σ m_i] when all molalities scale together: a relation between
   // the γ and φ equations that fails if any term (B′, Eθ′, ψ) is mis-coded.
-  const p = (beta0: number, beta1: number, beta2: number, alpha1: number, cPhi: number): PitzerBinaryTerms => ({
-    beta0, beta1, beta2, alpha1, alpha2: 12, cPhi,
+  const p = (
+    beta0: number,
+    beta1: number,
+    beta2: number,
+    alpha1: number,
+    cPhi: number,
+  ): PitzerBinaryTerms => ({
+    beta0,
+    beta1,
+    beta2,
+    alpha1,
+    alpha2: 12,
+    cPhi,
   });
   const zc = [1, 1, 2, 2];
   const za = [-1, -2];
@@ -129,7 +147,11 @@ describe("Gibbs–Duhem consistency in a seawater-like mixture with Eθ, θ and 
       [0, 0.02],
       [0, 0],
     ],
-    psiCations: zc.map((_, i) => zc.map((__, j) => (i === 0 && j === 2 ? [-0.012, -0.015] : i === 0 && j === 1 ? [-0.0018, -0.01] : [0, 0]))),
+    psiCations: zc.map((_, i) =>
+      zc.map((__, j) =>
+        i === 0 && j === 2 ? [-0.012, -0.015] : i === 0 && j === 1 ? [-0.0018, -0.01] : [0, 0],
+      ),
+    ),
     psiAnions: [
       [
         [0, 0, 0, 0],
@@ -154,7 +176,8 @@ describe("Gibbs–Duhem consistency in a seawater-like mixture with Eθ, θ and 
         ...hi.lnGammaAnions.map((v, i) => v - lo.lnGammaAnions[i]),
       ];
       const lhs = molalities.reduce((acc, m, i) => acc + m * dLnGamma[i], 0);
-      const rhs = (hi.osmoticCoefficient - 1) * sumM * (1 + h) - (lo.osmoticCoefficient - 1) * sumM * (1 - h);
+      const rhs =
+        (hi.osmoticCoefficient - 1) * sumM * (1 + h) - (lo.osmoticCoefficient - 1) * sumM * (1 - h);
       expect(Math.abs(lhs - rhs), `scale ${s0}`).toBeLessThan(1e-6);
     }
   });

@@ -26,18 +26,28 @@ describe("Pitzer in a seawater-like mixture", () => {
     const anions = ["Cl-", "SO4^2-"];
     const hmw = {
       ...a.system,
-      binary: cations.map((c) => anions.map((x) => HMW_1984_BINARY.find((r) => r.cation === c && r.anion === x)!)),
+      binary: cations.map((c) =>
+        anions.map((x) => HMW_1984_BINARY.find((r) => r.cation === c && r.anion === x)!),
+      ),
     };
     const mixed = pitzerMixture(a.system, A_PHI_25C);
     const pure = pitzerMixture(hmw, A_PHI_25C);
     const ln1 = [...mixed.lnGammaCations, ...mixed.lnGammaAnions];
     const ln2 = [...pure.lnGammaCations, ...pure.lnGammaAnions];
-    ln1.forEach((v, i) => expect(Math.abs(Math.exp(v - ln2[i]) - 1), `ion ${i}`).toBeLessThan(0.04));
+    ln1.forEach((v, i) =>
+      expect(Math.abs(Math.exp(v - ln2[i]) - 1), `ion ${i}`).toBeLessThan(0.04),
+    );
     expect(Math.abs(mixed.osmoticCoefficient - pure.osmoticCoefficient)).toBeLessThan(0.005);
   });
 
   it("is fully parameterised and in range at 25 °C: no validity messages, finite output", () => {
-    const out = computePitzer({ ions: SEAWATER, ionicStrengthMolal: I, temperatureC: 25, solvent: "water", constants: { temperatureK: 298.15, aLog10: 0.51, bPerAngstrom: 0.3287, aPhi: A_PHI_25C } });
+    const out = computePitzer({
+      ions: SEAWATER,
+      ionicStrengthMolal: I,
+      temperatureC: 25,
+      solvent: "water",
+      constants: { temperatureK: 298.15, aLog10: 0.51, bPerAngstrom: 0.3287, aPhi: A_PHI_25C },
+    });
     expect(out.validityMessages).toEqual([]);
     expect(out.lnGamma.every(Number.isFinite)).toBe(true);
     // divalent ions are far more non-ideal than monovalent ones at I ≈ 0.7 (common practice)
@@ -48,7 +58,13 @@ describe("Pitzer in a seawater-like mixture", () => {
     const a = assemblePitzerSystem(SEAWATER, 25, I);
     const withE = pitzerMixture(a.system, A_PHI_25C).lnGammaCations[2];
     const noMixing = pitzerMixture(
-      { ...a.system, thetaCations: a.system.thetaCations.map((r) => r.map(() => 0)), thetaAnions: a.system.thetaAnions.map((r) => r.map(() => 0)), psiCations: a.system.psiCations.map((r) => r.map((x) => x.map(() => 0))), psiAnions: a.system.psiAnions.map((r) => r.map((x) => x.map(() => 0))) },
+      {
+        ...a.system,
+        thetaCations: a.system.thetaCations.map((r) => r.map(() => 0)),
+        thetaAnions: a.system.thetaAnions.map((r) => r.map(() => 0)),
+        psiCations: a.system.psiCations.map((r) => r.map((x) => x.map(() => 0))),
+        psiAnions: a.system.psiAnions.map((r) => r.map((x) => x.map(() => 0))),
+      },
       A_PHI_25C,
     ).lnGammaCations[2];
     expect(Math.abs(withE - noMixing)).toBeGreaterThan(0.01);

@@ -10,14 +10,24 @@ import { computePitzer, pitzerBinarySalt } from "@/lib/chem/models/pitzer";
 import { GAMMA_REFERENCE } from "./fixtures/pitzer-gamma-reference";
 
 describe("Pitzer NaCl at 0–40 °C", () => {
-  const rows = GAMMA_REFERENCE.filter((r) => r.salt === "NaCl" && r.source.startsWith("Pitzer, Peiper") && r.temperatureC !== 25);
+  const rows = GAMMA_REFERENCE.filter(
+    (r) => r.salt === "NaCl" && r.source.startsWith("Pitzer, Peiper") && r.temperatureC !== 25,
+  );
 
   it("γ± within 2 % and φ within 1 % at 10, 20, 30 and 40 °C, 0.1–6 mol/kg", () => {
     expect(rows.length).toBeGreaterThan(40);
     const worst: Record<number, { gammaPercent: number; phiPercent: number }> = {};
     for (const row of rows.filter((r) => r.temperatureC !== 0)) {
       const aPhi = debyeHuckelConstants(row.temperatureC).aPhi;
-      const r = pitzerBinarySalt({ cation: "Na+", cationCharge: 1, anion: "Cl-", anionCharge: -1, molality: row.molality, temperatureC: row.temperatureC, aPhi });
+      const r = pitzerBinarySalt({
+        cation: "Na+",
+        cationCharge: 1,
+        anion: "Cl-",
+        anionCharge: -1,
+        molality: row.molality,
+        temperatureC: row.temperatureC,
+        aPhi,
+      });
       const g = (100 * (r.meanActivityCoefficient - row.gammaPm)) / row.gammaPm;
       expect(Math.abs(g), `γ± ${row.molality} mol/kg at ${row.temperatureC} °C`).toBeLessThan(2);
       const w = (worst[row.temperatureC] ??= { gammaPercent: 0, phiPercent: 0 });
@@ -35,18 +45,45 @@ describe("Pitzer NaCl at 0–40 °C", () => {
   it("at 0 °C only dilute solutions stay within 1.1 %, and every 0 °C result says the correction is stretched", () => {
     // Measured: +1.0 % at 0.5 mol/kg rising to +5 % at 4 mol/kg (β0(T) curvature not in a first-order expansion).
     for (const row of rows.filter((r) => r.temperatureC === 0)) {
-      const r = pitzerBinarySalt({ cation: "Na+", cationCharge: 1, anion: "Cl-", anionCharge: -1, molality: row.molality, temperatureC: 0, aPhi: debyeHuckelConstants(0).aPhi });
+      const r = pitzerBinarySalt({
+        cation: "Na+",
+        cationCharge: 1,
+        anion: "Cl-",
+        anionCharge: -1,
+        molality: row.molality,
+        temperatureC: 0,
+        aPhi: debyeHuckelConstants(0).aPhi,
+      });
       expect(r.validityMessages.join(" ")).toMatch(/holds for about 10–40 °C/);
-      if (row.molality <= 0.5) expect(Math.abs(r.meanActivityCoefficient / row.gammaPm - 1)).toBeLessThan(0.011);
+      if (row.molality <= 0.5)
+        expect(Math.abs(r.meanActivityCoefficient / row.gammaPm - 1)).toBeLessThan(0.011);
     }
   });
 
   it("the temperature correction matters: without it γ± at 0 °C and 6 mol/kg is further from the table", () => {
     const row = rows.find((r) => r.temperatureC === 0 && r.molality === 6)!;
     const aPhi = debyeHuckelConstants(0).aPhi;
-    const corrected = pitzerBinarySalt({ cation: "Na+", cationCharge: 1, anion: "Cl-", anionCharge: -1, molality: 6, temperatureC: 0, aPhi });
-    const uncorrected = pitzerBinarySalt({ cation: "Na+", cationCharge: 1, anion: "Cl-", anionCharge: -1, molality: 6, temperatureC: 25, aPhi });
-    expect(Math.abs(corrected.meanActivityCoefficient - row.gammaPm)).toBeLessThan(Math.abs(uncorrected.meanActivityCoefficient - row.gammaPm));
+    const corrected = pitzerBinarySalt({
+      cation: "Na+",
+      cationCharge: 1,
+      anion: "Cl-",
+      anionCharge: -1,
+      molality: 6,
+      temperatureC: 0,
+      aPhi,
+    });
+    const uncorrected = pitzerBinarySalt({
+      cation: "Na+",
+      cationCharge: 1,
+      anion: "Cl-",
+      anionCharge: -1,
+      molality: 6,
+      temperatureC: 25,
+      aPhi,
+    });
+    expect(Math.abs(corrected.meanActivityCoefficient - row.gammaPm)).toBeLessThan(
+      Math.abs(uncorrected.meanActivityCoefficient - row.gammaPm),
+    );
   });
 });
 
@@ -77,7 +114,9 @@ describe("Pitzer validity messages", () => {
       solvent: "water",
       constants: c25,
     });
-    expect(out.validityMessages.join(" ")).toMatch(/beyond the fitted range of the NaCl parameters/);
+    expect(out.validityMessages.join(" ")).toMatch(
+      /beyond the fitted range of the NaCl parameters/,
+    );
     expect(out.lnGamma.every(Number.isFinite)).toBe(true);
   });
 
@@ -97,10 +136,22 @@ describe("Pitzer validity messages", () => {
 
   it("bad input is a ChemInputError with a field", () => {
     expect(() =>
-      computePitzer({ ions: [{ formula: "Na+", charge: 1, molality: -1 }], ionicStrengthMolal: 0, temperatureC: 25, solvent: "water", constants: c25 }),
+      computePitzer({
+        ions: [{ formula: "Na+", charge: 1, molality: -1 }],
+        ionicStrengthMolal: 0,
+        temperatureC: 25,
+        solvent: "water",
+        constants: c25,
+      }),
     ).toThrowError(expect.objectContaining({ name: "ChemInputError", field: "ions[0].molality" }));
     expect(() =>
-      computePitzer({ ions: [], ionicStrengthMolal: 0, temperatureC: 25, solvent: "acetonitrile", constants: c25 }),
+      computePitzer({
+        ions: [],
+        ionicStrengthMolal: 0,
+        temperatureC: 25,
+        solvent: "acetonitrile",
+        constants: c25,
+      }),
     ).toThrowError(expect.objectContaining({ field: "solvent" }));
   });
 });

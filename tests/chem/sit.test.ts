@@ -11,7 +11,10 @@ import { GAMMA_REFERENCE } from "./fixtures/pitzer-gamma-reference";
 // A (log10) = 0.5100 at 25 °C from Aφ = 0.3915 (Pitzer 1991; reference worked_examples.md §4).
 const C25 = { temperatureK: 298.15, aLog10: 0.51, bPerAngstrom: 0.3287, aPhi: 0.3915 };
 
-const SALTS: Record<string, { cation: string; zc: number; anion: string; za: number; tolerancePercent: number }> = {
+const SALTS: Record<
+  string,
+  { cation: string; zc: number; anion: string; za: number; tolerancePercent: number }
+> = {
   HCl: { cation: "H+", zc: 1, anion: "Cl-", za: -1, tolerancePercent: 2 },
   LiCl: { cation: "Li+", zc: 1, anion: "Cl-", za: -1, tolerancePercent: 2 },
   NaCl: { cation: "Na+", zc: 1, anion: "Cl-", za: -1, tolerancePercent: 2.5 },
@@ -59,7 +62,9 @@ describe("SIT γ± at 25 °C against published tables, I ≤ 3.5 mol/kg", () => 
           continue;
         }
         const dev = (100 * (gamma - row.gammaPm)) / row.gammaPm;
-        expect(Math.abs(dev), `${salt} ${row.molality} mol/kg (${row.source})`).toBeLessThanOrEqual(SALTS[salt].tolerancePercent);
+        expect(Math.abs(dev), `${salt} ${row.molality} mol/kg (${row.source})`).toBeLessThanOrEqual(
+          SALTS[salt].tolerancePercent,
+        );
         if (Math.abs(dev) > Math.abs(worst)) worst = dev;
         points++;
       }
@@ -99,15 +104,29 @@ describe("SIT internals", () => {
     const run = (s: number) => {
       const list = ions(s);
       const I = 0.5 * list.reduce((a, i) => a + i.molality * i.charge ** 2, 0);
-      return { list, out: computeSit({ ions: list, ionicStrengthMolal: I, temperatureC: 25, solvent: "water", constants: C25 }) };
+      return {
+        list,
+        out: computeSit({
+          ions: list,
+          ionicStrengthMolal: I,
+          temperatureC: 25,
+          solvent: "water",
+          constants: C25,
+        }),
+      };
     };
     const h = 1e-5;
     const lo = run(1 - h);
     const hi = run(1 + h);
     const mid = run(1);
     const sumM = mid.list.reduce((a, i) => a + i.molality, 0);
-    const lhs = mid.list.reduce((a, ion, k) => a + ion.molality * (hi.out.lnGamma[k] - lo.out.lnGamma[k]), 0);
-    const rhs = (hi.out.osmoticCoefficient! - 1) * sumM * (1 + h) - (lo.out.osmoticCoefficient! - 1) * sumM * (1 - h);
+    const lhs = mid.list.reduce(
+      (a, ion, k) => a + ion.molality * (hi.out.lnGamma[k] - lo.out.lnGamma[k]),
+      0,
+    );
+    const rhs =
+      (hi.out.osmoticCoefficient! - 1) * sumM * (1 + h) -
+      (lo.out.osmoticCoefficient! - 1) * sumM * (1 - h);
     expect(Math.abs(lhs - rhs)).toBeLessThan(1e-7);
   });
 
@@ -129,8 +148,24 @@ describe("SIT internals", () => {
   });
 
   it("coverage: NaCl is covered; Na+ with HEPES- is not, and says why", () => {
-    expect(sitCoverage([{ formula: "Na+", charge: 1, molality: 1 }, { formula: "Cl-", charge: -1, molality: 1 }], 25, 1).covered).toBe(true);
-    const c = sitCoverage([{ formula: "Na+", charge: 1, molality: 0.1 }, { formula: "HEPES-", charge: -1, molality: 0.1 }], 25, 0.1);
+    expect(
+      sitCoverage(
+        [
+          { formula: "Na+", charge: 1, molality: 1 },
+          { formula: "Cl-", charge: -1, molality: 1 },
+        ],
+        25,
+        1,
+      ).covered,
+    ).toBe(true);
+    const c = sitCoverage(
+      [
+        { formula: "Na+", charge: 1, molality: 0.1 },
+        { formula: "HEPES-", charge: -1, molality: 0.1 },
+      ],
+      25,
+      0.1,
+    );
     expect(c.covered).toBe(false);
     expect(c.reasons.join(" ")).toMatch(/HEPES/);
   });

@@ -21,7 +21,10 @@ describe("speciate: standard buffers (Bates–Guggenheim convention)", () => {
       });
       const tol = Object.entries(TOLERANCE).find(([k]) => std.label.startsWith(k))?.[1] ?? 0.01;
       const tolerance = std.temperatureC === 25 ? tol : 0.015;
-      expect(Math.abs(r.pH - std.pH), `computed ${r.pH.toFixed(4)} (${std.source})`).toBeLessThanOrEqual(tolerance);
+      expect(
+        Math.abs(r.pH - std.pH),
+        `computed ${r.pH.toFixed(4)} (${std.source})`,
+      ).toBeLessThanOrEqual(tolerance);
       expect(r.pHConvention).toMatch(/Bates–Guggenheim/);
     });
   }
@@ -48,9 +51,13 @@ describe("speciate: invariants and conventions", () => {
     const r = gomori();
     const charge = r.species.reduce((a, s) => a + s.charge * s.molality, 0);
     expect(Math.abs(charge)).toBeLessThan(1e-10);
-    const f = r.species.filter((s) => s.system === "phosphate").reduce((a, s) => a + s.fraction!, 0);
+    const f = r.species
+      .filter((s) => s.system === "phosphate")
+      .reduce((a, s) => a + s.fraction!, 0);
     expect(f).toBeCloseTo(1, 12);
-    for (const s of r.species) for (const v of [s.molality, s.molarity, s.gamma, s.activity]) expect(Number.isFinite(v)).toBe(true);
+    for (const s of r.species)
+      for (const v of [s.molality, s.molarity, s.gamma, s.activity])
+        expect(Number.isFinite(v)).toBe(true);
     expect(r.cautions.length).toBeGreaterThanOrEqual(2);
   });
 
@@ -73,22 +80,29 @@ describe("speciate: invariants and conventions", () => {
   });
 
   it("strong acid: 0.01 mol HCl in 1 kg water gives pH ≈ 2.04 with Davies γ (common practice)", () => {
-    const r = speciate({ components: [{ formula: "HCl", volumeMl: 10, concentrationMolar: 1 }], waterMassG: 1000 });
+    const r = speciate({
+      components: [{ formula: "HCl", volumeMl: 10, concentrationMolar: 1 }],
+      waterMassG: 1000,
+    });
     // γ(H+) at I = 0.01 by Davies = 10^(−0.51(0.0909 − 0.003)) = 0.902 → pH = 2 − log10 0.902 = 2.045
     expect(r.pH).toBeCloseTo(2.045, 2);
     expect(r.cautions.join(" ")).toMatch(/corrosive/);
   });
 
   it("bad input is a ChemInputError with a field", () => {
-    expect(() => speciate({ components: [{ formula: "unobtainium", amountMol: 1 }], volumeMl: 100 })).toThrowError(
+    expect(() =>
+      speciate({ components: [{ formula: "unobtainium", amountMol: 1 }], volumeMl: 100 }),
+    ).toThrowError(
       expect.objectContaining({ name: "ChemInputError", field: "components[0].formula" }),
     );
-    expect(() => speciate({ components: [{ formula: "KH2PO4", massG: -1 }], volumeMl: 100 })).toThrowError(
-      expect.objectContaining({ field: "components[0].massG" }),
+    expect(() =>
+      speciate({ components: [{ formula: "KH2PO4", massG: -1 }], volumeMl: 100 }),
+    ).toThrowError(expect.objectContaining({ field: "components[0].massG" }));
+    expect(() => speciate({ components: [{ formula: "KH2PO4", massG: 1 }] })).toThrowError(
+      expect.objectContaining({ field: "volumeMl" }),
     );
-    expect(() => speciate({ components: [{ formula: "KH2PO4", massG: 1 }] })).toThrowError(expect.objectContaining({ field: "volumeMl" }));
-    expect(() => speciate({ components: [{ formula: "KH2PO4", massG: 1 }], volumeMl: 100, temperatureC: 120 })).toThrowError(
-      expect.objectContaining({ field: "temperatureC" }),
-    );
+    expect(() =>
+      speciate({ components: [{ formula: "KH2PO4", massG: 1 }], volumeMl: 100, temperatureC: 120 }),
+    ).toThrowError(expect.objectContaining({ field: "temperatureC" }));
   });
 });

@@ -33,12 +33,16 @@ describe("built-in species catalogue", () => {
     ["acetate", ["CH3COONa", "CH3COOK"]],
     ["hexacyanoferrate", ["K3Fe(CN)6", "K4Fe(CN)6"]],
     ["ruthenium hexaammine", ["Ru(NH3)6Cl3"]],
-    ["tetraalkylammonium supporting electrolyte", ["N(C4H9)4PF6", "N(C4H9)4BF4", "N(C4H9)4N(SO2CF3)2", "N(C2H5)4BF4"]],
+    [
+      "tetraalkylammonium supporting electrolyte",
+      ["N(C4H9)4PF6", "N(C4H9)4BF4", "N(C4H9)4N(SO2CF3)2", "N(C2H5)4BF4"],
+    ],
     ["lithium salt", ["LiPF6", "LiBF4", "LiN(SO2CF3)2", "LiClO4"]],
     ["transition-metal chloride", ["FeCl3", "CuCl2", "NiCl2", "CoCl2", "ZnCl2"]],
     ["strong acid", ["HCl", "HNO3", "H2SO4", "HClO4"]],
   ])("includes %s salts", (_family, formulas) => {
-    for (const formula of formulas) expect(CATALOGUE_SALTS.some((s) => s.formula === formula)).toBe(true);
+    for (const formula of formulas)
+      expect(CATALOGUE_SALTS.some((s) => s.formula === formula)).toBe(true);
   });
 
   it("knows salts by trade abbreviation and name", () => {
@@ -48,7 +52,10 @@ describe("built-in species catalogue", () => {
       expect.objectContaining({ formula: "K+", count: 3 }),
       expect.objectContaining({ formula: "Fe(CN)6^3-", count: 1 }),
     ]);
-    expect(resolveSpecies("[Ru(NH3)6]Cl3").ions[0]).toMatchObject({ formula: "Ru(NH3)6^3+", charge: 3 });
+    expect(resolveSpecies("[Ru(NH3)6]Cl3").ions[0]).toMatchObject({
+      formula: "Ru(NH3)6^3+",
+      charge: 3,
+    });
   });
 
   it("recognises a hydrate as its salt, keeping the weighed molar mass", () => {
@@ -60,10 +67,16 @@ describe("built-in species catalogue", () => {
 
   it("accepts an unknown formula whose ions follow from charges, with a warning", () => {
     const rb = resolveSpecies("RbBr");
-    expect(rb.ions.map((i) => [i.formula, i.count])).toEqual([["Rb+", 1], ["Br-", 1]]);
+    expect(rb.ions.map((i) => [i.formula, i.count])).toEqual([
+      ["Rb+", 1],
+      ["Br-", 1],
+    ]);
     expect(rb.warnings[0]).toMatch(/inferred from ionic charges/);
     const eu = resolveSpecies("EuCl3");
-    expect(eu.ions.map((i) => [i.formula, i.count])).toEqual([["Eu^3+", 1], ["Cl-", 3]]);
+    expect(eu.ions.map((i) => [i.formula, i.count])).toEqual([
+      ["Eu^3+", 1],
+      ["Cl-", 3],
+    ]);
   });
 
   it("refuses a formula it cannot split into ions, naming it", () => {
@@ -116,7 +129,9 @@ describe("searchSpecies (type-ahead)", () => {
   });
   it("finds by abbreviation and by part of the name", () => {
     expect(searchSpecies("TBAP").map((h) => h.formula)).toContain("N(C4H9)4ClO4");
-    expect(searchSpecies("ferricyanide").map((h) => h.formula)).toEqual(expect.arrayContaining(["K3Fe(CN)6", "Fe(CN)6^3-"]));
+    expect(searchSpecies("ferricyanide").map((h) => h.formula)).toEqual(
+      expect.arrayContaining(["K3Fe(CN)6", "Fe(CN)6^3-"]),
+    );
     expect(searchSpecies("hexaammine").length).toBeGreaterThanOrEqual(2);
   });
   it("returns nothing for an empty query and respects the limit", () => {

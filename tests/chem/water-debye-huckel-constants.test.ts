@@ -1,6 +1,11 @@
 // @vitest-environment node
 import { describe, expect, it } from "vitest";
-import { ChemInputError, debyeHuckelConstants, waterDensityGPerMl, waterRelativePermittivity } from "@/lib/chem";
+import {
+  ChemInputError,
+  debyeHuckelConstants,
+  waterDensityGPerMl,
+  waterRelativePermittivity,
+} from "@/lib/chem";
 import * as C from "@/lib/chem/constants";
 import { readFixture, shortSource } from "./fixtures/read-fixture";
 
@@ -9,10 +14,18 @@ const bySource = (fragment: string) => water.filter((r) => r.original_source.inc
 const relative = (a: number, b: number) => Math.abs(a / b - 1);
 
 describe("CODATA 2018 constants", () => {
-  const constants = new Map(readFixture("constants.csv").filter((r) => r.original_source.startsWith("CODATA 2018")).map((r) => [r.symbol, Number(r.value)]));
+  const constants = new Map(
+    readFixture("constants.csv")
+      .filter((r) => r.original_source.startsWith("CODATA 2018"))
+      .map((r) => [r.symbol, Number(r.value)]),
+  );
   it.each([
-    ["e", C.ELEMENTARY_CHARGE_C], ["N_A", C.AVOGADRO_PER_MOL], ["k", C.BOLTZMANN_J_PER_K],
-    ["epsilon_0", C.VACUUM_PERMITTIVITY_F_PER_M], ["F", C.FARADAY_C_PER_MOL], ["R", C.GAS_CONSTANT_J_PER_MOL_K],
+    ["e", C.ELEMENTARY_CHARGE_C],
+    ["N_A", C.AVOGADRO_PER_MOL],
+    ["k", C.BOLTZMANN_J_PER_K],
+    ["epsilon_0", C.VACUUM_PERMITTIVITY_F_PER_M],
+    ["F", C.FARADAY_C_PER_MOL],
+    ["R", C.GAS_CONSTANT_J_PER_MOL_K],
   ])("%s matches CODATA 2018 (Tiesinga et al. 2021)", (symbol, value) => {
     expect(relative(value, constants.get(symbol)!)).toBeLessThan(1e-9);
   });
@@ -20,17 +33,26 @@ describe("CODATA 2018 constants", () => {
 
 describe("water εr (Malmberg & Maryott 1956) and ρ (Kell 1975)", () => {
   const rows = water.filter((r) => r.relative_permittivity !== "");
-  it.each(rows.map((r) => [Number(r.temperature_C), Number(r.relative_permittivity), Number(r.density_g_per_cm3)]))(
-    "%i °C: εr %f, ρ %f g/cm³ (correlations evaluated in water_properties.csv)",
-    (t, eps, rho) => {
-      expect(waterRelativePermittivity(t)).toBeCloseTo(eps, 2);
-      expect(waterDensityGPerMl(t)).toBeCloseTo(rho, 5);
-    },
-  );
+  it.each(
+    rows.map((r) => [
+      Number(r.temperature_C),
+      Number(r.relative_permittivity),
+      Number(r.density_g_per_cm3),
+    ]),
+  )("%i °C: εr %f, ρ %f g/cm³ (correlations evaluated in water_properties.csv)", (t, eps, rho) => {
+    expect(waterRelativePermittivity(t)).toBeCloseTo(eps, 2);
+    expect(waterDensityGPerMl(t)).toBeCloseTo(rho, 5);
+  });
 
   it("agrees with IAPWS-95 densities at 1 atm to 0.02 kg/m³ (IAPWS values from memory, correlations.md §2a)", () => {
-    const iapws: [number, number][] = [[0, 999.84], [25, 997.05], [50, 988.03], [100, 958.35]];
-    for (const [t, rho] of iapws) expect(Math.abs(waterDensityGPerMl(t) * 1000 - rho)).toBeLessThan(0.02);
+    const iapws: [number, number][] = [
+      [0, 999.84],
+      [25, 997.05],
+      [50, 988.03],
+      [100, 958.35],
+    ];
+    for (const [t, rho] of iapws)
+      expect(Math.abs(waterDensityGPerMl(t) * 1000 - rho)).toBeLessThan(0.02);
   });
 
   it("refuses temperatures outside 0–100 °C", () => {
@@ -44,15 +66,19 @@ describe("Debye–Hückel A and B of water from εr and ρ (general expression, 
   // A_c = A_m / √ρ and B_c = B_m / √ρ (ρ in kg/dm³). Tolerance: 0.2 % (the issue's bar).
   const rs = bySource("Robinson & Stokes (1959)");
   it("Robinson & Stokes table has 0–100 °C", () => expect(rs.length).toBeGreaterThanOrEqual(15));
-  it.each(rs.map((r) => [Number(r.temperature_C), Number(r.A_gamma_log10), Number(r.B_gamma_per_angstrom), shortSource(r)]))(
-    "%i °C: A = %f, B = %f Å⁻¹ within 0.2 % (%s)",
-    (t, a, b) => {
-      const k = debyeHuckelConstants(t, "water");
-      const sqrtRho = Math.sqrt(waterDensityGPerMl(t));
-      expect(relative(k.aLog10 / sqrtRho, a)).toBeLessThan(0.002);
-      expect(relative(k.bPerAngstrom / sqrtRho, b)).toBeLessThan(0.002);
-    },
-  );
+  it.each(
+    rs.map((r) => [
+      Number(r.temperature_C),
+      Number(r.A_gamma_log10),
+      Number(r.B_gamma_per_angstrom),
+      shortSource(r),
+    ]),
+  )("%i °C: A = %f, B = %f Å⁻¹ within 0.2 % (%s)", (t, a, b) => {
+    const k = debyeHuckelConstants(t, "water");
+    const sqrtRho = Math.sqrt(waterDensityGPerMl(t));
+    expect(relative(k.aLog10 / sqrtRho, a)).toBeLessThan(0.002);
+    expect(relative(k.bPerAngstrom / sqrtRho, b)).toBeLessThan(0.002);
+  });
 
   it("Helgeson & Kirkham (1974) / EQ3/6 A and B at 25 °C within 0.2 %; 0.01–100 °C within 0.7 % (their εr differs)", () => {
     const hk = bySource("Helgeson & Kirkham");
@@ -79,7 +105,10 @@ describe("Debye–Hückel A and B of water from εr and ρ (general expression, 
     expect(relative(debyeHuckelConstants(25).aPhi, 0.3915)).toBeLessThan(0.002);
     const crp = bySource("Clegg, Rard & Pitzer");
     expect(crp.length).toBe(15);
-    for (const r of crp) expect(relative(debyeHuckelConstants(Number(r.temperature_C)).aPhi, Number(r.A_phi))).toBeLessThan(0.006);
+    for (const r of crp)
+      expect(
+        relative(debyeHuckelConstants(Number(r.temperature_C)).aPhi, Number(r.A_phi)),
+      ).toBeLessThan(0.006);
   });
 
   it("A = 3 Aφ / ln 10 (definition)", () => {
@@ -90,7 +119,8 @@ describe("Debye–Hückel A and B of water from εr and ρ (general expression, 
   it("other solvents: A scales as (εr T)^−3/2 √ρ — acetonitrile's A is larger than water's", () => {
     const w = debyeHuckelConstants(25, "water");
     const mecn = debyeHuckelConstants(25, "acetonitrile");
-    const expected = w.aLog10 * ((78.30334 / 35.94) ** 1.5) * Math.sqrt(0.7766 / waterDensityGPerMl(25));
+    const expected =
+      w.aLog10 * (78.30334 / 35.94) ** 1.5 * Math.sqrt(0.7766 / waterDensityGPerMl(25));
     expect(mecn.aLog10).toBeCloseTo(expected, 3);
     expect(() => debyeHuckelConstants(100, "acetonitrile")).toThrow(/liquid range of acetonitrile/);
   });

@@ -25,24 +25,46 @@ describe("the JSON API answers bad requests with typed errors", () => {
     await page.getByTestId("current-user").waitFor();
     const api = browser.context.request;
 
-    const projects = (await (await api.get(`${BASE_URL}/api/projects`)).json()).projects as { id: string }[];
-    const created = await api.post(`${BASE_URL}/api/entries`, { data: { projectId: projects[0].id, title: "API errors" } });
+    const projects = (await (await api.get(`${BASE_URL}/api/projects`)).json()).projects as {
+      id: string;
+    }[];
+    const created = await api.post(`${BASE_URL}/api/entries`, {
+      data: { projectId: projects[0].id, title: "API errors" },
+    });
     expect(created.status()).toBe(201);
     const { id } = await created.json();
 
-    const notJson = await api.put(`${BASE_URL}/api/entries/${id}/content`, { data: "{not json", headers: { "content-type": "application/json" } });
+    const notJson = await api.put(`${BASE_URL}/api/entries/${id}/content`, {
+      data: "{not json",
+      headers: { "content-type": "application/json" },
+    });
     expect(notJson.status()).toBe(422);
 
-    const badTitle = await api.post(`${BASE_URL}/api/entries`, { data: { projectId: projects[0].id, title: "" } });
+    const badTitle = await api.post(`${BASE_URL}/api/entries`, {
+      data: { projectId: projects[0].id, title: "" },
+    });
     expect(badTitle.status()).toBe(422);
     expect((await badTitle.json()).error.fieldErrors.title).toBeDefined();
 
     expect((await api.get(`${BASE_URL}/api/entries/not-an-id`)).status()).toBe(404);
-    expect((await api.get(`${BASE_URL}/api/entries/00000000-0000-4000-8000-000000000000`)).status()).toBe(404);
+    expect(
+      (await api.get(`${BASE_URL}/api/entries/00000000-0000-4000-8000-000000000000`)).status(),
+    ).toBe(404);
 
-    const doc = { type: "doc", content: [{ type: "paragraph", content: [{ type: "text", text: "v1" }] }] };
-    expect((await api.put(`${BASE_URL}/api/entries/${id}/content`, { data: { baseRevision: 0, title: "API errors", content: doc } })).status()).toBe(200);
-    const stale = await api.put(`${BASE_URL}/api/entries/${id}/content`, { data: { baseRevision: 0, title: "API errors", content: doc } });
+    const doc = {
+      type: "doc",
+      content: [{ type: "paragraph", content: [{ type: "text", text: "v1" }] }],
+    };
+    expect(
+      (
+        await api.put(`${BASE_URL}/api/entries/${id}/content`, {
+          data: { baseRevision: 0, title: "API errors", content: doc },
+        })
+      ).status(),
+    ).toBe(200);
+    const stale = await api.put(`${BASE_URL}/api/entries/${id}/content`, {
+      data: { baseRevision: 0, title: "API errors", content: doc },
+    });
     expect(stale.status()).toBe(409);
     expect((await stale.json()).error.details.currentRevision).toBe(1);
 
@@ -54,7 +76,9 @@ describe("the JSON API answers bad requests with typed errors", () => {
     await signIn(theirPage, ridgebackResearcher.email, DEMO_PASSWORD);
     await theirPage.getByTestId("current-user").waitFor();
     expect((await theirs.context.request.get(`${BASE_URL}/api/entries/${id}`)).status()).toBe(404);
-    const write = await theirs.context.request.put(`${BASE_URL}/api/entries/${id}/content`, { data: { baseRevision: 1, title: "x", content: doc } });
+    const write = await theirs.context.request.put(`${BASE_URL}/api/entries/${id}/content`, {
+      data: { baseRevision: 1, title: "x", content: doc },
+    });
     expect(write.status()).toBe(404);
     await theirs.close();
   });

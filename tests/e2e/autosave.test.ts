@@ -7,7 +7,11 @@ const researcher = DEMO_LABS[0].members.find((m) => m.email.startsWith("mira"))!
 
 const saveStatus = (page: Page) => page.getByTestId("save-status").getAttribute("data-status");
 async function waitForStatus(page: Page, status: string) {
-  await page.waitForFunction((s) => document.querySelector('[data-testid="save-status"]')?.getAttribute("data-status") === s, status, { timeout: 20_000 });
+  await page.waitForFunction(
+    (s) => document.querySelector('[data-testid="save-status"]')?.getAttribute("data-status") === s,
+    status,
+    { timeout: 20_000 },
+  );
 }
 
 async function newBlankEntry(page: Page, title: string): Promise<string> {

@@ -8,7 +8,9 @@ const researcher = DEMO_LABS[0].members.find((m) => m.role === "researcher")!;
 
 /** The number a result cell shows ("0.1000", "7.780 × 10⁻¹"), as a number. */
 async function shownNumber(cell: Locator): Promise<number> {
-  const text = ((await cell.textContent()) ?? "").replace(/^.*=\s*/, "").replace(/\s*(mol\/kg|mol\/L|nm)$/, "");
+  const text = ((await cell.textContent()) ?? "")
+    .replace(/^.*=\s*/, "")
+    .replace(/\s*(mol\/kg|mol\/L|nm)$/, "");
   return parseShownNumber(text) ?? Number.NaN;
 }
 
@@ -23,12 +25,17 @@ async function expectNaClNumbers(block: Locator) {
 }
 
 async function waitUntilSaved(page: Page) {
-  await page.waitForFunction(() => document.querySelector('[data-testid="save-status"]')?.getAttribute("data-status") === "saved", null, { timeout: 20_000 });
+  await page.waitForFunction(
+    () =>
+      document.querySelector('[data-testid="save-status"]')?.getAttribute("data-status") ===
+      "saved",
+    null,
+    { timeout: 20_000 },
+  );
 }
 
 describe("an entry with a live solution block", () => {
   const browser = useBrowser();
-
 
   it("creates an entry from the cell-preparation template, computes 0.1 mol/kg NaCl, and shows it again after a reload", async () => {
     const page = await browser.context.newPage();

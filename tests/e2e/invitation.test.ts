@@ -7,7 +7,6 @@ const admin = DEMO_LABS[1].members.find((m) => m.role === "admin")!;
 describe("inviting a member through the mail catcher", () => {
   const browser = useBrowser();
 
-
   it("admin invites, the invitee follows the mailed link, sets a password and signs in; the link then stops working", async () => {
     const email = `e2e.newcomer.${Date.now()}@ridgeback.example`;
     const page = await browser.context.newPage();
@@ -15,7 +14,10 @@ describe("inviting a member through the mail catcher", () => {
     await page.getByTestId("current-user").waitFor();
     await page.goto(`${BASE_URL}/lab`);
     await page.getByRole("form", { name: "Invite a member" }).getByLabel("E-mail").fill(email);
-    await page.getByRole("form", { name: "Invite a member" }).getByLabel("Role", { exact: true }).selectOption("researcher");
+    await page
+      .getByRole("form", { name: "Invite a member" })
+      .getByLabel("Role", { exact: true })
+      .selectOption("researcher");
     await page.getByRole("button", { name: "Send invitation" }).click();
     await page.getByText(`Invitation sent to ${email}.`).waitFor();
 

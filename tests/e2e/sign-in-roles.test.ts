@@ -44,7 +44,10 @@ describe("signing in as each demo role", () => {
       await signIn(page, member.email, DEMO_PASSWORD);
       await page.getByTestId("current-role").waitFor();
       expect(await page.getByTestId("current-role").textContent()).toBe(role);
-      const links = await page.getByRole("navigation", { name: "Main" }).getByRole("link").allTextContents();
+      const links = await page
+        .getByRole("navigation", { name: "Main" })
+        .getByRole("link")
+        .allTextContents();
       expect(links.map((l) => l.replace(/\d+$/, "").trim())).toEqual(EXPECTED_NAV[role]);
       await screenshot(page, `bench-${role}`);
       await page.getByRole("button", { name: "Sign out" }).click();

@@ -9,7 +9,8 @@ import { parseShownNumber } from "@/lib/ui/format-number";
 afterEach(cleanup);
 beforeAll(preloadBlockPanels, 60000);
 
-const volts = (element: HTMLElement) => Number((element.textContent ?? "").replace("−", "-").replace(/[^\d.+-]/g, ""));
+const volts = (element: HTMLElement) =>
+  Number((element.textContent ?? "").replace("−", "-").replace(/[^\d.+-]/g, ""));
 
 /** Activity as the ion table shows it, e.g. "2.217 × 10⁻⁴". */
 function shownActivity(row: HTMLElement): number {
@@ -23,15 +24,27 @@ function shownActivity(row: HTMLElement): number {
 describe("cell block", () => {
   it("shows the couple's equilibrium potential at the linked solution's activities, vs the reference and vs SHE", async () => {
     render(<NotebookEditor initialContent={findTemplate("cell-preparation")!.build()} />);
-    const cell = await screen.findByRole("region", { name: "Cell block Cell 1" }, { timeout: 10000 });
-    const solution = screen.getByRole("region", { name: "Solution block Supporting electrolyte A" });
-    expect(within(cell).getByRole("combobox", { name: "Electrolyte" })).toHaveDisplayValue("Supporting electrolyte A");
+    const cell = await screen.findByRole(
+      "region",
+      { name: "Cell block Cell 1" },
+      { timeout: 10000 },
+    );
+    const solution = screen.getByRole("region", {
+      name: "Solution block Supporting electrolyte A",
+    });
+    expect(within(cell).getByRole("combobox", { name: "Electrolyte" })).toHaveDisplayValue(
+      "Supporting electrolyte A",
+    );
 
     const vsShe = volts(await within(cell).findByTestId("potential-vs-she"));
     const vsRef = volts(within(cell).getByTestId("potential-vs-reference"));
     const ions = within(solution).getByRole("table", { name: "Ions" });
-    const aOx = shownActivity(within(ions).getByRole("rowheader", { name: "Fe(CN)6^3-" }).closest("tr")!);
-    const aRed = shownActivity(within(ions).getByRole("rowheader", { name: "Fe(CN)6^4-" }).closest("tr")!);
+    const aOx = shownActivity(
+      within(ions).getByRole("rowheader", { name: "Fe(CN)6^3-" }).closest("tr")!,
+    );
+    const aRed = shownActivity(
+      within(ions).getByRole("rowheader", { name: "Fe(CN)6^4-" }).closest("tr")!,
+    );
     // Nernst: E = E° − (RT ln10/F) log10(a_red/a_ox), E° = +0.358 V (CRC Handbook, 92nd ed.,
     // Electrochemical Series) and RT ln10/F = 0.05916 V at 25 °C (CODATA constants).
     expect(vsShe).toBeCloseTo(0.358 - 0.05916 * Math.log10(aRed / aOx), 3);
@@ -44,11 +57,20 @@ describe("cell block", () => {
   it("follows a change of reference electrode and says when the electrolyte link is missing", async () => {
     const user = userEvent.setup();
     render(<NotebookEditor initialContent={findTemplate("cell-preparation")!.build()} />);
-    const cell = await screen.findByRole("region", { name: "Cell block Cell 1" }, { timeout: 10000 });
+    const cell = await screen.findByRole(
+      "region",
+      { name: "Cell block Cell 1" },
+      { timeout: 10000 },
+    );
     const vsShe = volts(await within(cell).findByTestId("potential-vs-she"));
     await user.selectOptions(within(cell).getByRole("combobox", { name: "Type" }), "SCE");
     // SCE is +0.2412 V vs SHE at 25 °C (Bard & Faulkner, 2nd ed.).
-    await waitFor(() => expect(vsShe - volts(within(cell).getByTestId("potential-vs-reference"))).toBeCloseTo(0.2412, 3));
+    await waitFor(() =>
+      expect(vsShe - volts(within(cell).getByTestId("potential-vs-reference"))).toBeCloseTo(
+        0.2412,
+        3,
+      ),
+    );
 
     await user.selectOptions(within(cell).getByRole("combobox", { name: "Electrolyte" }), "");
     expect(within(cell).queryByTestId("potential-vs-she")).not.toBeInTheDocument();

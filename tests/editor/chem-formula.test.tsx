@@ -4,7 +4,8 @@ import { ChemFormula } from "@/lib/ui/chem-formula";
 
 afterEach(cleanup);
 
-const html = (formula: string) => render(<ChemFormula formula={formula} />).container.querySelector("[aria-hidden]")!.innerHTML;
+const html = (formula: string) =>
+  render(<ChemFormula formula={formula} />).container.querySelector("[aria-hidden]")!.innerHTML;
 
 describe("ChemFormula", () => {
   it.each([

@@ -4,7 +4,12 @@ import { computeSolution } from "@/lib/chem";
 import { computeGammaCurves } from "@/editor/solution-block/gamma-curves";
 
 const input = (molality: number, model = "davies") =>
-  ({ temperatureC: 25, solvent: "water", model, components: [{ formula: "NaCl", amount: molality, unit: "mol/kg" }] }) as Parameters<typeof computeSolution>[0];
+  ({
+    temperatureC: 25,
+    solvent: "water",
+    model,
+    components: [{ formula: "NaCl", amount: molality, unit: "mol/kg" }],
+  }) as Parameters<typeof computeSolution>[0];
 
 describe("γ± against √I curves", () => {
   const own = input(1, "auto");
@@ -32,7 +37,9 @@ describe("γ± against √I curves", () => {
   it("moves a model to its dashed series beyond its stated range", () => {
     // Davies is used up to I ≈ 0.5 mol/kg (common practice; lib/chem states the same range).
     const inside = curves.points.filter((p) => p.davies !== undefined).map((p) => p.sqrtI ** 2);
-    const outside = curves.points.filter((p) => p["davies:outside"] !== undefined).map((p) => p.sqrtI ** 2);
+    const outside = curves.points
+      .filter((p) => p["davies:outside"] !== undefined)
+      .map((p) => p.sqrtI ** 2);
     expect(Math.max(...inside)).toBeLessThanOrEqual(0.5 + 1e-9);
     expect(Math.min(...outside.filter((i) => i > 0.5))).toBeGreaterThan(0.5);
     expect(outside.length).toBeGreaterThan(0);

@@ -24,7 +24,10 @@ async function mountEditor(props: Partial<Parameters<typeof NotebookEditor>[0]> 
 }
 
 function marksIn(doc: JSONContent): { type: string; attrs?: Record<string, unknown> }[] {
-  return [...(doc.marks ?? []), ...(doc.content ?? []).flatMap(marksIn)] as { type: string; attrs?: Record<string, unknown> }[];
+  return [...(doc.marks ?? []), ...(doc.content ?? []).flatMap(marksIn)] as {
+    type: string;
+    attrs?: Record<string, unknown>;
+  }[];
 }
 function typesIn(doc: JSONContent): string[] {
   return [doc.type ?? "", ...(doc.content ?? []).flatMap(typesIn)];
@@ -33,7 +36,16 @@ function typesIn(doc: JSONContent): string[] {
 describe("NotebookEditor", () => {
   it("shows the initial content and the toolbar", async () => {
     await mountEditor({
-      initialContent: { type: "doc", content: [{ type: "heading", attrs: { level: 1 }, content: [{ type: "text", text: "Cyclic voltammetry, day 3" }] }] },
+      initialContent: {
+        type: "doc",
+        content: [
+          {
+            type: "heading",
+            attrs: { level: 1 },
+            content: [{ type: "text", text: "Cyclic voltammetry, day 3" }],
+          },
+        ],
+      },
     });
     expect(await screen.findByText("Cyclic voltammetry, day 3")).toBeInTheDocument();
     expect(screen.getByRole("toolbar", { name: "Entry formatting" })).toBeInTheDocument();
@@ -55,18 +67,40 @@ describe("NotebookEditor", () => {
     act(() => {
       editor
         .chain()
-        .setContent("<h2>Setup</h2><p>text <strong>b</strong> <em>i</em> <s>s</s> <u>u</u> <code>c</code></p>")
+        .setContent(
+          "<h2>Setup</h2><p>text <strong>b</strong> <em>i</em> <s>s</s> <u>u</u> <code>c</code></p>",
+        )
         .focus("end")
-        .insertContent("<blockquote><p>quoted</p></blockquote><ol start=\"3\"><li><p>three</p></li></ol><ul><li><p>dot</p></li></ul><pre><code class=\"language-python\">print(1)</code></pre><hr>")
+        .insertContent(
+          '<blockquote><p>quoted</p></blockquote><ol start="3"><li><p>three</p></li></ol><ul><li><p>dot</p></li></ul><pre><code class="language-python">print(1)</code></pre><hr>',
+        )
         .run();
       editor.chain().focus("end").insertTable({ rows: 2, cols: 2, withHeaderRow: true }).run();
       editor.chain().focus("end").insertContent("<p>task</p>").toggleTaskList().run();
-      editor.chain().focus("end").insertInlineMath({ latex: "E^\\circ" }).insertBlockMath({ latex: "I=\\tfrac12\\sum m_i z_i^2" }).run();
+      editor
+        .chain()
+        .focus("end")
+        .insertInlineMath({ latex: "E^\\circ" })
+        .insertBlockMath({ latex: "I=\\tfrac12\\sum m_i z_i^2" })
+        .run();
       // Two in one chain: the second must land after the first, not replace the selected block.
       editor.chain().focus("end").insertSolutionBlock().insertCellBlock().run();
     });
     const doc = editor.getJSON();
-    for (const type of ["heading", "blockquote", "orderedList", "codeBlock", "horizontalRule", "table", "tableHeader", "taskItem", "inlineMath", "blockMath", "cellBlock", "solutionBlock"]) {
+    for (const type of [
+      "heading",
+      "blockquote",
+      "orderedList",
+      "codeBlock",
+      "horizontalRule",
+      "table",
+      "tableHeader",
+      "taskItem",
+      "inlineMath",
+      "blockMath",
+      "cellBlock",
+      "solutionBlock",
+    ]) {
       expect(typesIn(doc)).toContain(type);
     }
     // A new cell block links to the entry's last solution block.
@@ -79,7 +113,12 @@ describe("NotebookEditor", () => {
 
   it("adds a link from the toolbar and refuses a javascript: address", async () => {
     const user = userEvent.setup();
-    const { editor } = await mountEditor({ initialContent: { type: "doc", content: [{ type: "paragraph", content: [{ type: "text", text: "SDS of KCl" }] }] } });
+    const { editor } = await mountEditor({
+      initialContent: {
+        type: "doc",
+        content: [{ type: "paragraph", content: [{ type: "text", text: "SDS of KCl" }] }],
+      },
+    });
     act(() => {
       editor.commands.setTextSelection({ from: 1, to: 4 });
     });
@@ -90,7 +129,9 @@ describe("NotebookEditor", () => {
     expect(screen.getByText(/Only http, https and mailto/)).toBeInTheDocument();
     await user.clear(address);
     await user.type(address, "example.org/kcl-sds{Enter}");
-    const hrefs = marksIn(editor.getJSON()).filter((m) => m.type === "link").map((m) => m.attrs?.href);
+    const hrefs = marksIn(editor.getJSON())
+      .filter((m) => m.type === "link")
+      .map((m) => m.attrs?.href);
     expect(hrefs).toEqual(["https://example.org/kcl-sds"]);
   });
 
@@ -120,7 +161,9 @@ describe("NotebookEditor", () => {
       );
     });
     const doc = editor.getJSON();
-    const hrefs = marksIn(doc).filter((m) => m.type === "link").map((m) => m.attrs?.href);
+    const hrefs = marksIn(doc)
+      .filter((m) => m.type === "link")
+      .map((m) => m.attrs?.href);
     expect(hrefs).toEqual(["https://example.org/sds"]);
     expect(JSON.stringify(doc)).not.toMatch(/alert/);
     expect(typesIn(doc)).not.toContain("image");
@@ -137,7 +180,10 @@ describe("NotebookEditor", () => {
     act(() => {
       editor.commands.insertContentAt(editor.state.doc.content.size, original);
     });
-    const ids = editor.getJSON().content!.filter((n) => n.type === "solutionBlock").map((n) => n.attrs!.blockId);
+    const ids = editor
+      .getJSON()
+      .content!.filter((n) => n.type === "solutionBlock")
+      .map((n) => n.attrs!.blockId);
     expect(ids).toHaveLength(2);
     expect(new Set(ids).size).toBe(2);
     expect(ids).toContain(original.attrs!.blockId);
@@ -145,20 +191,25 @@ describe("NotebookEditor", () => {
 });
 
 describe("templates in the editor", () => {
-  it.each(["cell-preparation", "electrolyte-stock"])("round-trips %s with its block inputs unchanged", async (id) => {
-    const template = findTemplate(id)!.build();
-    const { editor } = await mountEditor({ initialContent: template });
-    const doc = editor.getJSON();
-    const parsed = entryDocumentSchema.safeParse(doc);
-    expect(parsed.success ? [] : describeDocumentErrors(parsed.error)).toEqual([]);
-    expect(extractSolutionBlocks(doc)).toEqual(extractSolutionBlocks(template));
-    expect(extractCellBlocks(doc)).toEqual(extractCellBlocks(template));
-  });
+  it.each(["cell-preparation", "electrolyte-stock"])(
+    "round-trips %s with its block inputs unchanged",
+    async (id) => {
+      const template = findTemplate(id)!.build();
+      const { editor } = await mountEditor({ initialContent: template });
+      const doc = editor.getJSON();
+      const parsed = entryDocumentSchema.safeParse(doc);
+      expect(parsed.success ? [] : describeDocumentErrors(parsed.error)).toEqual([]);
+      expect(extractSolutionBlocks(doc)).toEqual(extractSolutionBlocks(template));
+      expect(extractCellBlocks(doc)).toEqual(extractCellBlocks(template));
+    },
+  );
 });
 
 describe("copy and paste of live blocks", () => {
   it("keeps a copied solution block's inputs through the clipboard and gives the copy a new id", async () => {
-    const { editor } = await mountEditor({ initialContent: findTemplate("electrolyte-stock")!.build() });
+    const { editor } = await mountEditor({
+      initialContent: findTemplate("electrolyte-stock")!.build(),
+    });
     const original = editor.getJSON().content!.find((n) => n.type === "solutionBlock")!;
     let clipboardHtml = "";
     editor.state.doc.descendants((node, pos) => {
@@ -181,9 +232,20 @@ describe("copy and paste of live blocks", () => {
 
   it("refuses smuggled attributes in a pasted block", async () => {
     const { editor } = await mountEditor();
-    const forged = JSON.stringify({ blockId: "forged-id-1", name: "x", solvent: "water", temperatureC: 25, model: "auto", components: [], computedIonicStrength: 99 });
+    const forged = JSON.stringify({
+      blockId: "forged-id-1",
+      name: "x",
+      solvent: "water",
+      temperatureC: 25,
+      model: "auto",
+      components: [],
+      computedIonicStrength: 99,
+    });
     act(() => {
-      editor.view.pasteHTML(`<div data-type="solution-block" data-block='${forged.replace(/'/g, "&#39;")}'></div>`, pasteEvent());
+      editor.view.pasteHTML(
+        `<div data-type="solution-block" data-block='${forged.replace(/'/g, "&#39;")}'></div>`,
+        pasteEvent(),
+      );
     });
     const block = editor.getJSON().content!.find((n) => n.type === "solutionBlock")!;
     expect(block.attrs).not.toHaveProperty("computedIonicStrength");
@@ -194,9 +256,20 @@ describe("copy and paste of live blocks", () => {
 
 describe("read-only", () => {
   it("shows the blocks' numbers with every input disabled", async () => {
-    render(<NotebookEditor initialContent={findTemplate("cell-preparation")!.build()} editable={false} />);
-    const solution = await screen.findByRole("region", { name: /Solution block/ }, { timeout: 10000 });
-    expect(within(solution).getByTestId("result-Ionic strength (molal)")).toHaveTextContent(/mol\/kg/);
+    render(
+      <NotebookEditor
+        initialContent={findTemplate("cell-preparation")!.build()}
+        editable={false}
+      />,
+    );
+    const solution = await screen.findByRole(
+      "region",
+      { name: /Solution block/ },
+      { timeout: 10000 },
+    );
+    expect(within(solution).getByTestId("result-Ionic strength (molal)")).toHaveTextContent(
+      /mol\/kg/,
+    );
     for (const input of within(solution).getAllByRole("textbox")) expect(input).toBeDisabled();
     expect(within(solution).queryByRole("button", { name: /Remove row/ })).not.toBeInTheDocument();
     const cell = screen.getByRole("region", { name: /Cell block/ });

@@ -17,5 +17,8 @@ if (typeof Range !== "undefined" && !Range.prototype.getClientRects) {
  * first `findBy…` does not spend its whole timeout transforming lib/chem.
  */
 export async function preloadBlockPanels() {
-  await Promise.all([import("@/editor/solution-block/solution-block-panel"), import("@/editor/cell-block/cell-block-panel")]);
+  await Promise.all([
+    import("@/editor/solution-block/solution-block-panel"),
+    import("@/editor/cell-block/cell-block-panel"),
+  ]);
 }

@@ -13,13 +13,25 @@ beforeAll(preloadBlockPanels, 60000);
 
 const docWith = (attrs: object): JSONContent => ({
   type: "doc",
-  content: [{ type: "paragraph", content: [{ type: "text", text: "Background electrolyte for the CV series." }] }, { type: "solutionBlock", attrs }],
+  content: [
+    {
+      type: "paragraph",
+      content: [{ type: "text", text: "Background electrolyte for the CV series." }],
+    },
+    { type: "solutionBlock", attrs },
+  ],
 });
 
 async function mount(attrs: object) {
   let editor: Editor | undefined;
   const onChange = vi.fn<(doc: JSONContent) => void>();
-  render(<NotebookEditor initialContent={docWith(attrs)} onChange={onChange} onEditorReady={(e) => (editor = e)} />);
+  render(
+    <NotebookEditor
+      initialContent={docWith(attrs)}
+      onChange={onChange}
+      onEditorReady={(e) => (editor = e)}
+    />,
+  );
   const block = await screen.findByRole("region", { name: /Solution block/ }, { timeout: 10000 });
   await waitFor(() => expect(editor).toBeDefined());
   return { block, onChange, editor: editor as Editor };
@@ -27,19 +39,32 @@ async function mount(attrs: object) {
 
 /** Reads a number as the block shows it ("0.1000", "1.000 × 10⁻³"), for comparison. */
 function shownNumber(element: HTMLElement): number {
-  const text = (element.textContent ?? "").replace(/^.*=\s*/, "").replace(/\s*(mol\/kg|mol\/L|nm)$/, "");
+  const text = (element.textContent ?? "")
+    .replace(/^.*=\s*/, "")
+    .replace(/\s*(mol\/kg|mol\/L|nm)$/, "");
   return parseShownNumber(text) ?? Number.NaN;
 }
 
 const nacl = (amount: number) =>
-  defaultSolutionBlockInput({ name: "Supporting electrolyte A", model: "davies", components: [{ formula: "NaCl", amount, unit: "mol/kg" }] });
+  defaultSolutionBlockInput({
+    name: "Supporting electrolyte A",
+    model: "davies",
+    components: [{ formula: "NaCl", amount, unit: "mol/kg" }],
+  });
 
 describe("solution block", () => {
   it("turns a weighed hydrate into molarity with its molar mass as weighed", async () => {
     const { block } = await mount(
-      defaultSolutionBlockInput({ name: "Copper stock", components: [{ formula: "CuSO4·5H2O", amount: 1.2484, unit: "g", perAmount: 50, perUnit: "mL" }] }),
+      defaultSolutionBlockInput({
+        name: "Copper stock",
+        components: [
+          { formula: "CuSO4·5H2O", amount: 1.2484, unit: "g", perAmount: 50, perUnit: "mL" },
+        ],
+      }),
     );
-    const row = within(within(block).getByRole("table", { name: "Per component" })).getAllByRole("row")[1];
+    const row = within(within(block).getByRole("table", { name: "Per component" })).getAllByRole(
+      "row",
+    )[1];
     const cells = within(row).getAllByRole("cell");
     // M(CuSO4·5H2O) = 249.68 g/mol from IUPAC 2021 standard atomic weights (CIAAW);
     // 1.2484 g in 50 mL is then 0.1000 mol/L.
@@ -88,16 +113,25 @@ describe("solution block", () => {
     await user.type(second, "-0.05");
     await waitFor(() => expect(second).toHaveAttribute("aria-invalid", "true"));
     expect(second).toHaveAccessibleDescription(/negative/i);
-    expect(within(block).getByRole("textbox", { name: "Amount, row 1" })).not.toHaveAttribute("aria-invalid");
-    expect(within(block).getByText(/Results paused until the amount in row 2 is corrected/)).toBeInTheDocument();
+    expect(within(block).getByRole("textbox", { name: "Amount, row 1" })).not.toHaveAttribute(
+      "aria-invalid",
+    );
+    expect(
+      within(block).getByText(/Results paused until the amount in row 2 is corrected/),
+    ).toBeInTheDocument();
     // Hazard notes and the general caution stay visible while the input is refused.
-    expect(within(block).getByRole("region", { name: "Hazard notes" })).toHaveTextContent(/perchlorate/i);
+    expect(within(block).getByRole("region", { name: "Hazard notes" })).toHaveTextContent(
+      /perchlorate/i,
+    );
     expect(within(block).getByText(/safety data sheet/i)).toBeInTheDocument();
     // Correcting the field brings the results back.
     await user.clear(second);
     await user.type(second, "0.05");
     await waitFor(() => expect(second).not.toHaveAttribute("aria-invalid"));
-    expect(shownNumber(within(block).getByTestId("result-Ionic strength (molal)"))).toBeCloseTo(0.15, 6);
+    expect(shownNumber(within(block).getByTestId("result-Ionic strength (molal)"))).toBeCloseTo(
+      0.15,
+      6,
+    );
   });
 
   it("marks a temperature outside water's range on the temperature field", async () => {
@@ -117,13 +151,19 @@ describe("solution block", () => {
     const species2 = await within(block).findByRole("combobox", { name: "Species, row 2" });
     await waitFor(() => expect(species2).toHaveFocus());
     await user.keyboard("{Control>}{Backspace}{/Control}");
-    await waitFor(() => expect(within(block).queryByRole("combobox", { name: "Species, row 2" })).not.toBeInTheDocument());
+    await waitFor(() =>
+      expect(
+        within(block).queryByRole("combobox", { name: "Species, row 2" }),
+      ).not.toBeInTheDocument(),
+    );
     expect(within(block).getByRole("combobox", { name: "Species, row 1" })).toHaveFocus();
   });
 
   it("offers catalogue species by formula and by name", async () => {
     const user = userEvent.setup();
-    const { block } = await mount(defaultSolutionBlockInput({ components: [{ formula: "", amount: null, unit: "mol/kg" }] }));
+    const { block } = await mount(
+      defaultSolutionBlockInput({ components: [{ formula: "", amount: null, unit: "mol/kg" }] }),
+    );
     const species = within(block).getByRole("combobox", { name: "Species, row 1" });
     await user.type(species, "potassium chlo");
     const list = await within(block).findByRole("listbox");

@@ -7,7 +7,9 @@ import { sha256Hex } from "@/lib/entries/sha256";
 describe("sha256Hex", () => {
   it("matches the FIPS 180-2 example digests", () => {
     // FIPS 180-2, Appendix B.1 and B.2.
-    expect(sha256Hex("abc")).toBe("ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad");
+    expect(sha256Hex("abc")).toBe(
+      "ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad",
+    );
     expect(sha256Hex("abcdbcdecdefdefgefghfghighijhijkijkljklmklmnlmnomnopnopq")).toBe(
       "248d6a61d20638b8e5c026930c3e6039a33ce45964ff2167f6ecedd419db06c1",
     );
@@ -23,8 +25,14 @@ describe("sha256Hex", () => {
 });
 
 describe("canonicalHash", () => {
-  const a = { type: "doc", content: [{ type: "paragraph", attrs: { b: 1, a: [2, { y: 1, x: 0 }] } }] };
-  const b = { content: [{ attrs: { a: [2, { x: 0, y: 1 }], b: 1 }, type: "paragraph" }], type: "doc" };
+  const a = {
+    type: "doc",
+    content: [{ type: "paragraph", attrs: { b: 1, a: [2, { y: 1, x: 0 }] } }],
+  };
+  const b = {
+    content: [{ attrs: { a: [2, { x: 0, y: 1 }], b: 1 }, type: "paragraph" }],
+    type: "doc",
+  };
 
   it("is stable under key order", () => {
     expect(canonicalJson(a)).toBe(canonicalJson(b));
@@ -33,7 +41,9 @@ describe("canonicalHash", () => {
   });
 
   it("sorts keys and drops undefined, like JSON without whitespace", () => {
-    expect(canonicalJson({ z: 1, a: undefined, m: [undefined, "q"] })).toBe('{"m":[null,"q"],"z":1}');
+    expect(canonicalJson({ z: 1, a: undefined, m: [undefined, "q"] })).toBe(
+      '{"m":[null,"q"],"z":1}',
+    );
   });
 
   it("changes when content changes, including array order", () => {

@@ -8,22 +8,49 @@ import { evaluateSolutionBlock } from "@/lib/entries/evaluate-solution-block";
 describe("units offered by the solution block", () => {
   it.each(AMOUNT_UNITS)("lib/chem accepts %s", (unit) => {
     const needsPer = UNITS_NEEDING_PER.includes(unit);
-    const amount = unit === "mass fraction" ? 0.005 : unit === "wt%" ? 0.5 : unit === "g/L" ? 7.455 : needsPer ? (unit === "mg" ? 745.5 : 0.7455) : 0.1;
+    const amount =
+      unit === "mass fraction"
+        ? 0.005
+        : unit === "wt%"
+          ? 0.5
+          : unit === "g/L"
+            ? 7.455
+            : needsPer
+              ? unit === "mg"
+                ? 745.5
+                : 0.7455
+              : 0.1;
     const evaluation = evaluateSolutionBlock(
-      defaultSolutionBlockInput({ components: [{ formula: "KCl", amount, unit, ...(needsPer ? { perAmount: 100, perUnit: "mL" as const } : {}) }] }),
+      defaultSolutionBlockInput({
+        components: [
+          {
+            formula: "KCl",
+            amount,
+            unit,
+            ...(needsPer ? { perAmount: 100, perUnit: "mL" as const } : {}),
+          },
+        ],
+      }),
     );
     expect(evaluation.status === "ok" ? "ok" : evaluation).toBe("ok");
   });
 
   it.each(PER_UNITS)("lib/chem accepts a basis in %s", (perUnit) => {
     const perAmount = perUnit === "kg" || perUnit === "L" ? 0.1 : 100;
-    const evaluation = evaluateSolutionBlock(defaultSolutionBlockInput({ components: [{ formula: "KCl", amount: 0.7455, unit: "g", perAmount, perUnit }] }));
+    const evaluation = evaluateSolutionBlock(
+      defaultSolutionBlockInput({
+        components: [{ formula: "KCl", amount: 0.7455, unit: "g", perAmount, perUnit }],
+      }),
+    );
     expect(evaluation.status === "ok" ? "ok" : evaluation).toBe("ok");
   });
 
   it("reads 7.455 g/L of KCl as 0.1 mol/L (M(KCl) = 74.55 g/mol, IUPAC 2021 atomic weights)", () => {
-    const evaluation = evaluateSolutionBlock(defaultSolutionBlockInput({ components: [{ formula: "KCl", amount: 7.455, unit: "g/L" }] }));
+    const evaluation = evaluateSolutionBlock(
+      defaultSolutionBlockInput({ components: [{ formula: "KCl", amount: 7.455, unit: "g/L" }] }),
+    );
     expect(evaluation.status).toBe("ok");
-    if (evaluation.status === "ok") expect(evaluation.result.ionicStrength.molar).toBeCloseTo(0.1, 4);
+    if (evaluation.status === "ok")
+      expect(evaluation.result.ionicStrength.molar).toBeCloseTo(0.1, 4);
   });
 });

@@ -17,13 +17,21 @@ describe("demo scenario seed", () => {
     expect(again.skipped.sort()).toEqual(DEMO_LABS.map((l) => l.slug).sort());
 
     for (const lab of DEMO_LABS) {
-      expect(new Set(lab.members.map((m) => m.role))).toEqual(new Set(["admin", "supervisor", "researcher"]));
-      const signIn = await verifyCredentials(getDb(), { email: lab.members[0].email, password: DEMO_PASSWORD });
+      expect(new Set(lab.members.map((m) => m.role))).toEqual(
+        new Set(["admin", "supervisor", "researcher"]),
+      );
+      const signIn = await verifyCredentials(getDb(), {
+        email: lab.members[0].email,
+        password: DEMO_PASSWORD,
+      });
       expect(signIn.kind).toBe("ok");
       const [row] = await getDb().select().from(labs).where(eq(labs.slug, lab.slug));
       const labEntries = await getDb().select().from(entries).where(eq(entries.labId, row.id));
       expect(labEntries.length).toBeGreaterThan(0);
-      const labSolutions = await getDb().select().from(solutions).where(eq(solutions.labId, row.id));
+      const labSolutions = await getDb()
+        .select()
+        .from(solutions)
+        .where(eq(solutions.labId, row.id));
       expect(labSolutions.length).toBeGreaterThan(0);
     }
   });

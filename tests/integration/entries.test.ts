@@ -27,7 +27,10 @@ const nacl = (molality: number) =>
 const docWith = (...nodes: unknown[]) => ({ type: "doc", content: nodes });
 
 async function errorOf(promise: Promise<unknown>): Promise<AppError> {
-  const e = await promise.then(() => null, (x: unknown) => x);
+  const e = await promise.then(
+    () => null,
+    (x: unknown) => x,
+  );
   expect(e).toBeInstanceOf(AppError);
   return e as AppError;
 }
@@ -41,42 +44,106 @@ describe("entries, revisions and server-computed solutions", () => {
     const { members, lab } = await createLabWithMembers(["admin", "supervisor", "researcher"]);
     researcher = members.researcher;
     supervisor = members.supervisor;
-    projectId = (await insertProject(getDb(), { labId: lab.id, name: "Chloride series", createdById: researcher.userId })).id;
+    projectId = (
+      await insertProject(getDb(), {
+        labId: lab.id,
+        name: "Chloride series",
+        createdById: researcher.userId,
+      })
+    ).id;
   });
 
   it("saves a first revision, and each changed save adds one; an unchanged save writes nothing", async () => {
     const { id } = await createEntry(researcher, { projectId, title: "Blank start" });
-    const first = await saveEntryContent(researcher, id, { baseRevision: 0, title: "Blank start", content: docWith(paragraph("Rinsed the cell.")) });
+    const first = await saveEntryContent(researcher, id, {
+      baseRevision: 0,
+      title: "Blank start",
+      content: docWith(paragraph("Rinsed the cell.")),
+    });
     expect(first).toMatchObject({ revision: 1, created: true });
-    const same = await saveEntryContent(researcher, id, { baseRevision: 1, title: "Blank start", content: docWith(paragraph("Rinsed the cell.")) });
+    const same = await saveEntryContent(researcher, id, {
+      baseRevision: 1,
+      title: "Blank start",
+      content: docWith(paragraph("Rinsed the cell.")),
+    });
     expect(same).toMatchObject({ revision: 1, created: false });
-    const second = await saveEntryContent(researcher, id, { baseRevision: 1, title: "Blank start", content: docWith(paragraph("Rinsed the cell twice.")) });
+    const second = await saveEntryContent(researcher, id, {
+      baseRevision: 1,
+      title: "Blank start",
+      content: docWith(paragraph("Rinsed the cell twice.")),
+    });
     expect(second.revision).toBe(2);
     const history = await getRevisionHistory(researcher, id);
     expect(history.map((r) => r.number)).toEqual([2, 1]);
     expect(history[0].changes).toEqual(["Text: +1 word"]);
     expect(history[1].changes).toEqual(["First saved version"]);
-    expect(history[0].contentHash).toBe(canonicalHash({ title: "Blank start", content: docWith(paragraph("Rinsed the cell twice.")) }));
+    expect(history[0].contentHash).toBe(
+      canonicalHash({
+        title: "Blank start",
+        content: docWith(paragraph("Rinsed the cell twice.")),
+      }),
+    );
   });
 
   it("refuses a save against a stale revision with 409 and keeps the newer one", async () => {
     const { id } = await createEntry(researcher, { projectId, title: "Two tabs" });
-    await saveEntryContent(researcher, id, { baseRevision: 0, title: "Two tabs", content: docWith(paragraph("tab A")) });
-    await saveEntryContent(researcher, id, { baseRevision: 1, title: "Two tabs", content: docWith(paragraph("tab A again")) });
-    const conflict = await errorOf(saveEntryContent(researcher, id, { baseRevision: 1, title: "Two tabs", content: docWith(paragraph("tab B")) }));
+    await saveEntryContent(researcher, id, {
+      baseRevision: 0,
+      title: "Two tabs",
+      content: docWith(paragraph("tab A")),
+    });
+    await saveEntryContent(researcher, id, {
+      baseRevision: 1,
+      title: "Two tabs",
+      content: docWith(paragraph("tab A again")),
+    });
+    const conflict = await errorOf(
+      saveEntryContent(researcher, id, {
+        baseRevision: 1,
+        title: "Two tabs",
+        content: docWith(paragraph("tab B")),
+      }),
+    );
     expect(conflict.status).toBe(409);
     expect(conflict.details).toMatchObject({ currentRevision: 2 });
-    expect((await getCurrentContent(researcher, id)).content).toEqual(docWith(paragraph("tab A again")));
+    expect((await getCurrentContent(researcher, id)).content).toEqual(
+      docWith(paragraph("tab A again")),
+    );
   });
 
   it("refuses a document that fails the schema; the previous revision stays intact", async () => {
     const { id } = await createEntry(researcher, { projectId, title: "Bad paste" });
-    await saveEntryContent(researcher, id, { baseRevision: 0, title: "Bad paste", content: docWith(paragraph("good")) });
+    await saveEntryContent(researcher, id, {
+      baseRevision: 0,
+      title: "Bad paste",
+      content: docWith(paragraph("good")),
+    });
     const bad = docWith({ type: "script", content: [{ type: "text", text: "alert(1)" }] });
-    const refused = await errorOf(saveEntryContent(researcher, id, { baseRevision: 1, title: "Bad paste", content: bad }));
+    const refused = await errorOf(
+      saveEntryContent(researcher, id, { baseRevision: 1, title: "Bad paste", content: bad }),
+    );
     expect(refused.status).toBe(422);
-    const badLink = docWith({ type: "paragraph", content: [{ type: "text", text: "x", marks: [{ type: "link", attrs: { href: "javascript:alert(1)" } }] }] });
-    expect((await errorOf(saveEntryContent(researcher, id, { baseRevision: 1, title: "Bad paste", content: badLink }))).status).toBe(422);
+    const badLink = docWith({
+      type: "paragraph",
+      content: [
+        {
+          type: "text",
+          text: "x",
+          marks: [{ type: "link", attrs: { href: "javascript:alert(1)" } }],
+        },
+      ],
+    });
+    expect(
+      (
+        await errorOf(
+          saveEntryContent(researcher, id, {
+            baseRevision: 1,
+            title: "Bad paste",
+            content: badLink,
+          }),
+        )
+      ).status,
+    ).toBe(422);
     const current = await getCurrentContent(researcher, id);
     expect(current.number).toBe(1);
     expect(current.content).toEqual(docWith(paragraph("good")));
@@ -85,19 +152,34 @@ describe("entries, revisions and server-computed solutions", () => {
   it("recomputes every solution block on the server and stores one row per block per revision", async () => {
     const { id } = await createEntry(researcher, { projectId, title: "NaCl 0.1 m" });
     const block = nacl(0.1);
-    const saved = await saveEntryContent(researcher, id, { baseRevision: 0, title: "NaCl 0.1 m", content: docWith(paragraph("Electrolyte:"), { type: "solutionBlock", attrs: block }) });
+    const saved = await saveEntryContent(researcher, id, {
+      baseRevision: 0,
+      title: "NaCl 0.1 m",
+      content: docWith(paragraph("Electrolyte:"), { type: "solutionBlock", attrs: block }),
+    });
     expect(saved.solutions).toBe(1);
     const [revision] = await getDb().select().from(revisions).where(eq(revisions.entryId, id));
-    const rows = await getDb().select().from(solutions).where(eq(solutions.revisionId, revision.id));
+    const rows = await getDb()
+      .select()
+      .from(solutions)
+      .where(eq(solutions.revisionId, revision.id));
     expect(rows).toHaveLength(1);
     // The browser runs the same engine on the same inputs: the stored numbers must equal it.
-    const client = computeSolution({ temperatureC: 25, solvent: "water", model: "auto", components: [{ formula: "NaCl", amount: 0.1, unit: "mol/kg" }] });
+    const client = computeSolution({
+      temperatureC: 25,
+      solvent: "water",
+      model: "auto",
+      components: [{ formula: "NaCl", amount: 0.1, unit: "mol/kg" }],
+    });
     expect(rows[0].ionicStrengthMolal).toBeCloseTo(client.ionicStrength.molal, 12);
     expect(rows[0].ionicStrengthMolal).toBeCloseTo(0.1, 12); // I = ½ Σ m z² = 0.1 for a 1:1 salt (definition)
     expect(rows[0].debyeLengthNm).toBeCloseTo(client.debyeLengthNm ?? NaN, 12);
     expect(rows[0].modelUsed).toBe(client.model.used);
     expect(rows[0].species).toEqual(expect.arrayContaining(["NaCl", "Na+", "Cl-"]));
-    const components = await getDb().select().from(solutionComponents).where(eq(solutionComponents.solutionId, rows[0].id));
+    const components = await getDb()
+      .select()
+      .from(solutionComponents)
+      .where(eq(solutionComponents.solutionId, rows[0].id));
     expect(components).toHaveLength(1);
     expect(components[0].molality).toBeCloseTo(0.1, 12);
   });
@@ -105,14 +187,31 @@ describe("entries, revisions and server-computed solutions", () => {
   it("ignores numbers a client put into the document: only inputs are read", async () => {
     const { id } = await createEntry(researcher, { projectId, title: "Tampered" });
     const tampered = { ...nacl(0.1), ionicStrength: 42 };
-    const refused = await errorOf(saveEntryContent(researcher, id, { baseRevision: 0, title: "Tampered", content: docWith({ type: "solutionBlock", attrs: tampered }) }));
+    const refused = await errorOf(
+      saveEntryContent(researcher, id, {
+        baseRevision: 0,
+        title: "Tampered",
+        content: docWith({ type: "solutionBlock", attrs: tampered }),
+      }),
+    );
     expect(refused.status).toBe(422);
   });
 
   it("records a block the engine refuses, with its message, and still saves the entry", async () => {
     const { id } = await createEntry(researcher, { projectId, title: "Typo" });
-    const bad = defaultSolutionBlockInput({ blockId: "blk-bad-1", name: "Typo", temperatureC: 25, solvent: "water", model: "auto", components: [{ formula: "NaCl", amount: -1, unit: "mol/kg" }] });
-    const saved = await saveEntryContent(researcher, id, { baseRevision: 0, title: "Typo", content: docWith({ type: "solutionBlock", attrs: bad }) });
+    const bad = defaultSolutionBlockInput({
+      blockId: "blk-bad-1",
+      name: "Typo",
+      temperatureC: 25,
+      solvent: "water",
+      model: "auto",
+      components: [{ formula: "NaCl", amount: -1, unit: "mol/kg" }],
+    });
+    const saved = await saveEntryContent(researcher, id, {
+      baseRevision: 0,
+      title: "Typo",
+      content: docWith({ type: "solutionBlock", attrs: bad }),
+    });
     expect(saved.created).toBe(true);
     const [row] = await getDb().select().from(solutions).where(eq(solutions.entryId, id));
     expect(row.ionicStrengthMolal).toBeNull();
@@ -120,7 +219,11 @@ describe("entries, revisions and server-computed solutions", () => {
   });
 
   it("creates an entry from the cell-preparation template with its first revision and solutions", async () => {
-    const { id } = await createEntry(researcher, { projectId, title: "Cu disc run 1", template: "cell-preparation" });
+    const { id } = await createEntry(researcher, {
+      projectId,
+      title: "Cu disc run 1",
+      template: "cell-preparation",
+    });
     const current = await getCurrentContent(researcher, id);
     expect(current.number).toBe(1);
     const rows = await getDb().select().from(solutions).where(eq(solutions.entryId, id));
@@ -129,22 +232,55 @@ describe("entries, revisions and server-computed solutions", () => {
 
   it("lets only the author edit, and locks a submitted entry", async () => {
     const { id } = await createEntry(researcher, { projectId, title: "Mine" });
-    await saveEntryContent(researcher, id, { baseRevision: 0, title: "Mine", content: docWith(paragraph("v1")) });
-    expect((await errorOf(saveEntryContent(supervisor, id, { baseRevision: 1, title: "Mine", content: docWith(paragraph("not yours")) }))).status).toBe(403);
+    await saveEntryContent(researcher, id, {
+      baseRevision: 0,
+      title: "Mine",
+      content: docWith(paragraph("v1")),
+    });
+    expect(
+      (
+        await errorOf(
+          saveEntryContent(supervisor, id, {
+            baseRevision: 1,
+            title: "Mine",
+            content: docWith(paragraph("not yours")),
+          }),
+        )
+      ).status,
+    ).toBe(403);
     await submitEntry(researcher, id);
-    expect((await errorOf(saveEntryContent(researcher, id, { baseRevision: 1, title: "Mine", content: docWith(paragraph("v2")) }))).status).toBe(409);
+    expect(
+      (
+        await errorOf(
+          saveEntryContent(researcher, id, {
+            baseRevision: 1,
+            title: "Mine",
+            content: docWith(paragraph("v2")),
+          }),
+        )
+      ).status,
+    ).toBe(409);
     const mine = await listEntries(researcher, { author: "me", status: "submitted" });
     expect(mine.map((e) => e.id)).toContain(id);
   });
 
   it("the database itself refuses to change or delete a revision", async () => {
     const { id } = await createEntry(researcher, { projectId, title: "Immutable" });
-    await saveEntryContent(researcher, id, { baseRevision: 0, title: "Immutable", content: docWith(paragraph("as written")) });
+    await saveEntryContent(researcher, id, {
+      baseRevision: 0,
+      title: "Immutable",
+      content: docWith(paragraph("as written")),
+    });
     // Drizzle wraps the server's error; PostgreSQL's own message is its cause.
-    const serverMessage = (e: unknown) => String((e as { cause?: Error }).cause?.message ?? (e as Error).message);
-    const update = await getDb().execute(sql`update revisions set title = 'rewritten' where entry_id = ${id}`).then(() => "applied", serverMessage);
+    const serverMessage = (e: unknown) =>
+      String((e as { cause?: Error }).cause?.message ?? (e as Error).message);
+    const update = await getDb()
+      .execute(sql`update revisions set title = 'rewritten' where entry_id = ${id}`)
+      .then(() => "applied", serverMessage);
     expect(update).toMatch(/revisions rows are immutable \(UPDATE refused\)/);
-    const del = await getDb().execute(sql`delete from revisions where entry_id = ${id}`).then(() => "applied", serverMessage);
+    const del = await getDb()
+      .execute(sql`delete from revisions where entry_id = ${id}`)
+      .then(() => "applied", serverMessage);
     expect(del).toMatch(/revisions rows are immutable \(DELETE refused\)/);
   });
 
@@ -152,8 +288,24 @@ describe("entries, revisions and server-computed solutions", () => {
     const { id } = await createEntry(researcher, { projectId, title: "Private to my lab" });
     const other = await createLabWithMembers(["admin", "researcher"]);
     expect((await errorOf(getCurrentContent(other.members.researcher, id))).status).toBe(404);
-    expect((await errorOf(saveEntryContent(other.members.researcher, id, { baseRevision: 0, title: "x", content: docWith(paragraph("x")) }))).status).toBe(404);
+    expect(
+      (
+        await errorOf(
+          saveEntryContent(other.members.researcher, id, {
+            baseRevision: 0,
+            title: "x",
+            content: docWith(paragraph("x")),
+          }),
+        )
+      ).status,
+    ).toBe(404);
     expect((await listEntries(other.members.researcher, {})).map((e) => e.id)).not.toContain(id);
-    expect((await errorOf(createEntry(other.members.researcher, { projectId, title: "Into their project" }))).fieldErrors?.projectId).toBeDefined();
+    expect(
+      (
+        await errorOf(
+          createEntry(other.members.researcher, { projectId, title: "Into their project" }),
+        )
+      ).fieldErrors?.projectId,
+    ).toBeDefined();
   });
 });

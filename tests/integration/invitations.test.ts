@@ -23,8 +23,17 @@ describe("invitations", () => {
     expect(mails[0].subject).toContain(lab.name);
 
     const token = tokenOf(link);
-    expect(await inspectInvitation(token)).toMatchObject({ kind: "open", email, role: "supervisor" });
-    await acceptInvitation({ token, name: "Newcomer Test", password: "glassy-carbon-3", confirmPassword: "glassy-carbon-3" });
+    expect(await inspectInvitation(token)).toMatchObject({
+      kind: "open",
+      email,
+      role: "supervisor",
+    });
+    await acceptInvitation({
+      token,
+      name: "Newcomer Test",
+      password: "glassy-carbon-3",
+      confirmPassword: "glassy-carbon-3",
+    });
     const signedIn = await verifyCredentials(getDb(), { email, password: "glassy-carbon-3" });
     expect(signedIn.kind).toBe("ok");
     if (signedIn.kind === "ok") {
@@ -35,8 +44,16 @@ describe("invitations", () => {
 
   it("refuses a reused link and says why", async () => {
     const { members, tag } = await createLabWithMembers(["admin"]);
-    const { link } = await inviteMember(members.admin, { email: `twice.${tag}@lab.example`, role: "researcher" });
-    const input = { token: tokenOf(link), name: "Twice Test", password: "glassy-carbon-3", confirmPassword: "glassy-carbon-3" };
+    const { link } = await inviteMember(members.admin, {
+      email: `twice.${tag}@lab.example`,
+      role: "researcher",
+    });
+    const input = {
+      token: tokenOf(link),
+      name: "Twice Test",
+      password: "glassy-carbon-3",
+      confirmPassword: "glassy-carbon-3",
+    };
     await acceptInvitation(input);
     const error = await acceptInvitation(input).catch((e: unknown) => e);
     expect(error).toBeInstanceOf(AppError);
@@ -47,20 +64,37 @@ describe("invitations", () => {
 
   it("refuses an expired link and an unknown one", async () => {
     const { members, tag } = await createLabWithMembers(["admin"]);
-    const { link } = await inviteMember(members.admin, { email: `late.${tag}@lab.example`, role: "researcher" });
+    const { link } = await inviteMember(members.admin, {
+      email: `late.${tag}@lab.example`,
+      role: "researcher",
+    });
     const token = tokenOf(link);
-    await getDb().update(invitations).set({ expiresAt: new Date(Date.now() - 1000) }).where(eq(invitations.tokenHash, hashLinkToken(token)));
+    await getDb()
+      .update(invitations)
+      .set({ expiresAt: new Date(Date.now() - 1000) })
+      .where(eq(invitations.tokenHash, hashLinkToken(token)));
     expect(await inspectInvitation(token)).toEqual({ kind: "expired" });
-    const error = await acceptInvitation({ token, name: "Late Test", password: "glassy-carbon-3", confirmPassword: "glassy-carbon-3" }).catch((e: unknown) => e);
+    const error = await acceptInvitation({
+      token,
+      name: "Late Test",
+      password: "glassy-carbon-3",
+      confirmPassword: "glassy-carbon-3",
+    }).catch((e: unknown) => e);
     expect((error as AppError).code).toBe("gone");
     expect(await inspectInvitation("x".repeat(43))).toEqual({ kind: "unknown" });
   });
 
   it("only admins invite, and an address with an account cannot be invited again", async () => {
     const { members } = await createLabWithMembers(["admin", "researcher"]);
-    const forbidden = await inviteMember(members.researcher, { email: "someone@lab.example", role: "admin" }).catch((e: unknown) => e);
+    const forbidden = await inviteMember(members.researcher, {
+      email: "someone@lab.example",
+      role: "admin",
+    }).catch((e: unknown) => e);
     expect((forbidden as AppError).code).toBe("forbidden");
-    const taken = await inviteMember(members.admin, { email: members.researcher.email, role: "researcher" }).catch((e: unknown) => e);
+    const taken = await inviteMember(members.admin, {
+      email: members.researcher.email,
+      role: "researcher",
+    }).catch((e: unknown) => e);
     expect((taken as AppError).code).toBe("conflict");
     expect((taken as AppError).fieldErrors?.email).toBeDefined();
   });
@@ -71,12 +105,18 @@ describe("invitations", () => {
     const first = await inviteMember(members.admin, { email, role: "researcher" });
     const second = await inviteMember(members.admin, { email, role: "supervisor" });
     expect(await inspectInvitation(tokenOf(first.link))).toEqual({ kind: "revoked" });
-    expect(await inspectInvitation(tokenOf(second.link))).toMatchObject({ kind: "open", role: "supervisor" });
+    expect(await inspectInvitation(tokenOf(second.link))).toMatchObject({
+      kind: "open",
+      role: "supervisor",
+    });
   });
 
   it("stores only a hash of the link's token", async () => {
     const { members, tag } = await createLabWithMembers(["admin"]);
-    const { link, invitationId } = await inviteMember(members.admin, { email: `hash.${tag}@lab.example`, role: "researcher" });
+    const { link, invitationId } = await inviteMember(members.admin, {
+      email: `hash.${tag}@lab.example`,
+      role: "researcher",
+    });
     const [row] = await getDb().select().from(invitations).where(eq(invitations.id, invitationId));
     expect(row.tokenHash).toBe(hashLinkToken(tokenOf(link)));
     expect(row.tokenHash).not.toContain(tokenOf(link));

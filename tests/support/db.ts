@@ -19,8 +19,20 @@ export async function createLabWithMembers(roles: Role[] = ["admin", "supervisor
   const members: Record<string, Actor> = {};
   for (const [i, role] of roles.entries()) {
     const email = `${role}${i}.${tag}@lab.example`;
-    const user = await insertUser(db, { labId: lab.id, email, name: `${role} ${i} ${tag}`, role, passwordHash: cachedHash });
-    members[i === roles.indexOf(role) ? role : `${role}${i}`] = { userId: user.id, labId: lab.id, role, name: user.name, email };
+    const user = await insertUser(db, {
+      labId: lab.id,
+      email,
+      name: `${role} ${i} ${tag}`,
+      role,
+      passwordHash: cachedHash,
+    });
+    members[i === roles.indexOf(role) ? role : `${role}${i}`] = {
+      userId: user.id,
+      labId: lab.id,
+      role,
+      name: user.name,
+      email,
+    };
   }
   return { lab, members, tag };
 }

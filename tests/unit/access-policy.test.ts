@@ -17,7 +17,11 @@ describe("role permissions", () => {
   });
 
   it("builds each role's navigation from the same table", () => {
-    expect(navigationFor("researcher").map((i) => i.label)).toEqual(["Bench", "Entries", "Solution finder"]);
+    expect(navigationFor("researcher").map((i) => i.label)).toEqual([
+      "Bench",
+      "Entries",
+      "Solution finder",
+    ]);
     expect(navigationFor("supervisor").map((i) => i.label)).toContain("Review queue");
     expect(navigationFor("admin").map((i) => i.label)).toContain("Lab settings");
   });

@@ -1,5 +1,10 @@
 import { describe, expect, it } from "vitest";
-import { acceptInvitationSchema, changeRoleSchema, inviteMemberSchema, signInSchema } from "@/lib/validation/auth";
+import {
+  acceptInvitationSchema,
+  changeRoleSchema,
+  inviteMemberSchema,
+  signInSchema,
+} from "@/lib/validation/auth";
 import { fieldErrorsFromZod } from "@/lib/errors";
 
 describe("shared auth schemas", () => {
@@ -19,18 +24,42 @@ describe("shared auth schemas", () => {
   });
 
   it("accepts only the three roles for invitations", () => {
-    expect(inviteMemberSchema.safeParse({ email: "a@b.example", role: "supervisor" }).success).toBe(true);
-    expect(inviteMemberSchema.safeParse({ email: "a@b.example", role: "owner" }).success).toBe(false);
+    expect(inviteMemberSchema.safeParse({ email: "a@b.example", role: "supervisor" }).success).toBe(
+      true,
+    );
+    expect(inviteMemberSchema.safeParse({ email: "a@b.example", role: "owner" }).success).toBe(
+      false,
+    );
     expect(changeRoleSchema.safeParse({ userId: "not-a-uuid", role: "admin" }).success).toBe(false);
   });
 
   it("wants a long, mixed password typed twice the same", () => {
     const base = { token: "t".repeat(43), name: "Rowan Test" };
-    expect(acceptInvitationSchema.safeParse({ ...base, password: "short1", confirmPassword: "short1" }).success).toBe(false);
-    expect(acceptInvitationSchema.safeParse({ ...base, password: "onlyletterslong", confirmPassword: "onlyletterslong" }).success).toBe(false);
-    const mismatch = acceptInvitationSchema.safeParse({ ...base, password: "graphite-rod-7", confirmPassword: "graphite-rod-8" });
+    expect(
+      acceptInvitationSchema.safeParse({ ...base, password: "short1", confirmPassword: "short1" })
+        .success,
+    ).toBe(false);
+    expect(
+      acceptInvitationSchema.safeParse({
+        ...base,
+        password: "onlyletterslong",
+        confirmPassword: "onlyletterslong",
+      }).success,
+    ).toBe(false);
+    const mismatch = acceptInvitationSchema.safeParse({
+      ...base,
+      password: "graphite-rod-7",
+      confirmPassword: "graphite-rod-8",
+    });
     expect(mismatch.success).toBe(false);
-    if (!mismatch.success) expect(fieldErrorsFromZod(mismatch.error.issues).confirmPassword).toBeDefined();
-    expect(acceptInvitationSchema.safeParse({ ...base, password: "graphite-rod-7", confirmPassword: "graphite-rod-7" }).success).toBe(true);
+    if (!mismatch.success)
+      expect(fieldErrorsFromZod(mismatch.error.issues).confirmPassword).toBeDefined();
+    expect(
+      acceptInvitationSchema.safeParse({
+        ...base,
+        password: "graphite-rod-7",
+        confirmPassword: "graphite-rod-7",
+      }).success,
+    ).toBe(true);
   });
 });

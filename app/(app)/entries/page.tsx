@@ -14,9 +14,13 @@ export default async function EntriesPage() {
       <div className="flex flex-wrap items-end justify-between gap-4">
         <div>
           <h1 className="text-2xl font-semibold tracking-tight">Entries</h1>
-          <p className="text-sm text-ink-soft">Every page of the lab&apos;s notebook. Click a column to sort.</p>
+          <p className="text-sm text-ink-soft">
+            Every page of the lab&apos;s notebook. Click a column to sort.
+          </p>
         </div>
-        <Link href="/entries/new" className="btn-primary">New entry</Link>
+        <Link href="/entries/new" className="btn-primary">
+          New entry
+        </Link>
       </div>
       <EntryTable projects={projects.map(({ id, name }) => ({ id, name }))} />
     </div>

@@ -29,17 +29,28 @@ export async function changeRoleAction(_prev: ActionState, form: FormData): Prom
   });
 }
 
-export async function setActivationAction(_prev: ActionState, form: FormData): Promise<ActionState> {
+export async function setActivationAction(
+  _prev: ActionState,
+  form: FormData,
+): Promise<ActionState> {
   const values = formDataToObject(form);
   return runAction(async () => {
     const actor = await requireActor();
     const member = await setMemberActivation(actor, values, values.active === "true");
     revalidatePath("/lab");
-    return { ok: true, message: member.active ? `${member.name} can sign in again.` : `${member.name} is deactivated; their entries stay.` };
+    return {
+      ok: true,
+      message: member.active
+        ? `${member.name} can sign in again.`
+        : `${member.name} is deactivated; their entries stay.`,
+    };
   });
 }
 
-export async function withdrawInvitationAction(_prev: ActionState, form: FormData): Promise<ActionState> {
+export async function withdrawInvitationAction(
+  _prev: ActionState,
+  form: FormData,
+): Promise<ActionState> {
   const values = formDataToObject(form);
   return runAction(async () => {
     const actor = await requireActor();

@@ -15,15 +15,26 @@ export const metadata: Metadata = { title: "Lab settings" };
 export default async function LabSettingsPage() {
   const actor = await requireActor();
   if (!roleCan(actor.role, "lab.manage")) notFound();
-  const [members, invitations, audit] = await Promise.all([listMembers(actor), listPendingInvitations(actor), listRecentAudit(actor)]);
+  const [members, invitations, audit] = await Promise.all([
+    listMembers(actor),
+    listPendingInvitations(actor),
+    listRecentAudit(actor),
+  ]);
   return (
     <div className="space-y-8">
       <div className="flex flex-wrap items-end justify-between gap-4">
         <div>
           <h1 className="text-2xl font-semibold tracking-tight">Lab settings</h1>
-          <p className="text-sm text-ink-soft">Members, roles and invitations. Deactivated members cannot sign in; their entries stay in the notebook.</p>
+          <p className="text-sm text-ink-soft">
+            Members, roles and invitations. Deactivated members cannot sign in; their entries stay
+            in the notebook.
+          </p>
         </div>
-        {mailCatcherConfigured() ? <Link href="/lab/mail" className="btn-quiet">Mail catcher inbox</Link> : null}
+        {mailCatcherConfigured() ? (
+          <Link href="/lab/mail" className="btn-quiet">
+            Mail catcher inbox
+          </Link>
+        ) : null}
       </div>
 
       <section className="card p-6">
@@ -33,23 +44,38 @@ export default async function LabSettingsPage() {
           <ul className="mt-5 divide-y divide-ink/5 text-sm" aria-label="Open invitations">
             {invitations.map((i) => (
               <li key={i.id} className="flex justify-between py-2">
-                <span>{i.email} <span className="text-ink-soft">as {i.role}</span></span>
-                <span className="text-xs text-ink-soft">sent by {i.invitedBy}, expires {i.expiresAt.toISOString().slice(0, 10)}</span>
+                <span>
+                  {i.email} <span className="text-ink-soft">as {i.role}</span>
+                </span>
+                <span className="text-xs text-ink-soft">
+                  sent by {i.invitedBy}, expires {i.expiresAt.toISOString().slice(0, 10)}
+                </span>
               </li>
             ))}
           </ul>
         ) : null}
       </section>
 
-      <section className="card overflow-x-auto p-6">
+      <section className="overflow-x-auto card p-6">
         <h2 className="mb-2 text-base font-semibold">Members</h2>
         <table className="w-full text-sm">
-          <thead className="text-left text-xs uppercase tracking-wide text-ink-soft">
-            <tr><th className="py-2">Member</th><th className="py-2">Role</th><th className="py-2">Status</th><th className="py-2 text-right">Access</th></tr>
+          <thead className="text-left text-xs tracking-wide text-ink-soft uppercase">
+            <tr>
+              <th className="py-2">Member</th>
+              <th className="py-2">Role</th>
+              <th className="py-2">Status</th>
+              <th className="py-2 text-right">Access</th>
+            </tr>
           </thead>
           <tbody className="divide-y divide-ink/5">
             {members.map((m) => (
-              <MemberRow key={m.id} member={m} isSelf={m.id === actor.userId} changeRole={changeRoleAction} setActivation={setActivationAction} />
+              <MemberRow
+                key={m.id}
+                member={m}
+                isSelf={m.id === actor.userId}
+                changeRole={changeRoleAction}
+                setActivation={setActivationAction}
+              />
             ))}
           </tbody>
         </table>
@@ -60,8 +86,13 @@ export default async function LabSettingsPage() {
         <ol className="space-y-1.5 text-sm">
           {audit.map((e) => (
             <li key={e.id} className="flex gap-3">
-              <time className="w-36 shrink-0 font-mono text-xs text-ink-soft tabular">{e.at.toISOString().slice(0, 16).replace("T", " ")}</time>
-              <span><strong className="font-medium">{e.actorName ?? "system"}</strong> · {e.action.replace(/[._]/g, " ")}</span>
+              <time className="w-36 shrink-0 font-mono text-xs text-ink-soft tabular">
+                {e.at.toISOString().slice(0, 16).replace("T", " ")}
+              </time>
+              <span>
+                <strong className="font-medium">{e.actorName ?? "system"}</strong> ·{" "}
+                {e.action.replace(/[._]/g, " ")}
+              </span>
             </li>
           ))}
         </ol>

@@ -11,23 +11,46 @@ export const metadata: Metadata = { title: "Review queue" };
 export default async function ReviewQueuePage() {
   const actor = await requireActor();
   if (!roleCan(actor.role, "review.read")) notFound();
-  const submitted = await listEntries(actor, { status: "submitted", sort: "updatedAt", order: "asc" });
+  const submitted = await listEntries(actor, {
+    status: "submitted",
+    sort: "updatedAt",
+    order: "asc",
+  });
   return (
     <div className="space-y-6">
       <div>
         <h1 className="text-2xl font-semibold tracking-tight">Review queue</h1>
-        <p className="text-sm text-ink-soft">Entries submitted for countersignature, oldest first.</p>
+        <p className="text-sm text-ink-soft">
+          Entries submitted for countersignature, oldest first.
+        </p>
       </div>
-      <ul className="card divide-y divide-ink/5" aria-label="Submitted entries">
-        {submitted.length === 0 ? <li className="px-5 py-4 text-sm text-ink-soft">The queue is empty.</li> : null}
+      <ul className="divide-y divide-ink/5 card" aria-label="Submitted entries">
+        {submitted.length === 0 ? (
+          <li className="px-5 py-4 text-sm text-ink-soft">The queue is empty.</li>
+        ) : null}
         {submitted.map((e) => (
-          <li key={e.id} className="flex flex-wrap items-center justify-between gap-3 px-5 py-3 text-sm">
+          <li
+            key={e.id}
+            className="flex flex-wrap items-center justify-between gap-3 px-5 py-3 text-sm"
+          >
             <span>
-              <Link href={`/entries/${e.id}`} className="font-medium hover:text-copper-700 hover:underline">{e.title}</Link>
-              <span className="text-ink-soft"> · {e.authorName} · {e.projectName}</span>
+              <Link
+                href={`/entries/${e.id}`}
+                className="font-medium hover:text-copper-700 hover:underline"
+              >
+                {e.title}
+              </Link>
+              <span className="text-ink-soft">
+                {" "}
+                · {e.authorName} · {e.projectName}
+              </span>
             </span>
             <span className="flex items-center gap-3 text-xs text-ink-soft">
-              submitted revision {e.revision}, {new Date(e.updatedAt).toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "short" })}
+              submitted revision {e.revision},{" "}
+              {new Date(e.updatedAt).toLocaleString("en-GB", {
+                dateStyle: "medium",
+                timeStyle: "short",
+              })}
               <StatusChip status={e.status} />
             </span>
           </li>

@@ -14,7 +14,12 @@ function safeNext(value: string | undefined): string {
 export async function signInAction(_prev: ActionState, form: FormData): Promise<ActionState> {
   const values = formDataToObject(form);
   const parsed = signInSchema.safeParse(values);
-  if (!parsed.success) return { ok: false, fieldErrors: fieldErrorsFromZod(parsed.error.issues), values: { email: values.email ?? "" } };
+  if (!parsed.success)
+    return {
+      ok: false,
+      fieldErrors: fieldErrorsFromZod(parsed.error.issues),
+      values: { email: values.email ?? "" },
+    };
   try {
     await signIn("credentials", { ...parsed.data, redirectTo: safeNext(values.next) });
     return { ok: true };
@@ -22,10 +27,18 @@ export async function signInAction(_prev: ActionState, form: FormData): Promise<
     if (error instanceof CredentialsSignin && error.code.startsWith("throttled")) {
       const seconds = Number(error.code.split(":")[1] ?? 900);
       const minutes = Math.max(1, Math.ceil(seconds / 60));
-      return { ok: false, message: `Too many failed attempts for this address. Try again in ${minutes} minute${minutes === 1 ? "" : "s"}.`, values: { email: parsed.data.email } };
+      return {
+        ok: false,
+        message: `Too many failed attempts for this address. Try again in ${minutes} minute${minutes === 1 ? "" : "s"}.`,
+        values: { email: parsed.data.email },
+      };
     }
     if (error instanceof AuthError) {
-      return { ok: false, message: "That e-mail and password do not match an active account.", values: { email: parsed.data.email } };
+      return {
+        ok: false,
+        message: "That e-mail and password do not match an active account.",
+        values: { email: parsed.data.email },
+      };
     }
     throw error; // NEXT_REDIRECT on success, and real failures, go on to Next.js
   }

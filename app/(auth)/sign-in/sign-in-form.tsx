@@ -13,12 +13,33 @@ export function SignInForm({ next }: { next?: string }) {
       <input type="hidden" name="next" value={next ?? "/"} />
       <FormMessage message={state.message} />
       <Field id="email" label="E-mail" errors={state.fieldErrors?.email}>
-        {(aria) => <input {...aria} name="email" type="email" autoComplete="username" className="input" defaultValue={state.values?.email ?? ""} required />}
+        {(aria) => (
+          <input
+            {...aria}
+            name="email"
+            type="email"
+            autoComplete="username"
+            className="input"
+            defaultValue={state.values?.email ?? ""}
+            required
+          />
+        )}
       </Field>
       <Field id="password" label="Password" errors={state.fieldErrors?.password}>
-        {(aria) => <input {...aria} name="password" type="password" autoComplete="current-password" className="input" required />}
+        {(aria) => (
+          <input
+            {...aria}
+            name="password"
+            type="password"
+            autoComplete="current-password"
+            className="input"
+            required
+          />
+        )}
       </Field>
-      <SubmitButton pendingLabel="Signing in…" className="btn-primary w-full">Sign in</SubmitButton>
+      <SubmitButton pendingLabel="Signing in…" className="btn-primary w-full">
+        Sign in
+      </SubmitButton>
     </form>
   );
 }

@@ -9,6 +9,12 @@ export async function GET() {
     await getDb().execute(sql`select 1`);
     return Response.json({ ok: true });
   } catch {
-    return Response.json({ ok: false, error: { code: "database_unavailable", message: "The database is not reachable." } }, { status: 503 });
+    return Response.json(
+      {
+        ok: false,
+        error: { code: "database_unavailable", message: "The database is not reachable." },
+      },
+      { status: 503 },
+    );
   }
 }

@@ -16,7 +16,11 @@ export const CONVENTION_LIMIT_I: Record<ActivityConvention, number> = {
   ideal: 0.001,
 };
 
-export function log10GammaFactory(convention: ActivityConvention, aLog10: number, ionicStrengthMolal: number): (charge: number) => number {
+export function log10GammaFactory(
+  convention: ActivityConvention,
+  aLog10: number,
+  ionicStrengthMolal: number,
+): (charge: number) => number {
   const I = Math.max(ionicStrengthMolal, 0);
   const s = Math.sqrt(I);
   let unit: number;
@@ -29,6 +33,7 @@ export function log10GammaFactory(convention: ActivityConvention, aLog10: number
 export function describeConvention(convention: ActivityConvention): string {
   if (convention === "bates-guggenheim")
     return "pH = −log10 a(H+); single-ion γ from the Bates–Guggenheim form log γ = −A z²√I/(1 + 1.5√I), the convention of the NIST/IUPAC primary pH standards";
-  if (convention === "davies") return "pH = −log10 a(H+); single-ion γ from the Davies equation (0.3 I term)";
+  if (convention === "davies")
+    return "pH = −log10 a(H+); single-ion γ from the Davies equation (0.3 I term)";
   return "pH = −log10 m(H+) with all γ = 1 (ideal solution)";
 }

@@ -21,7 +21,10 @@ import type { DesignBufferInput, DesignBufferResult, RecipeComponent } from "./t
 function bufferReagent(formula: string, system: AcidSystemData, field: string): BufferReagent {
   const found = requireReagent(formula, field);
   if (found.kind !== "buffer" || !found.reagent.contributes.some((c) => c.system === system.id)) {
-    throw new ChemInputError(`${formula} is not a form of the ${system.name} buffer.`, { field, code: "wrong_reagent" });
+    throw new ChemInputError(`${formula} is not a form of the ${system.name} buffer.`, {
+      field,
+      code: "wrong_reagent",
+    });
   }
   return found.reagent;
 }
@@ -29,25 +32,53 @@ function bufferReagent(formula: string, system: AcidSystemData, field: string): 
 function checkInput(input: DesignBufferInput): AcidSystemData {
   const system = acidSystem(input.buffer);
   if (!system) {
-    throw new ChemInputError(`Unknown buffer "${input.buffer}". Ionleaf designs: ${ACID_SYSTEMS.map((s) => s.id).join(", ")}.`, {
-      field: "buffer",
-      code: "unknown_buffer",
-    });
+    throw new ChemInputError(
+      `Unknown buffer "${input.buffer}". Ionleaf designs: ${ACID_SYSTEMS.map((s) => s.id).join(", ")}.`,
+      {
+        field: "buffer",
+        code: "unknown_buffer",
+      },
+    );
   }
   if (!(Number.isFinite(input.pH) && input.pH >= 0 && input.pH <= 14)) {
-    throw new ChemInputError("Target pH must be between 0 and 14.", { field: "pH", code: "out_of_range" });
+    throw new ChemInputError("Target pH must be between 0 and 14.", {
+      field: "pH",
+      code: "out_of_range",
+    });
   }
-  if (!(Number.isFinite(input.totalConcentrationMolar) && input.totalConcentrationMolar > 0 && input.totalConcentrationMolar <= 2)) {
-    throw new ChemInputError("Buffer concentration must be above 0 and at most 2 mol/L.", { field: "totalConcentrationMolar", code: "out_of_range" });
+  if (!(
+    Number.isFinite(input.totalConcentrationMolar) &&
+    input.totalConcentrationMolar > 0 &&
+    input.totalConcentrationMolar <= 2
+  )) {
+    throw new ChemInputError("Buffer concentration must be above 0 and at most 2 mol/L.", {
+      field: "totalConcentrationMolar",
+      code: "out_of_range",
+    });
   }
   if (!(Number.isFinite(input.volumeMl) && input.volumeMl > 0)) {
-    throw new ChemInputError("Final volume must be a positive number of millilitres.", { field: "volumeMl", code: "invalid_amount" });
+    throw new ChemInputError("Final volume must be a positive number of millilitres.", {
+      field: "volumeMl",
+      code: "invalid_amount",
+    });
   }
-  if (input.targetIonicStrengthMolar !== undefined && !(Number.isFinite(input.targetIonicStrengthMolar) && input.targetIonicStrengthMolar >= 0)) {
-    throw new ChemInputError("Target ionic strength must be a non-negative number (mol/L).", { field: "targetIonicStrengthMolar", code: "invalid_amount" });
+  if (
+    input.targetIonicStrengthMolar !== undefined &&
+    !(Number.isFinite(input.targetIonicStrengthMolar) && input.targetIonicStrengthMolar >= 0)
+  ) {
+    throw new ChemInputError("Target ionic strength must be a non-negative number (mol/L).", {
+      field: "targetIonicStrengthMolar",
+      code: "invalid_amount",
+    });
   }
-  if (input.titrant && !(Number.isFinite(input.titrant.concentrationMolar) && input.titrant.concentrationMolar > 0)) {
-    throw new ChemInputError("Stock concentration must be a positive number (mol/L).", { field: "titrant.concentrationMolar", code: "invalid_amount" });
+  if (
+    input.titrant &&
+    !(Number.isFinite(input.titrant.concentrationMolar) && input.titrant.concentrationMolar > 0)
+  ) {
+    throw new ChemInputError("Stock concentration must be a positive number (mol/L).", {
+      field: "titrant.concentrationMolar",
+      code: "invalid_amount",
+    });
   }
   return system;
 }
@@ -70,16 +101,44 @@ export function designBuffer(input: DesignBufferInput): DesignBufferResult {
   const pKa = conditions.pKaOf(system);
   const step = nearestStep(pKa, input.pH);
   const method = input.method ?? "two-forms";
-  const salt = input.targetIonicStrengthMolar !== undefined ? strongUnknown(requireReagent(input.salt ?? "NaCl", "salt").reagent as StrongElectrolyte, "salt") : null;
-  const targetIMolal = input.targetIonicStrengthMolar !== undefined ? input.targetIonicStrengthMolar / kgPerL : null;
+  const salt =
+    input.targetIonicStrengthMolar !== undefined
+      ? strongUnknown(
+          requireReagent(input.salt ?? "NaCl", "salt").reagent as StrongElectrolyte,
+          "salt",
+        )
+      : null;
+  const targetIMolal =
+    input.targetIonicStrengthMolar !== undefined ? input.targetIonicStrengthMolar / kgPerL : null;
 
   let unknowns: Unknown[];
   let solved: Solved;
   if (method === "two-forms") {
-    const pair = input.reagents ?? TWO_FORM_DEFAULTS[system.id][Math.min(step, TWO_FORM_DEFAULTS[system.id].length - 1)];
-    if (pair.length !== 2) throw new ChemInputError("Give exactly two forms: an acid form and a base form.", { field: "reagents", code: "wrong_reagent" });
-    unknowns = pair.map((f, i) => asUnknown(bufferReagent(f, system, `reagents[${i}]`), system, i === 0 ? "acid form" : "base form"));
-    solved = solveAmounts(system, unknowns, [null, null], totalMolal, input.pH, conditions, salt, targetIMolal);
+    const pair =
+      input.reagents ??
+      TWO_FORM_DEFAULTS[system.id][Math.min(step, TWO_FORM_DEFAULTS[system.id].length - 1)];
+    if (pair.length !== 2)
+      throw new ChemInputError("Give exactly two forms: an acid form and a base form.", {
+        field: "reagents",
+        code: "wrong_reagent",
+      });
+    unknowns = pair.map((f, i) =>
+      asUnknown(
+        bufferReagent(f, system, `reagents[${i}]`),
+        system,
+        i === 0 ? "acid form" : "base form",
+      ),
+    );
+    solved = solveAmounts(
+      system,
+      unknowns,
+      [null, null],
+      totalMolal,
+      input.pH,
+      conditions,
+      salt,
+      targetIMolal,
+    );
     const bad = solved.amountsMolal.findIndex((v) => v < -1e-12);
     if (bad >= 0) {
       throw new ChemInputError(
@@ -89,67 +148,154 @@ export function designBuffer(input: DesignBufferInput): DesignBufferResult {
     }
   } else {
     const formFormula = input.reagents?.[0] ?? TITRATE_DEFAULTS[system.id];
-    const form = asUnknown(bufferReagent(formFormula, system, "reagents[0]"), system, "buffer form");
-    const stock = (f: string) => strongUnknown(requireReagent(f, "titrant.formula").reagent as StrongElectrolyte, "titrant");
+    const form = asUnknown(
+      bufferReagent(formFormula, system, "reagents[0]"),
+      system,
+      "buffer form",
+    );
+    const stock = (f: string) =>
+      strongUnknown(requireReagent(f, "titrant.formula").reagent as StrongElectrolyte, "titrant");
     const fixedForm = totalMolal / form.units;
     const first = input.titrant?.formula ?? "NaOH";
     unknowns = [form, stock(first)];
-    solved = solveAmounts(system, unknowns, [fixedForm, null], totalMolal, input.pH, conditions, salt, targetIMolal);
+    solved = solveAmounts(
+      system,
+      unknowns,
+      [fixedForm, null],
+      totalMolal,
+      input.pH,
+      conditions,
+      salt,
+      targetIMolal,
+    );
     if (solved.amountsMolal[1] < -1e-12) {
       if (input.titrant) {
-        throw new ChemInputError(`pH ${input.pH} needs ${first === "HCl" ? "a base" : "an acid"}, not ${first}.`, { field: "titrant.formula", code: "unreachable_ph" });
+        throw new ChemInputError(
+          `pH ${input.pH} needs ${first === "HCl" ? "a base" : "an acid"}, not ${first}.`,
+          { field: "titrant.formula", code: "unreachable_ph" },
+        );
       }
       unknowns = [form, stock("HCl")];
-      solved = solveAmounts(system, unknowns, [fixedForm, null], totalMolal, input.pH, conditions, salt, targetIMolal);
+      solved = solveAmounts(
+        system,
+        unknowns,
+        [fixedForm, null],
+        totalMolal,
+        input.pH,
+        conditions,
+        salt,
+        targetIMolal,
+      );
     }
   }
 
   const stockMolar = input.titrant?.concentrationMolar ?? 1;
   const components: RecipeComponent[] = unknowns.map((u, k) => {
     const amountMol = Math.max(solved.amountsMolal[k], 0) * kgWater;
-    if (u.role === "titrant") return { formula: u.formula, name: `${u.name}, ${stockMolar} mol/L stock`, role: u.role, amountMol, volumeMl: (amountMol / stockMolar) * 1000 };
+    if (u.role === "titrant")
+      return {
+        formula: u.formula,
+        name: `${u.name}, ${stockMolar} mol/L stock`,
+        role: u.role,
+        amountMol,
+        volumeMl: (amountMol / stockMolar) * 1000,
+      };
     const M = molarMass(u.formula);
-    return { formula: u.formula, name: u.name, role: u.role, amountMol, massG: amountMol * M, molarMassGPerMol: M };
+    return {
+      formula: u.formula,
+      name: u.name,
+      role: u.role,
+      amountMol,
+      massG: amountMol * M,
+      molarMassGPerMol: M,
+    };
   });
   if (salt && solved.saltMolal > 0) {
     const amountMol = solved.saltMolal * kgWater;
     const M = molarMass(salt.formula);
-    components.push({ formula: salt.formula, name: salt.name, role: "salt", amountMol, massG: amountMol * M, molarMassGPerMol: M });
+    components.push({
+      formula: salt.formula,
+      name: salt.name,
+      role: "salt",
+      amountMol,
+      massG: amountMol * M,
+      molarMassGPerMol: M,
+    });
   }
   const titrant = components.find((c) => c.role === "titrant");
   if (titrant && titrant.volumeMl! > input.volumeMl) {
-    throw new ChemInputError(`The ${stockMolar} mol/L stock would need ${titrant.volumeMl!.toFixed(1)} mL, more than the final volume: use a stronger stock.`, {
-      field: "titrant.concentrationMolar",
-      code: "stock_too_dilute",
-    });
+    throw new ChemInputError(
+      `The ${stockMolar} mol/L stock would need ${titrant.volumeMl!.toFixed(1)} mL, more than the final volume: use a stronger stock.`,
+      {
+        field: "titrant.concentrationMolar",
+        code: "stock_too_dilute",
+      },
+    );
   }
 
   // Forward check: speciate exactly what the recipe puts in.
   const fixedIons = new Map<string, { charge: number; molality: number }>();
-  unknowns.forEach((u, k) => u.ions.forEach((i) => {
-    const prev = fixedIons.get(i.formula)?.molality ?? 0;
-    fixedIons.set(i.formula, { charge: i.charge, molality: prev + Math.max(solved.amountsMolal[k], 0) * i.count });
-  }));
-  if (salt) salt.ions.forEach((i) => {
-    const prev = fixedIons.get(i.formula)?.molality ?? 0;
-    fixedIons.set(i.formula, { charge: i.charge, molality: prev + solved.saltMolal * i.count });
-  });
-  const check = equilibrate(new Map([[system.id, totalMolal]]), [...fixedIons].map(([formula, v]) => ({ formula, ...v })), conditions, kgPerL);
+  unknowns.forEach((u, k) =>
+    u.ions.forEach((i) => {
+      const prev = fixedIons.get(i.formula)?.molality ?? 0;
+      fixedIons.set(i.formula, {
+        charge: i.charge,
+        molality: prev + Math.max(solved.amountsMolal[k], 0) * i.count,
+      });
+    }),
+  );
+  if (salt)
+    salt.ions.forEach((i) => {
+      const prev = fixedIons.get(i.formula)?.molality ?? 0;
+      fixedIons.set(i.formula, { charge: i.charge, molality: prev + solved.saltMolal * i.count });
+    });
+  const check = equilibrate(
+    new Map([[system.id, totalMolal]]),
+    [...fixedIons].map(([formula, v]) => ({ formula, ...v })),
+    conditions,
+    kgPerL,
+  );
 
-  if (!Number.isFinite(check.pH) || components.some((c) => !Number.isFinite(c.amountMol) || (c.massG ?? 0) < 0 || !Number.isFinite(c.massG ?? 0) || !Number.isFinite(c.volumeMl ?? 0))) {
-    throw new ChemInputError("No finite recipe exists for this buffer, pH and concentration.", { field: "pH", code: "model_failed" });
+  if (
+    !Number.isFinite(check.pH) ||
+    components.some(
+      (c) =>
+        !Number.isFinite(c.amountMol) ||
+        (c.massG ?? 0) < 0 ||
+        !Number.isFinite(c.massG ?? 0) ||
+        !Number.isFinite(c.volumeMl ?? 0),
+    )
+  ) {
+    throw new ChemInputError("No finite recipe exists for this buffer, pH and concentration.", {
+      field: "pH",
+      code: "model_failed",
+    });
   }
   const warnings = [...check.warnings];
   if (Math.abs(input.pH - pKa[step]) > 1) {
-    warnings.push(`pH ${input.pH} is more than 1 unit from the nearest pKa of ${system.name} (${pKa[step].toFixed(2)} at ${conditions.temperatureC} °C): buffer capacity is low.`);
+    warnings.push(
+      `pH ${input.pH} is more than 1 unit from the nearest pKa of ${system.name} (${pKa[step].toFixed(2)} at ${conditions.temperatureC} °C): buffer capacity is low.`,
+    );
   }
-  if (targetIMolal !== null && solved.saltMolal === 0 && check.ionicStrength.molar > input.targetIonicStrengthMolar! + 1e-9) {
-    warnings.push(`The buffer alone gives I = ${check.ionicStrength.molar.toFixed(4)} mol/L, above the target ${input.targetIonicStrengthMolar} mol/L; no salt added.`);
+  if (
+    targetIMolal !== null &&
+    solved.saltMolal === 0 &&
+    check.ionicStrength.molar > input.targetIonicStrengthMolar! + 1e-9
+  ) {
+    warnings.push(
+      `The buffer alone gives I = ${check.ionicStrength.molar.toFixed(4)} mol/L, above the target ${input.targetIonicStrengthMolar} mol/L; no salt added.`,
+    );
   }
-  const weighed = components.filter((c) => c.massG !== undefined).map((c) => `${c.massG!.toFixed(4)} g ${c.formula}`);
+  const weighed = components
+    .filter((c) => c.massG !== undefined)
+    .map((c) => `${c.massG!.toFixed(4)} g ${c.formula}`);
   const procedure = [
     `Dissolve ${weighed.join(", ")} in about 80 % of the final volume of water.`,
-    ...(titrant ? [`Add ${titrant.volumeMl!.toFixed(2)} mL of ${stockMolar} mol/L ${titrant.formula} with stirring.`] : []),
+    ...(titrant
+      ? [
+          `Add ${titrant.volumeMl!.toFixed(2)} mL of ${stockMolar} mol/L ${titrant.formula} with stirring.`,
+        ]
+      : []),
     `Bring to ${conditions.temperatureC} °C, check the pH with a calibrated meter, and make up to ${input.volumeMl} mL with water.`,
   ];
   return {

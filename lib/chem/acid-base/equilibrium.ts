@@ -36,7 +36,9 @@ export function distribute(system: SystemAtT, pH: number, log10Gamma: Log10Gamma
   const z0 = system.data.charge0;
   const logRel = new Array<number>(n);
   logRel[0] = 0;
-  for (let k = 1; k < n; k++) logRel[k] = logRel[k - 1] + (pH - system.pKa[k - 1]) + log10Gamma(z0 - k + 1) - log10Gamma(z0 - k);
+  for (let k = 1; k < n; k++)
+    logRel[k] =
+      logRel[k - 1] + (pH - system.pKa[k - 1]) + log10Gamma(z0 - k + 1) - log10Gamma(z0 - k);
   const top = Math.max(...logRel);
   let sum = 0;
   const w = logRel.map((x) => {
@@ -61,11 +63,19 @@ export function waterIons(pH: number, pKw: number, log10Gamma: Log10Gamma): IonA
   ];
 }
 
-export function speciesAt(systems: readonly SystemAtT[], fixedIons: readonly IonAmount[], pH: number, pKw: number, log10Gamma: Log10Gamma): IonAmount[] {
+export function speciesAt(
+  systems: readonly SystemAtT[],
+  fixedIons: readonly IonAmount[],
+  pH: number,
+  pKw: number,
+  log10Gamma: Log10Gamma,
+): IonAmount[] {
   const out: IonAmount[] = [...waterIons(pH, pKw, log10Gamma)];
   for (const s of systems) {
     const m = distribute(s, pH, log10Gamma);
-    s.data.species.forEach((formula, k) => out.push({ formula, charge: s.data.charge0 - k, molality: m[k] }));
+    s.data.species.forEach((formula, k) =>
+      out.push({ formula, charge: s.data.charge0 - k, molality: m[k] }),
+    );
   }
   for (const f of fixedIons) out.push({ ...f });
   return out;
@@ -75,8 +85,17 @@ const PH_LOW = -2;
 const PH_HIGH = 16;
 
 /** The pH at which the solution is electrically neutral, for fixed γ. */
-export function neutralPH(systems: readonly SystemAtT[], fixedIons: readonly IonAmount[], pKw: number, log10Gamma: Log10Gamma): number {
-  const balance = (pH: number) => speciesAt(systems, fixedIons, pH, pKw, log10Gamma).reduce((a, i) => a + i.charge * i.molality, 0);
+export function neutralPH(
+  systems: readonly SystemAtT[],
+  fixedIons: readonly IonAmount[],
+  pKw: number,
+  log10Gamma: Log10Gamma,
+): number {
+  const balance = (pH: number) =>
+    speciesAt(systems, fixedIons, pH, pKw, log10Gamma).reduce(
+      (a, i) => a + i.charge * i.molality,
+      0,
+    );
   let lo = PH_LOW;
   let hi = PH_HIGH;
   for (let i = 0; i < 80 && hi - lo > 1e-12; i++) {
@@ -101,9 +120,15 @@ export function solveEquilibrium(
     pH = neutralPH(systems, fixedIons, pKw, g);
     const species = speciesAt(systems, fixedIons, pH, pKw, g);
     const nextI = ionicStrengthOf(species);
-    if (Math.abs(nextI - I) <= 1e-12 * Math.max(1, I)) return { pH, ionicStrengthMolal: nextI, species, iterations: it };
+    if (Math.abs(nextI - I) <= 1e-12 * Math.max(1, I))
+      return { pH, ionicStrengthMolal: nextI, species, iterations: it };
     I = nextI;
   }
   const g = gammaAt(I);
-  return { pH, ionicStrengthMolal: I, species: speciesAt(systems, fixedIons, pH, pKw, g), iterations: 100 };
+  return {
+    pH,
+    ionicStrengthMolal: I,
+    species: speciesAt(systems, fixedIons, pH, pKw, g),
+    iterations: 100,
+  };
 }

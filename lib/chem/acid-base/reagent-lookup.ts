@@ -1,7 +1,12 @@
 /** Finds a weighable buffer form or a strong electrolyte from what a chemist types. */
 import { ChemInputError } from "../errors";
 import { normalizeFormulaText } from "../formula/normalize";
-import { BUFFER_REAGENTS, type BufferReagent, STRONG_ELECTROLYTES, type StrongElectrolyte } from "./data/buffer-reagents";
+import {
+  BUFFER_REAGENTS,
+  type BufferReagent,
+  STRONG_ELECTROLYTES,
+  type StrongElectrolyte,
+} from "./data/buffer-reagents";
 
 const ALIASES: Record<string, string> = {
   "tris-hcl": "C4H11NO3·HCl",
@@ -16,13 +21,18 @@ const ALIASES: Record<string, string> = {
 
 const key = (text: string) => normalizeFormulaText(text).replace(/\s+/g, "");
 
-export type ResolvedReagent = { kind: "buffer"; reagent: BufferReagent } | { kind: "strong"; reagent: StrongElectrolyte };
+export type ResolvedReagent =
+  { kind: "buffer"; reagent: BufferReagent } | { kind: "strong"; reagent: StrongElectrolyte };
 
 export function findReagent(text: string): ResolvedReagent | undefined {
   const wanted = key(ALIASES[text.trim().toLowerCase()] ?? text);
-  const buffer = BUFFER_REAGENTS.find((r) => key(r.formula) === wanted || r.name.toLowerCase() === text.trim().toLowerCase());
+  const buffer = BUFFER_REAGENTS.find(
+    (r) => key(r.formula) === wanted || r.name.toLowerCase() === text.trim().toLowerCase(),
+  );
   if (buffer) return { kind: "buffer", reagent: buffer };
-  const strong = STRONG_ELECTROLYTES.find((r) => key(r.formula) === wanted || r.name.toLowerCase() === text.trim().toLowerCase());
+  const strong = STRONG_ELECTROLYTES.find(
+    (r) => key(r.formula) === wanted || r.name.toLowerCase() === text.trim().toLowerCase(),
+  );
   if (strong) return { kind: "strong", reagent: strong };
   return undefined;
 }
@@ -31,7 +41,10 @@ export function requireReagent(text: string, field: string): ResolvedReagent {
   const found = findReagent(text);
   if (!found) {
     throw new ChemInputError(
-      `"${text}" is not a buffer reagent Ionleaf knows. Known forms include ${BUFFER_REAGENTS.slice(0, 6)
+      `"${text}" is not a buffer reagent Ionleaf knows. Known forms include ${BUFFER_REAGENTS.slice(
+        0,
+        6,
+      )
         .map((r) => r.formula)
         .join(", ")}, …, and the stocks HCl, NaOH, KOH and salts NaCl, KCl.`,
       { field, code: "unknown_species" },

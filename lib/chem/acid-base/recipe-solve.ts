@@ -24,8 +24,14 @@ export interface Unknown {
   hazard?: string;
 }
 
-export function asUnknown(r: BufferReagent, system: AcidSystemData, role: RecipeComponent["role"]): Unknown {
-  const units = r.contributes.filter((c) => c.system === system.id).reduce((a, c) => a + c.count, 0);
+export function asUnknown(
+  r: BufferReagent,
+  system: AcidSystemData,
+  role: RecipeComponent["role"],
+): Unknown {
+  const units = r.contributes
+    .filter((c) => c.system === system.id)
+    .reduce((a, c) => a + c.count, 0);
   return {
     formula: r.formula,
     name: r.name,
@@ -39,7 +45,15 @@ export function asUnknown(r: BufferReagent, system: AcidSystemData, role: Recipe
 
 export function strongUnknown(s: StrongElectrolyte, role: RecipeComponent["role"]): Unknown {
   const ions = s.ions.filter((i) => i.formula !== "H+" && i.formula !== "OH-");
-  return { formula: s.formula, name: s.name, role, units: 0, counterCharge: ions.reduce((a, i) => a + i.charge * i.count, 0), ions, hazard: s.hazard };
+  return {
+    formula: s.formula,
+    name: s.name,
+    role,
+    units: 0,
+    counterCharge: ions.reduce((a, i) => a + i.charge * i.count, 0),
+    ions,
+    hazard: s.hazard,
+  };
 }
 
 export interface Solved {
@@ -83,8 +97,14 @@ export function solveAmounts(
     x = unknowns.map((_, k) => fixed[k] ?? 0);
     if (idx.length === 2) {
       const [a, b] = idx;
-      const det = unknowns[a].units * unknowns[b].counterCharge - unknowns[b].units * unknowns[a].counterCharge;
-      if (Math.abs(det) < 1e-12) throw new ChemInputError("These two forms differ in no counter-ion: choose an acid form and a base form.", { field: "reagents", code: "wrong_reagent" });
+      const det =
+        unknowns[a].units * unknowns[b].counterCharge -
+        unknowns[b].units * unknowns[a].counterCharge;
+      if (Math.abs(det) < 1e-12)
+        throw new ChemInputError(
+          "These two forms differ in no counter-ion: choose an acid form and a base form.",
+          { field: "reagents", code: "wrong_reagent" },
+        );
       x[a] = (tRem * unknowns[b].counterCharge - unknowns[b].units * qRem) / det;
       x[b] = (unknowns[a].units * qRem - unknowns[a].counterCharge * tRem) / det;
     } else {
@@ -92,16 +112,26 @@ export function solveAmounts(
       x[a] = qRem / unknowns[a].counterCharge;
     }
     const ions: IonAmount[] = [...water];
-    species.forEach((m, k) => ions.push({ formula: system.species[k], charge: system.charge0 - k, molality: m }));
-    unknowns.forEach((u, k) => u.ions.forEach((ion) => ions.push({ formula: ion.formula, charge: ion.charge, molality: Math.max(x[k], 0) * ion.count })));
+    species.forEach((m, k) =>
+      ions.push({ formula: system.species[k], charge: system.charge0 - k, molality: m }),
+    );
+    unknowns.forEach((u, k) =>
+      u.ions.forEach((ion) =>
+        ions.push({
+          formula: ion.formula,
+          charge: ion.charge,
+          molality: Math.max(x[k], 0) * ion.count,
+        }),
+      ),
+    );
     let nextI = ionicStrengthOf(ions);
     if (salt && targetIMolal !== null) {
       saltMolal = Math.max(0, saltMolal + (targetIMolal - (nextI + saltMolal)));
       nextI += saltMolal;
     }
-    if (Math.abs(nextI - I) <= 1e-13 * Math.max(1, I)) return { amountsMolal: x, saltMolal, ionicStrengthMolal: nextI };
+    if (Math.abs(nextI - I) <= 1e-13 * Math.max(1, I))
+      return { amountsMolal: x, saltMolal, ionicStrengthMolal: nextI };
     I = nextI;
   }
   return { amountsMolal: x, saltMolal, ionicStrengthMolal: I };
 }
-

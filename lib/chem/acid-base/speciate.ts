@@ -15,23 +15,38 @@ import type { SpeciateComponent, SpeciateInput, SpeciateResult, SpeciesResult } 
 
 function positive(value: number | undefined, field: string, what: string): number {
   if (!(typeof value === "number" && Number.isFinite(value) && value > 0)) {
-    throw new ChemInputError(`${what} must be a positive number.`, { field, code: "invalid_amount" });
+    throw new ChemInputError(`${what} must be a positive number.`, {
+      field,
+      code: "invalid_amount",
+    });
   }
   return value;
 }
 
 export function componentAmountMol(c: SpeciateComponent, i: number): number {
   const field = `components[${i}]`;
-  if (c.massG !== undefined) return positive(c.massG, `${field}.massG`, `Mass of ${c.formula}`) / molarMass(c.formula);
-  if (c.amountMol !== undefined) return positive(c.amountMol, `${field}.amountMol`, `Amount of ${c.formula}`);
+  if (c.massG !== undefined)
+    return positive(c.massG, `${field}.massG`, `Mass of ${c.formula}`) / molarMass(c.formula);
+  if (c.amountMol !== undefined)
+    return positive(c.amountMol, `${field}.amountMol`, `Amount of ${c.formula}`);
   if (c.volumeMl !== undefined || c.concentrationMolar !== undefined) {
     const v = positive(c.volumeMl, `${field}.volumeMl`, `Volume of ${c.formula} stock`);
-    return (v / 1000) * positive(c.concentrationMolar, `${field}.concentrationMolar`, `Concentration of the ${c.formula} stock`);
+    return (
+      (v / 1000) *
+      positive(
+        c.concentrationMolar,
+        `${field}.concentrationMolar`,
+        `Concentration of the ${c.formula} stock`,
+      )
+    );
   }
-  throw new ChemInputError(`Give a mass (g), an amount (mol) or a stock volume and concentration for ${c.formula}.`, {
-    field: `${field}.massG`,
-    code: "missing_amount",
-  });
+  throw new ChemInputError(
+    `Give a mass (g), an amount (mol) or a stock volume and concentration for ${c.formula}.`,
+    {
+      field: `${field}.massG`,
+      code: "missing_amount",
+    },
+  );
 }
 
 /** Totals per buffer system and the fixed (non-H+/OH−) ions, in mol, from the components. */
@@ -49,7 +64,8 @@ export function tallyComponents(components: readonly SpeciateComponent[]) {
     const n = componentAmountMol(c, i);
     hazards.push(found.reagent.hazard);
     if (found.kind === "buffer") {
-      for (const part of found.reagent.contributes) systemMol.set(part.system, (systemMol.get(part.system) ?? 0) + n * part.count);
+      for (const part of found.reagent.contributes)
+        systemMol.set(part.system, (systemMol.get(part.system) ?? 0) + n * part.count);
       for (const ion of found.reagent.counterIons) addIon(ion.formula, ion.charge, n * ion.count);
     } else {
       for (const ion of found.reagent.ions) addIon(ion.formula, ion.charge, n * ion.count);
@@ -77,7 +93,8 @@ export function equilibrate(
   const state = solveEquilibrium(systems, fixedIons, conditions.pKw, conditions.gammaAt);
   const log10Gamma = conditions.gammaAt(state.ionicStrengthMolal);
   const systemOf = new Map<string, { id: BufferSystemId; total: number }>();
-  for (const s of systems) for (const f of s.data.species) systemOf.set(f, { id: s.data.id, total: s.totalMolal });
+  for (const s of systems)
+    for (const f of s.data.species) systemOf.set(f, { id: s.data.id, total: s.totalMolal });
   const species: SpeciesResult[] = state.species.map((sp) => {
     const gamma = Math.pow(10, log10Gamma(sp.charge));
     const sys = systemOf.get(sp.formula);
@@ -96,13 +113,21 @@ export function equilibrate(
   if (w) warnings.push(w);
   for (const s of systems) {
     if (s.data.id === "borate" && s.totalMolal > 0.025)
-      warnings.push("Above about 0.025 mol/kg boron, polyborates form; they are not modelled, so the pH is approximate.");
-    if (s.data.id === "carbonate") warnings.push("Carbonate buffers exchange CO2 with air: keep them closed; the pH drifts in an open vessel.");
+      warnings.push(
+        "Above about 0.025 mol/kg boron, polyborates form; they are not modelled, so the pH is approximate.",
+      );
+    if (s.data.id === "carbonate")
+      warnings.push(
+        "Carbonate buffers exchange CO2 with air: keep them closed; the pH drifts in an open vessel.",
+      );
   }
   return {
     pH: state.pH,
     temperatureC: conditions.temperatureC,
-    ionicStrength: { molal: state.ionicStrengthMolal, molar: state.ionicStrengthMolal * molalToMolar },
+    ionicStrength: {
+      molal: state.ionicStrengthMolal,
+      molar: state.ionicStrengthMolal * molalToMolar,
+    },
     species,
     systems: systems.map((s) => ({
       id: s.data.id,
@@ -120,7 +145,10 @@ export function equilibrate(
 export function speciate(input: SpeciateInput): SpeciateResult {
   const conditions = conditionsAt(input.temperatureC, input.activityConvention);
   if (!Array.isArray(input.components) || input.components.length === 0) {
-    throw new ChemInputError("Add at least one component.", { field: "components", code: "missing_components" });
+    throw new ChemInputError("Add at least one component.", {
+      field: "components",
+      code: "missing_components",
+    });
   }
   const notes: string[] = [];
   let kgWater: number;
@@ -128,19 +156,30 @@ export function speciate(input: SpeciateInput): SpeciateResult {
   if (input.waterMassG !== undefined) {
     kgWater = positive(input.waterMassG, "waterMassG", "Mass of water") / 1000;
     molalToMolar = solventKgPerLitre(conditions);
-    notes.push("Molarities are estimated from molalities with the density of water (dilute-solution approximation).");
+    notes.push(
+      "Molarities are estimated from molalities with the density of water (dilute-solution approximation).",
+    );
   } else {
     const litres = positive(input.volumeMl, "volumeMl", "Final volume") / 1000;
     molalToMolar = solventKgPerLitre(conditions);
     kgWater = litres * molalToMolar;
-    notes.push("Molalities are estimated from molarities with the density of water (dilute-solution approximation; under 1 % error below about 0.2 mol/L).");
+    notes.push(
+      "Molalities are estimated from molarities with the density of water (dilute-solution approximation; under 1 % error below about 0.2 mol/L).",
+    );
   }
   const { systemMol, ionMol, hazards } = tallyComponents(input.components);
   const systemMolal = new Map([...systemMol].map(([id, mol]) => [id, mol / kgWater]));
-  const fixedIons = [...ionMol].map(([formula, v]) => ({ formula, charge: v.charge, molality: v.mol / kgWater }));
+  const fixedIons = [...ionMol].map(([formula, v]) => ({
+    formula,
+    charge: v.charge,
+    molality: v.mol / kgWater,
+  }));
   const result = equilibrate(systemMolal, fixedIons, conditions, molalToMolar);
   if (!Number.isFinite(result.pH)) {
-    throw new ChemInputError("The speciation did not converge for this composition.", { field: "components", code: "model_failed" });
+    throw new ChemInputError("The speciation did not converge for this composition.", {
+      field: "components",
+      code: "model_failed",
+    });
   }
   return { ...result, notes, cautions: cautionsFor(hazards) };
 }

@@ -36,14 +36,21 @@ export interface SolvedAmounts {
   warnings: string[];
 }
 
-type Spec = { type: "molal"; m: number } | { type: "molar"; c: number } | { type: "fraction"; w: number };
-
+type Spec =
+  { type: "molal"; m: number } | { type: "molar"; c: number } | { type: "fraction"; w: number };
 
 function finiteNonNegative(value: unknown, field: string, what: string): number {
   if (typeof value !== "number" || !Number.isFinite(value)) {
-    throw new ChemInputError(`The ${what} must be a number (got ${typeof value === "string" ? JSON.stringify(value) : String(value)}).`, { field, code: "bad_amount" });
+    throw new ChemInputError(
+      `The ${what} must be a number (got ${typeof value === "string" ? JSON.stringify(value) : String(value)}).`,
+      { field, code: "bad_amount" },
+    );
   }
-  if (value < 0) throw new ChemInputError(`The ${what} cannot be negative (got ${value}).`, { field, code: "negative_amount" });
+  if (value < 0)
+    throw new ChemInputError(`The ${what} cannot be negative (got ${value}).`, {
+      field,
+      code: "negative_amount",
+    });
   return value;
 }
 
@@ -55,10 +62,26 @@ function specsOf(inputs: readonly AmountInput[], species: readonly ResolvedSpeci
     const unit = readUnit(input.unit, componentField(i, "unit"));
     const molarMass = species[i].molarMassGPerMol;
     if (unit.kind === "mass" || unit.kind === "volume") {
-      if (unit.kind === "volume") throw new ChemInputError(`A volume (${input.unit}) is not an amount of ${species[i].formula}; give its mass or a concentration.`, { field: componentField(i, "unit"), code: "bad_unit" });
-      if (!input.per) throw new ChemInputError(`A mass of ${species[i].formula} needs the mass of solvent it was dissolved in or the final volume of solution ("per").`, { field: componentField(i, "per"), code: "missing_per" });
-      const perAmount = finiteNonNegative(input.per.amount, componentField(i, "per.amount"), "solvent mass or volume");
-      if (perAmount === 0) throw new ChemInputError("The mass of solvent or final volume must be greater than zero.", { field: componentField(i, "per.amount"), code: "zero_per" });
+      if (unit.kind === "volume")
+        throw new ChemInputError(
+          `A volume (${input.unit}) is not an amount of ${species[i].formula}; give its mass or a concentration.`,
+          { field: componentField(i, "unit"), code: "bad_unit" },
+        );
+      if (!input.per)
+        throw new ChemInputError(
+          `A mass of ${species[i].formula} needs the mass of solvent it was dissolved in or the final volume of solution ("per").`,
+          { field: componentField(i, "per"), code: "missing_per" },
+        );
+      const perAmount = finiteNonNegative(
+        input.per.amount,
+        componentField(i, "per.amount"),
+        "solvent mass or volume",
+      );
+      if (perAmount === 0)
+        throw new ChemInputError("The mass of solvent or final volume must be greater than zero.", {
+          field: componentField(i, "per.amount"),
+          code: "zero_per",
+        });
       const per = readUnit(input.per.unit, componentField(i, "per.unit"));
       const mol = (amount * unit.factor) / molarMass;
       if (per.kind === "volume") return { type: "molar", c: mol / (perAmount * per.factor) };
@@ -71,14 +94,26 @@ function specsOf(inputs: readonly AmountInput[], species: readonly ResolvedSpeci
         pending.push({ index: i, mol, group });
         return null;
       }
-      throw new ChemInputError(`"per" must be a mass of solvent (g, kg) or a final volume of solution (mL, L), not ${input.per.unit}.`, { field: componentField(i, "per.unit"), code: "bad_unit" });
+      throw new ChemInputError(
+        `"per" must be a mass of solvent (g, kg) or a final volume of solution (mL, L), not ${input.per.unit}.`,
+        { field: componentField(i, "per.unit"), code: "bad_unit" },
+      );
     }
-    if (input.per) throw new ChemInputError(`"per" applies to a weighed mass only, not to ${input.unit}.`, { field: componentField(i, "per"), code: "unexpected_per" });
+    if (input.per)
+      throw new ChemInputError(`"per" applies to a weighed mass only, not to ${input.unit}.`, {
+        field: componentField(i, "per"),
+        code: "unexpected_per",
+      });
     if (unit.kind === "molal") return { type: "molal", m: amount * unit.factor };
     if (unit.kind === "molar") return { type: "molar", c: amount * unit.factor };
-    if (unit.kind === "mass-concentration") return { type: "molar", c: (amount * unit.factor) / molarMass };
+    if (unit.kind === "mass-concentration")
+      return { type: "molar", c: (amount * unit.factor) / molarMass };
     const w = amount * unit.factor;
-    if (w >= 1) throw new ChemInputError(`A mass fraction must be below 1 (100 %); got ${amount} ${input.unit}.`, { field: componentField(i, "amount"), code: "bad_amount" });
+    if (w >= 1)
+      throw new ChemInputError(
+        `A mass fraction must be below 1 (100 %); got ${amount} ${input.unit}.`,
+        { field: componentField(i, "amount"), code: "bad_amount" },
+      );
     return { type: "fraction", w };
   });
   for (const p of pending) {
@@ -110,16 +145,28 @@ export function solveAmounts(
   const beta = solutionDensityGPerMl === undefined ? 0 : 1 / solutionDensityGPerMl;
   const denominator = 1 - beta * C - F;
   if (!(denominator > 0)) {
-    throw new ChemInputError("The stated amounts add up to more solute than the solution can hold (check the units and the density).", { field: "components", code: "impossible_amounts" });
+    throw new ChemInputError(
+      "The stated amounts add up to more solute than the solution can hold (check the units and the density).",
+      { field: "components", code: "impossible_amounts" },
+    );
   }
   const T = (1 + S + alpha * C) / denominator;
   const V = alpha + beta * T;
-  const anyAmount = specs.some((s) => (s.type === "molal" ? s.m : s.type === "molar" ? s.c : s.w) > 0);
+  const anyAmount = specs.some(
+    (s) => (s.type === "molal" ? s.m : s.type === "molar" ? s.c : s.w) > 0,
+  );
   if (solutionDensityGPerMl === undefined && anyAmount) {
-    warnings.push(`No solution density given: molar ↔ molal conversion uses the solvent density (${solventDensityGPerMl.toFixed(5)} g/mL), an approximation for dilute solutions.`);
+    warnings.push(
+      `No solution density given: molar ↔ molal conversion uses the solvent density (${solventDensityGPerMl.toFixed(5)} g/mL), an approximation for dilute solutions.`,
+    );
   }
   const components = specs.map((spec, i) => {
-    const molality = spec.type === "molal" ? spec.m : spec.type === "molar" ? spec.c * V : (spec.w * T) / (species[i].molarMassGPerMol / 1000);
+    const molality =
+      spec.type === "molal"
+        ? spec.m
+        : spec.type === "molar"
+          ? spec.c * V
+          : (spec.w * T) / (species[i].molarMassGPerMol / 1000);
     return { molality, molarity: molality / V };
   });
   return { components, litresPerKgSolvent: V, kgSolutionPerKgSolvent: T, warnings };

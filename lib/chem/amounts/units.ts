@@ -7,7 +7,8 @@ import { ChemInputError } from "../errors";
 
 const math = create({ unitDependencies });
 
-export type UnitKind = "molal" | "molar" | "mass" | "volume" | "mass-concentration" | "mass-fraction";
+export type UnitKind =
+  "molal" | "molar" | "mass" | "volume" | "mass-concentration" | "mass-fraction";
 
 export interface UnitInfo {
   kind: UnitKind;
@@ -18,24 +19,55 @@ export interface UnitInfo {
 }
 
 const BASES: [UnitKind, string][] = [
-  ["molal", "mol/kg"], ["molar", "mol/L"], ["mass", "g"], ["volume", "L"], ["mass-concentration", "g/L"],
+  ["molal", "mol/kg"],
+  ["molar", "mol/L"],
+  ["mass", "g"],
+  ["volume", "L"],
+  ["mass-concentration", "g/L"],
 ];
 
 const ALIASES: Record<string, string> = {
-  M: "mol/L", mM: "mmol/L", uM: "umol/L", nM: "nmol/L", m: "mol/kg", mm: "mmol/kg", molal: "mol/kg", molar: "mol/L",
+  M: "mol/L",
+  mM: "mmol/L",
+  uM: "umol/L",
+  nM: "nmol/L",
+  m: "mol/kg",
+  mm: "mmol/kg",
+  molal: "mol/kg",
+  molar: "mol/L",
 };
 
 const FRACTIONS: Record<string, number> = {
-  "mass fraction": 1, "w/w": 1, fraction: 1, "%": 0.01, "wt%": 0.01, "wt %": 0.01, "% w/w": 0.01, "%w/w": 0.01,
-  "mass %": 0.01, "mass%": 0.01, "g/g": 1, "kg/kg": 1, "g/100g": 0.01, ppm: 1e-6,
+  "mass fraction": 1,
+  "w/w": 1,
+  fraction: 1,
+  "%": 0.01,
+  "wt%": 0.01,
+  "wt %": 0.01,
+  "% w/w": 0.01,
+  "%w/w": 0.01,
+  "mass %": 0.01,
+  "mass%": 0.01,
+  "g/g": 1,
+  "kg/kg": 1,
+  "g/100g": 0.01,
+  ppm: 1e-6,
 };
 
 const cache = new Map<string, UnitInfo | null>();
 
 function normalize(text: string): string {
-  let u = text.trim().replace(/[µμ]/g, "u").replace(/⁻¹/g, "-1").replace(/⁻³/g, "-3").replace(/³/g, "3").replace(/\s*\/\s*/g, "/");
+  let u = text
+    .trim()
+    .replace(/[µμ]/g, "u")
+    .replace(/⁻¹/g, "-1")
+    .replace(/⁻³/g, "-3")
+    .replace(/³/g, "3")
+    .replace(/\s*\/\s*/g, "/");
   // "mol kg-1", "mmol L-1", "mol dm-3": exponent notation of the same units
-  u = u.replace(/^(\w*mol)\s*(kg|g|L|l)\s*\^?-1$/, "$1/$2").replace(/^(\w*mol)\s*(dm|cm)\s*\^?-3$/, "$1/$2^3");
+  u = u
+    .replace(/^(\w*mol)\s*(kg|g|L|l)\s*\^?-1$/, "$1/$2")
+    .replace(/^(\w*mol)\s*(dm|cm)\s*\^?-3$/, "$1/$2^3");
   u = u.replace(/(dm|cm|m)3\b/g, "$1^3").replace(/\bl\b/g, "L");
   return ALIASES[u] ?? u;
 }

@@ -14,7 +14,14 @@ import { ChemInputError } from "../errors";
 import { nernstSlopeV } from "./nernst";
 
 export type ReferenceElectrodeId =
-  | "SHE" | "SCE" | "Ag/AgCl-satKCl" | "Ag/AgCl-3.5MKCl" | "Ag/AgCl-3MKCl" | "Hg/HgO-1MNaOH" | "Hg/Hg2SO4-satK2SO4" | "RHE";
+  | "SHE"
+  | "SCE"
+  | "Ag/AgCl-satKCl"
+  | "Ag/AgCl-3.5MKCl"
+  | "Ag/AgCl-3MKCl"
+  | "Hg/HgO-1MNaOH"
+  | "Hg/Hg2SO4-satK2SO4"
+  | "RHE";
 
 interface ReferenceData {
   id: ReferenceElectrodeId;
@@ -26,22 +33,77 @@ interface ReferenceData {
 }
 
 const BF = "Bard & Faulkner (2001) Electrochemical Methods, 2nd ed.";
-const SSR = "Sawyer, Sobkowiak & Roberts (1995) Electrochemistry for Chemists, 2nd ed., §5.2 (from memory)";
+const SSR =
+  "Sawyer, Sobkowiak & Roberts (1995) Electrochemistry for Chemists, 2nd ed., §5.2 (from memory)";
 
 export const REFERENCE_ELECTRODES: readonly ReferenceData[] = [
-  { id: "SHE", name: "standard hydrogen electrode", potentialV25C: 0, temperatureCoefficientVPerK: 0, source: "definition" },
-  { id: "SCE", name: "saturated calomel electrode (sat. KCl)", potentialV25C: 0.2412, temperatureCoefficientVPerK: -6.6e-4, source: `${BF}; dE/dT: ${SSR}` },
-  { id: "Ag/AgCl-satKCl", name: "Ag/AgCl, saturated KCl", potentialV25C: 0.197, temperatureCoefficientVPerK: -1.01e-3, source: `${BF}; dE/dT: ${SSR}` },
-  { id: "Ag/AgCl-3.5MKCl", name: "Ag/AgCl, 3.5 M KCl", potentialV25C: 0.205, temperatureCoefficientVPerK: -7.3e-4, source: `${BF}; dE/dT: ${SSR}` },
-  { id: "Ag/AgCl-3MKCl", name: "Ag/AgCl, 3 M KCl", potentialV25C: 0.21, temperatureCoefficientVPerK: null, source: BF },
-  { id: "Hg/HgO-1MNaOH", name: "Hg/HgO, 1 M NaOH", potentialV25C: 0.14, temperatureCoefficientVPerK: null, source: SSR },
-  { id: "Hg/Hg2SO4-satK2SO4", name: "Hg/Hg₂SO₄, saturated K₂SO₄", potentialV25C: 0.64, temperatureCoefficientVPerK: null, source: SSR },
-  { id: "RHE", name: "reversible hydrogen electrode (needs pH)", potentialV25C: 0, temperatureCoefficientVPerK: null, source: "E = −(RT ln10/F)·pH vs SHE" },
+  {
+    id: "SHE",
+    name: "standard hydrogen electrode",
+    potentialV25C: 0,
+    temperatureCoefficientVPerK: 0,
+    source: "definition",
+  },
+  {
+    id: "SCE",
+    name: "saturated calomel electrode (sat. KCl)",
+    potentialV25C: 0.2412,
+    temperatureCoefficientVPerK: -6.6e-4,
+    source: `${BF}; dE/dT: ${SSR}`,
+  },
+  {
+    id: "Ag/AgCl-satKCl",
+    name: "Ag/AgCl, saturated KCl",
+    potentialV25C: 0.197,
+    temperatureCoefficientVPerK: -1.01e-3,
+    source: `${BF}; dE/dT: ${SSR}`,
+  },
+  {
+    id: "Ag/AgCl-3.5MKCl",
+    name: "Ag/AgCl, 3.5 M KCl",
+    potentialV25C: 0.205,
+    temperatureCoefficientVPerK: -7.3e-4,
+    source: `${BF}; dE/dT: ${SSR}`,
+  },
+  {
+    id: "Ag/AgCl-3MKCl",
+    name: "Ag/AgCl, 3 M KCl",
+    potentialV25C: 0.21,
+    temperatureCoefficientVPerK: null,
+    source: BF,
+  },
+  {
+    id: "Hg/HgO-1MNaOH",
+    name: "Hg/HgO, 1 M NaOH",
+    potentialV25C: 0.14,
+    temperatureCoefficientVPerK: null,
+    source: SSR,
+  },
+  {
+    id: "Hg/Hg2SO4-satK2SO4",
+    name: "Hg/Hg₂SO₄, saturated K₂SO₄",
+    potentialV25C: 0.64,
+    temperatureCoefficientVPerK: null,
+    source: SSR,
+  },
+  {
+    id: "RHE",
+    name: "reversible hydrogen electrode (needs pH)",
+    potentialV25C: 0,
+    temperatureCoefficientVPerK: null,
+    source: "E = −(RT ln10/F)·pH vs SHE",
+  },
 ];
 
 const BY_ID = new Map(REFERENCE_ELECTRODES.map((r) => [r.id, r]));
 
-export function listReferenceElectrodes(): { id: ReferenceElectrodeId; name: string; potentialV25C: number; temperatureCoefficientVPerK: number | null; source: string }[] {
+export function listReferenceElectrodes(): {
+  id: ReferenceElectrodeId;
+  name: string;
+  potentialV25C: number;
+  temperatureCoefficientVPerK: number | null;
+  source: string;
+}[] {
   return REFERENCE_ELECTRODES.map((r) => ({ ...r }));
 }
 
@@ -51,32 +113,55 @@ export interface PotentialOptions {
 }
 
 /** Potential of a reference electrode vs SHE, with notes on what was assumed. */
-export function referencePotentialVsShe(id: string, options: PotentialOptions = {}, notes: string[] = []): number {
+export function referencePotentialVsShe(
+  id: string,
+  options: PotentialOptions = {},
+  notes: string[] = [],
+): number {
   const ref = BY_ID.get(id as ReferenceElectrodeId);
   if (!ref) {
-    throw new ChemInputError(`Unknown reference electrode "${id}". Use one of: ${REFERENCE_ELECTRODES.map((r) => r.id).join(", ")}.`, { field: "reference", code: "unknown_reference" });
+    throw new ChemInputError(
+      `Unknown reference electrode "${id}". Use one of: ${REFERENCE_ELECTRODES.map((r) => r.id).join(", ")}.`,
+      { field: "reference", code: "unknown_reference" },
+    );
   }
   const t = options.temperatureC ?? 25;
   if (!Number.isFinite(t) || t < 0 || t > 100) {
-    throw new ChemInputError(`Temperature ${t} °C is outside the range of reference-electrode data (0–100 °C).`, { field: "temperatureC", code: "temperature_out_of_range" });
+    throw new ChemInputError(
+      `Temperature ${t} °C is outside the range of reference-electrode data (0–100 °C).`,
+      { field: "temperatureC", code: "temperature_out_of_range" },
+    );
   }
   if (ref.id === "RHE") {
     if (options.pH === undefined || !Number.isFinite(options.pH)) {
-      throw new ChemInputError("Converting to or from RHE needs the pH of the solution.", { field: "pH", code: "missing_ph" });
+      throw new ChemInputError("Converting to or from RHE needs the pH of the solution.", {
+        field: "pH",
+        code: "missing_ph",
+      });
     }
     return -nernstSlopeV(t, 1) * options.pH;
   }
   if (Math.abs(t - 25) < 1e-9) return ref.potentialV25C;
   if (ref.temperatureCoefficientVPerK === null) {
-    notes.push(`${ref.name}: no published temperature coefficient here; the 25 °C potential is used at ${t} °C.`);
+    notes.push(
+      `${ref.name}: no published temperature coefficient here; the 25 °C potential is used at ${t} °C.`,
+    );
     return ref.potentialV25C;
   }
   return ref.potentialV25C + ref.temperatureCoefficientVPerK * (t - 25);
 }
 
-export function convertPotentialDetailed(potentialV: number, from: string, to: string, options: PotentialOptions = {}): { potentialV: number; notes: string[] } {
+export function convertPotentialDetailed(
+  potentialV: number,
+  from: string,
+  to: string,
+  options: PotentialOptions = {},
+): { potentialV: number; notes: string[] } {
   if (typeof potentialV !== "number" || !Number.isFinite(potentialV)) {
-    throw new ChemInputError("The potential must be a number in volts.", { field: "potential", code: "bad_potential" });
+    throw new ChemInputError("The potential must be a number in volts.", {
+      field: "potential",
+      code: "bad_potential",
+    });
   }
   const notes: string[] = [];
   const eFrom = referencePotentialVsShe(from, options, notes);
@@ -85,6 +170,11 @@ export function convertPotentialDetailed(potentialV: number, from: string, to: s
 }
 
 /** A potential measured against `from`, expressed against `to` (V). */
-export function convertPotential(potentialV: number, from: string, to: string, options: PotentialOptions = {}): number {
+export function convertPotential(
+  potentialV: number,
+  from: string,
+  to: string,
+  options: PotentialOptions = {},
+): number {
   return convertPotentialDetailed(potentialV, from, to, options).potentialV;
 }

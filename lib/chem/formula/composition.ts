@@ -64,7 +64,9 @@ export function parseComposition(core: string, whole: string): Composition {
         continue;
       }
       if (/[a-z]/.test(ch)) {
-        fail(`"${ch}" in "${whole}" is not an element symbol (symbols start with a capital letter).`);
+        fail(
+          `"${ch}" in "${whole}" is not an element symbol (symbols start with a capital letter).`,
+        );
       }
       fail(`Unexpected "${ch}" in "${whole}".`);
     }
@@ -93,5 +95,7 @@ export function compositionKey(composition: Composition, charge: number): string
     }
     return a < b ? -1 : a > b ? 1 : 0;
   });
-  return symbols.map((s) => s + (composition[s] === 1 ? "" : composition[s])).join("") + "|" + charge;
+  return (
+    symbols.map((s) => s + (composition[s] === 1 ? "" : composition[s])).join("") + "|" + charge
+  );
 }

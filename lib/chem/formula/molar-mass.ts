@@ -9,7 +9,11 @@ const ELECTRON_MOLAR_MASS_G_PER_MOL = 5.48579909065e-4;
  * gained or lost by an ion is ignored by common practice (it is below the uncertainty of
  * most atomic weights); `withElectrons` includes it for the rare case it matters.
  */
-export function compositionMolarMass(composition: Composition, charge = 0, withElectrons = false): number {
+export function compositionMolarMass(
+  composition: Composition,
+  charge = 0,
+  withElectrons = false,
+): number {
   let mass = 0;
   for (const [symbol, count] of Object.entries(composition)) {
     mass += ELEMENTS.get(symbol)!.atomicWeight * count;

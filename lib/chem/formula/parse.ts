@@ -43,7 +43,11 @@ function unwrap(core: string): string {
   return m[1];
 }
 
-function chooseReading(readings: ChargeReading[], options: ParseOptions, whole: string): ChargeReading {
+function chooseReading(
+  readings: ChargeReading[],
+  options: ParseOptions,
+  whole: string,
+): ChargeReading {
   if (readings.length === 1) return readings[0];
   const parsed = readings.map((r) => {
     try {
@@ -92,7 +96,9 @@ export function parseFormulaWith(text: string, options: ParseOptions = {}): Pars
     adductTexts.push((times === 1 ? "" : String(times)) + m[2]);
   }
   const anhydrousFormula = core.replace(/\s+/g, "") + chargeSuffix(reading.charge);
-  const formula = [core.replace(/\s+/g, "") + chargeSuffix(reading.charge), ...adductTexts].join(HYDRATE_DOT);
+  const formula = [core.replace(/\s+/g, "") + chargeSuffix(reading.charge), ...adductTexts].join(
+    HYDRATE_DOT,
+  );
   return {
     input,
     formula,

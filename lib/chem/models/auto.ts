@@ -32,38 +32,67 @@ const sqrtILimit = (c: AutoContext) => limitingLawSqrtIMax(chargeProductMagnitud
 export const DH_FAMILY_CANDIDATES: readonly AutoCandidate[] = [
   {
     id: "truesdell-jones",
-    covers: (c) => isWater(c) && c.ionicStrengthMolal <= 2 && present(c).every((i) => truesdellJonesIon(i.formula, i.charge, c.temperatureC).source === "WATEQ4F")
-      ? "every ion has a fitted Truesdell–Jones b (WATEQ4F) and I ≤ 2 mol/kg" : null,
+    covers: (c) =>
+      isWater(c) &&
+      c.ionicStrengthMolal <= 2 &&
+      present(c).every(
+        (i) => truesdellJonesIon(i.formula, i.charge, c.temperatureC).source === "WATEQ4F",
+      )
+        ? "every ion has a fitted Truesdell–Jones b (WATEQ4F) and I ≤ 2 mol/kg"
+        : null,
   },
   {
     id: "dh-extended",
-    covers: (c) => isWater(c) && c.ionicStrengthMolal <= 0.1 && present(c).every((i) => kiellandIonSize(i.formula) !== undefined)
-      ? "I ≤ 0.1 mol/kg and every ion has a Kielland ion size" : null,
+    covers: (c) =>
+      isWater(c) &&
+      c.ionicStrengthMolal <= 0.1 &&
+      present(c).every((i) => kiellandIonSize(i.formula) !== undefined)
+        ? "I ≤ 0.1 mol/kg and every ion has a Kielland ion size"
+        : null,
   },
   {
     id: "truesdell-jones",
-    covers: (c) => isWater(c) && c.ionicStrengthMolal <= 0.5 &&
-      present(c).every((i) => truesdellJonesParameters(i.formula) || bDotIonSize(i.formula) !== undefined || kiellandIonSize(i.formula) !== undefined)
-      ? "I ≤ 0.5 mol/kg and every ion has a tabulated size (b-dot form for ions without a fitted b)" : null,
+    covers: (c) =>
+      isWater(c) &&
+      c.ionicStrengthMolal <= 0.5 &&
+      present(c).every(
+        (i) =>
+          truesdellJonesParameters(i.formula) ||
+          bDotIonSize(i.formula) !== undefined ||
+          kiellandIonSize(i.formula) !== undefined,
+      )
+        ? "I ≤ 0.5 mol/kg and every ion has a tabulated size (b-dot form for ions without a fitted b)"
+        : null,
   },
   {
     id: "dh-limiting",
-    covers: (c) => !isWater(c) && Math.sqrt(c.ionicStrengthMolal) <= sqrtILimit(c)
-      ? `dilute solution in ${c.solvent}: the limiting law needs only εr and ρ of the solvent` : null,
+    covers: (c) =>
+      !isWater(c) && Math.sqrt(c.ionicStrengthMolal) <= sqrtILimit(c)
+        ? `dilute solution in ${c.solvent}: the limiting law needs only εr and ρ of the solvent`
+        : null,
   },
   {
     id: "dh-extended",
-    covers: (c) => !isWater(c) && c.ionicStrengthMolal <= 0.1
-      ? `I ≤ 0.1 mol/kg in ${c.solvent}; ion sizes are water values` : null,
+    covers: (c) =>
+      !isWater(c) && c.ionicStrengthMolal <= 0.1
+        ? `I ≤ 0.1 mol/kg in ${c.solvent}; ion sizes are water values`
+        : null,
   },
   {
     id: "davies",
-    covers: (c) => c.ionicStrengthMolal <= 0.5 ? "I ≤ 0.5 mol/kg and some ions have no tabulated size: Davies needs none" : null,
+    covers: (c) =>
+      c.ionicStrengthMolal <= 0.5
+        ? "I ≤ 0.5 mol/kg and some ions have no tabulated size: Davies needs none"
+        : null,
   },
 ];
 
 /** Part 2: insert the Pitzer and SIT candidates before the Debye–Hückel family. */
-export const AUTO_CANDIDATES: AutoCandidate[] = [PITZER_AUTO_CANDIDATE, SIT_AUTO_CANDIDATE, ...DH_FAMILY_CANDIDATES];
+export const AUTO_CANDIDATES: AutoCandidate[] = [
+  PITZER_AUTO_CANDIDATE,
+  SIT_AUTO_CANDIDATE,
+  ...DH_FAMILY_CANDIDATES,
+];
 
 export interface AutoChoice {
   id: ActivityModelId;
@@ -72,7 +101,10 @@ export interface AutoChoice {
   covered: boolean;
 }
 
-export function chooseModel(context: AutoContext, candidates: readonly AutoCandidate[] = AUTO_CANDIDATES): AutoChoice {
+export function chooseModel(
+  context: AutoContext,
+  candidates: readonly AutoCandidate[] = AUTO_CANDIDATES,
+): AutoChoice {
   for (const candidate of candidates) {
     const reason = candidate.covers(context);
     if (reason) return { id: candidate.id, reason, covered: true };

@@ -8,7 +8,12 @@
 import type { ActivityModel, ActivityModelInput } from "./types";
 import { dhFamilyOutput, substitutedCore } from "./dh-common";
 
-const RANGE = { maxChargeMagnitude: 2, label: "Davies", maxIonicStrengthMolal: 0.5, waterParameters: "the empirical linear coefficient" };
+const RANGE = {
+  maxChargeMagnitude: 2,
+  label: "Davies",
+  maxIonicStrengthMolal: 0.5,
+  waterParameters: "the empirical linear coefficient",
+};
 
 function coefficient(input: ActivityModelInput): number {
   return input.options?.daviesCoefficient ?? 0.3;
@@ -18,7 +23,8 @@ export const daviesModel: ActivityModel = {
   id: "davies",
   label: RANGE.label,
   formulaTex: String.raw`\log_{10}\gamma_i = -A z_i^2 \left(\frac{\sqrt{I}}{1 + \sqrt{I}} - 0.3\,I\right)`,
-  validityNote: "I ≤ 0.5 mol/kg (common practice; errors grow to about 10 % there); empirical, for water. Coefficient 0.3 (Davies 1962) or 0.2.",
+  validityNote:
+    "I ≤ 0.5 mol/kg (common practice; errors grow to about 10 % there); empirical, for water. Coefficient 0.3 (Davies 1962) or 0.2.",
   maxIonicStrengthMolal: RANGE.maxIonicStrengthMolal,
   compute(input: ActivityModelInput) {
     // −A z² (√I/(1+√I) − c I) is the common form with β = 1 and b = c A z².

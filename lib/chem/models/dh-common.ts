@@ -21,7 +21,11 @@ function formatTexNumber(value: number): string {
   return `${Number(mantissa)}\\times10^{${Number(exponent)}}`;
 }
 
-export function ionicStrengthMessage(label: string, maxIonicStrengthMolal: number, input: ActivityModelInput): string[] {
+export function ionicStrengthMessage(
+  label: string,
+  maxIonicStrengthMolal: number,
+  input: ActivityModelInput,
+): string[] {
   if (input.ionicStrengthMolal <= maxIonicStrengthMolal) return [];
   return [
     `${label} is documented up to I = ${maxIonicStrengthMolal} mol/kg; this solution has I = ${texNumber(input.ionicStrengthMolal)} mol/kg, so its activity coefficients are extrapolated.`,
@@ -29,7 +33,9 @@ export function ionicStrengthMessage(label: string, maxIonicStrengthMolal: numbe
 }
 
 export function waterOnlyNote(label: string, what: string, solvent: string): string[] {
-  return solvent === "water" ? [] : [`${label}: ${what} were fitted for water; for ${solvent} they are an extrapolation.`];
+  return solvent === "water"
+    ? []
+    : [`${label}: ${what} were fitted for water; for ${solvent} they are an extrapolation.`];
 }
 
 /** Largest cation charge × largest anion charge magnitude among the ions present. */
@@ -44,7 +50,12 @@ export function chargeProductMagnitude(ions: readonly ModelIon[]): number {
   return Math.max(zPlus, 1) * Math.max(zMinus, 1);
 }
 
-export function substitutedCore(input: ActivityModelInput): { A: string; B: string; I: string; sqrtI: string } {
+export function substitutedCore(input: ActivityModelInput): {
+  A: string;
+  B: string;
+  I: string;
+  sqrtI: string;
+} {
   return {
     A: texNumber(input.constants.aLog10),
     B: texNumber(input.constants.bPerAngstrom),
@@ -63,14 +74,25 @@ export const ION_ASSOCIATION_ONSET_MOLAL = 0.05;
 
 export function ionAssociationMessage(input: ActivityModelInput): string[] {
   if (input.ionicStrengthMolal <= ION_ASSOCIATION_ONSET_MOLAL) return [];
-  const multivalentAnions = input.ions.filter((i) => i.charge <= -2 && i.molality > 0).map((i) => i.formula);
-  if (multivalentAnions.length === 0 || !input.ions.some((i) => i.charge > 0 && i.molality > 0)) return [];
-  return [`${multivalentAnions.join(", ")} form ion pairs with cations above I ≈ ${ION_ASSOCIATION_ONSET_MOLAL} mol/kg; without speciation these free-ion activity coefficients overestimate γ±.`];
+  const multivalentAnions = input.ions
+    .filter((i) => i.charge <= -2 && i.molality > 0)
+    .map((i) => i.formula);
+  if (multivalentAnions.length === 0 || !input.ions.some((i) => i.charge > 0 && i.molality > 0))
+    return [];
+  return [
+    `${multivalentAnions.join(", ")} form ion pairs with cations above I ≈ ${ION_ASSOCIATION_ONSET_MOLAL} mol/kg; without speciation these free-ion activity coefficients overestimate γ±.`,
+  ];
 }
 
 // Gauss–Legendre nodes and weights on [0, 1] (8 points, standard tables), for the dilution integral.
-export const GL_NODES = [0.0198550717512319, 0.1016667612931866, 0.2372337950418355, 0.4082826787521751, 0.5917173212478249, 0.7627662049581645, 0.8983332387068134, 0.9801449282487681];
-export const GL_WEIGHTS = [0.0506142681451881, 0.1111905172266872, 0.1568533229389436, 0.181341891689181, 0.181341891689181, 0.1568533229389436, 0.1111905172266872, 0.0506142681451881];
+export const GL_NODES = [
+  0.0198550717512319, 0.1016667612931866, 0.2372337950418355, 0.4082826787521751,
+  0.5917173212478249, 0.7627662049581645, 0.8983332387068134, 0.9801449282487681,
+];
+export const GL_WEIGHTS = [
+  0.0506142681451881, 0.1111905172266872, 0.1568533229389436, 0.181341891689181, 0.181341891689181,
+  0.1568533229389436, 0.1111905172266872, 0.0506142681451881,
+];
 
 /**
  * Every Debye–Hückel-family model is one form with per-ion coefficients:
@@ -123,7 +145,12 @@ export function evaluateExtendedForm(
  * ionic-strength range and ion-association checks, and the note for non-water solvents.
  */
 export function dhFamilyOutput(
-  model: { label: string; maxIonicStrengthMolal: number; waterParameters?: string; maxChargeMagnitude?: number },
+  model: {
+    label: string;
+    maxIonicStrengthMolal: number;
+    waterParameters?: string;
+    maxChargeMagnitude?: number;
+  },
   input: ActivityModelInput,
   beta: ArrayLike<number>,
   b: ArrayLike<number>,
@@ -131,19 +158,30 @@ export function dhFamilyOutput(
 ): ActivityModelOutput {
   const { lnGamma, osmoticCoefficient } = evaluateExtendedForm(input, beta, b);
   const validityMessages = [...(extra.validityMessages ?? [])];
-  if (validityMessages.length === 0) validityMessages.push(...ionicStrengthMessage(model.label, model.maxIonicStrengthMolal, input));
+  if (validityMessages.length === 0)
+    validityMessages.push(...ionicStrengthMessage(model.label, model.maxIonicStrengthMolal, input));
   validityMessages.push(...chargeTypeMessage(model, input));
   validityMessages.push(...ionAssociationMessage(input));
   // Parameters fitted for water are outside their domain in another solvent: a validity matter.
-  if (model.waterParameters) validityMessages.push(...waterOnlyNote(model.label, model.waterParameters, input.solvent));
+  if (model.waterParameters)
+    validityMessages.push(...waterOnlyNote(model.label, model.waterParameters, input.solvent));
   const notes = [...(extra.notes ?? [])];
   return { lnGamma, osmoticCoefficient, validityMessages, notes };
 }
 
 /** Ions of higher charge than the model was built for (its documented charge types). */
-export function chargeTypeMessage(model: { label: string; maxChargeMagnitude?: number }, input: ActivityModelInput): string[] {
+export function chargeTypeMessage(
+  model: { label: string; maxChargeMagnitude?: number },
+  input: ActivityModelInput,
+): string[] {
   const limit = model.maxChargeMagnitude;
   if (limit === undefined) return [];
-  const beyond = input.ions.filter((i) => Math.abs(i.charge) > limit && i.molality > 0).map((i) => i.formula);
-  return beyond.length ? [`${model.label} is documented for ions of charge up to ±${limit}; ${beyond.join(", ")} ${beyond.length > 1 ? "are" : "is"} beyond it.`] : [];
+  const beyond = input.ions
+    .filter((i) => Math.abs(i.charge) > limit && i.molality > 0)
+    .map((i) => i.formula);
+  return beyond.length
+    ? [
+        `${model.label} is documented for ions of charge up to ±${limit}; ${beyond.join(", ")} ${beyond.length > 1 ? "are" : "is"} beyond it.`,
+      ]
+    : [];
 }

@@ -8,7 +8,12 @@ import type { ActivityModel, ActivityModelInput } from "./types";
 import { dhFamilyOutput, substitutedCore } from "./dh-common";
 import { assumedIonSize, kiellandIonSize } from "./ion-parameters";
 
-const RANGE = { maxChargeMagnitude: 4, label: "Extended Debye–Hückel (Kielland ion sizes)", maxIonicStrengthMolal: 0.1, waterParameters: "Kielland's ion sizes" };
+const RANGE = {
+  maxChargeMagnitude: 4,
+  label: "Extended Debye–Hückel (Kielland ion sizes)",
+  maxIonicStrengthMolal: 0.1,
+  waterParameters: "Kielland's ion sizes",
+};
 
 export const dhExtendedModel: ActivityModel = {
   id: "dh-extended",

@@ -19,18 +19,28 @@ export const dhLimitingModel: ActivityModel = {
   id: "dh-limiting",
   label: "Debye–Hückel limiting law",
   formulaTex: String.raw`\log_{10}\gamma_i = -A z_i^2 \sqrt{I}`,
-  validityNote: "Dilute solutions only: √I ≤ 0.1 for 1:1 electrolytes, √I ≤ 0.1/|z₊z₋| for higher charges (common practice).",
+  validityNote:
+    "Dilute solutions only: √I ≤ 0.1 for 1:1 electrolytes, √I ≤ 0.1/|z₊z₋| for higher charges (common practice).",
   maxIonicStrengthMolal: DH_LIMITING_SQRT_I_MAX_1_1 ** 2,
   compute(input: ActivityModelInput) {
     const sqrtI = Math.sqrt(input.ionicStrengthMolal);
     const product = chargeProductMagnitude(input.ions);
     const limit = limitingLawSqrtIMax(product);
-    const validityMessages = sqrtI > limit
-      ? [`The Debye–Hückel limiting law holds for ${product === 1 ? "1:1 electrolytes" : `charge product |z₊z₋| = ${product}`} only up to √I ≈ ${texNumber(limit)} (here √I = ${texNumber(sqrtI)}); use the extended equation, Davies or Truesdell–Jones.`]
-      : [];
+    const validityMessages =
+      sqrtI > limit
+        ? [
+            `The Debye–Hückel limiting law holds for ${product === 1 ? "1:1 electrolytes" : `charge product |z₊z₋| = ${product}`} only up to √I ≈ ${texNumber(limit)} (here √I = ${texNumber(sqrtI)}); use the extended equation, Davies or Truesdell–Jones.`,
+          ]
+        : [];
     const zeros = new Array<number>(input.ions.length).fill(0);
     // The range check is the √I rule above, not a fixed ionic strength.
-    return dhFamilyOutput({ label: "Debye–Hückel limiting law", maxIonicStrengthMolal: Number.POSITIVE_INFINITY }, input, zeros, zeros, { validityMessages });
+    return dhFamilyOutput(
+      { label: "Debye–Hückel limiting law", maxIonicStrengthMolal: Number.POSITIVE_INFINITY },
+      input,
+      zeros,
+      zeros,
+      { validityMessages },
+    );
   },
   substitutedTex(input) {
     const { A, sqrtI } = substitutedCore(input);

@@ -8,7 +8,12 @@
 import type { ActivityModel, ActivityModelInput } from "./types";
 import { dhFamilyOutput, substitutedCore } from "./dh-common";
 
-const RANGE = { maxChargeMagnitude: 2, label: "Güntelberg", maxIonicStrengthMolal: 0.1, waterParameters: "the product B·å = 1" };
+const RANGE = {
+  maxChargeMagnitude: 2,
+  label: "Güntelberg",
+  maxIonicStrengthMolal: 0.1,
+  waterParameters: "the product B·å = 1",
+};
 
 export const guntelbergModel: ActivityModel = {
   id: "guntelberg",

@@ -10,7 +10,8 @@ import { TRUESDELL_JONES_PARAMETERS } from "../data/ion-size-truesdell-jones";
 
 function byKey<T>(table: Readonly<Record<string, T>>): Map<string, T> {
   const map = new Map<string, T>();
-  for (const [formula, value] of Object.entries(table)) map.set(parseFormulaWith(formula, { isKnownIonKey }).key, value);
+  for (const [formula, value] of Object.entries(table))
+    map.set(parseFormulaWith(formula, { isKnownIonKey }).key, value);
   return map;
 }
 
@@ -39,7 +40,9 @@ export function kiellandIonSize(formula: string): number | undefined {
   return key ? KIELLAND.get(key) : undefined;
 }
 
-export function truesdellJonesParameters(formula: string): { aAngstrom: number; b: number } | undefined {
+export function truesdellJonesParameters(
+  formula: string,
+): { aAngstrom: number; b: number } | undefined {
   const key = ionKeyOf(formula);
   return key ? TRUESDELL_JONES.get(key) : undefined;
 }

@@ -25,7 +25,10 @@ export function getModel(id: string): ActivityModel {
   const model = MODEL_REGISTRY[id as ActivityModelId];
   if (model) return model;
   const available = ["auto", ...Object.keys(MODEL_REGISTRY)].join(", ");
-  throw new ChemInputError(`Unknown activity model "${id}". Available models: ${available}.`, { field: "model", code: "unknown_model" });
+  throw new ChemInputError(`Unknown activity model "${id}". Available models: ${available}.`, {
+    field: "model",
+    code: "unknown_model",
+  });
 }
 
 export interface ActivityModelSummary {
@@ -38,8 +41,18 @@ export interface ActivityModelSummary {
 /** The models a user can pick, "auto" first (for the solution block's model menu). */
 export function listActivityModels(): ActivityModelSummary[] {
   return [
-    { id: "auto", label: "Automatic (most accurate model available)", formulaTex: "", validityNote: "Chooses by composition, ionic strength and solvent, and says why." },
-    ...Object.values(MODEL_REGISTRY).map((m) => ({ id: m.id, label: m.label, formulaTex: m.formulaTex, validityNote: m.validityNote ?? "" })),
+    {
+      id: "auto",
+      label: "Automatic (most accurate model available)",
+      formulaTex: "",
+      validityNote: "Chooses by composition, ionic strength and solvent, and says why.",
+    },
+    ...Object.values(MODEL_REGISTRY).map((m) => ({
+      id: m.id,
+      label: m.label,
+      formulaTex: m.formulaTex,
+      validityNote: m.validityNote ?? "",
+    })),
   ];
 }
 

@@ -9,7 +9,12 @@
 import { bDot } from "../data/ion-size-bdot";
 import type { ActivityModel, ActivityModelInput } from "./types";
 import { dhFamilyOutput, ionicStrengthMessage, substitutedCore, texNumber } from "./dh-common";
-import { assumedIonSize, bDotIonSize, kiellandIonSize, truesdellJonesParameters } from "./ion-parameters";
+import {
+  assumedIonSize,
+  bDotIonSize,
+  kiellandIonSize,
+  truesdellJonesParameters,
+} from "./ion-parameters";
 
 const LABEL = "Truesdell–Jones (b-dot)";
 const MAX_I = 2;
@@ -33,14 +38,22 @@ function truesdellJonesIonStatic(formula: string, charge: number): TruesdellJone
     if (fitted && fitted.b !== 0) cached = { ...fitted, source: "WATEQ4F" };
     else {
       const size = bDotIonSize(formula) ?? kiellandIonSize(formula);
-      cached = { aAngstrom: size ?? assumedIonSize(charge), b: Number.NaN, source: size === undefined ? "assumed" : "b-dot" };
+      cached = {
+        aAngstrom: size ?? assumedIonSize(charge),
+        b: Number.NaN,
+        source: size === undefined ? "assumed" : "b-dot",
+      };
     }
     ionCache.set(formula, cached);
   }
   return cached;
 }
 
-export function truesdellJonesIon(formula: string, charge: number, temperatureC: number): TruesdellJonesIonParameters {
+export function truesdellJonesIon(
+  formula: string,
+  charge: number,
+  temperatureC: number,
+): TruesdellJonesIonParameters {
   const p = truesdellJonesIonStatic(formula, charge);
   return p.source === "WATEQ4F" ? p : { ...p, b: bDot(temperatureC) };
 }
@@ -49,7 +62,8 @@ export const truesdellJonesModel: ActivityModel = {
   id: "truesdell-jones",
   label: LABEL,
   formulaTex: String.raw`\log_{10}\gamma_i = -\frac{A z_i^2 \sqrt{I}}{1 + B \mathring{a}_i \sqrt{I}} + b_i I`,
-  validityNote: "I ≤ 2 mol/kg with WATEQ4F-fitted ions (Truesdell & Jones 1974); b-dot ions (Helgeson 1969) to about 0.5 mol/kg; water.",
+  validityNote:
+    "I ≤ 2 mol/kg with WATEQ4F-fitted ions (Truesdell & Jones 1974); b-dot ions (Helgeson 1969) to about 0.5 mol/kg; water.",
   maxIonicStrengthMolal: MAX_I,
   compute(input: ActivityModelInput) {
     const I = input.ionicStrengthMolal;
@@ -69,13 +83,24 @@ export const truesdellJonesModel: ActivityModel = {
       b[i] = p.source === "WATEQ4F" ? p.b : bDotHere;
     }
     const notes: string[] = [];
-    if (bDotIons.length) notes.push(`No fitted Truesdell–Jones b for ${bDotIons.join(", ")}: b-dot form used (Ḃ = ${texNumber(bDotHere)} kg/mol).`);
+    if (bDotIons.length)
+      notes.push(
+        `No fitted Truesdell–Jones b for ${bDotIons.join(", ")}: b-dot form used (Ḃ = ${texNumber(bDotHere)} kg/mol).`,
+      );
     if (assumed.length) notes.push(`No tabulated ion size for ${assumed.join(", ")}: assumed.`);
     const validityMessages = ionicStrengthMessage(LABEL, MAX_I, input);
     if (bDotIons.length && I > BDOT_MAX_I && validityMessages.length === 0) {
-      validityMessages.push(`Ions without fitted b (${bDotIons.join(", ")}) use the b-dot form, tested to about I = ${BDOT_MAX_I} mol/kg.`);
+      validityMessages.push(
+        `Ions without fitted b (${bDotIons.join(", ")}) use the b-dot form, tested to about I = ${BDOT_MAX_I} mol/kg.`,
+      );
     }
-    return dhFamilyOutput({ label: LABEL, maxIonicStrengthMolal: MAX_I, waterParameters: "the å and b parameters" }, input, beta, b, { validityMessages, notes });
+    return dhFamilyOutput(
+      { label: LABEL, maxIonicStrengthMolal: MAX_I, waterParameters: "the å and b parameters" },
+      input,
+      beta,
+      b,
+      { validityMessages, notes },
+    );
   },
   substitutedTex(input) {
     const { A, B, I, sqrtI } = substitutedCore(input);

@@ -4,13 +4,7 @@
  */
 
 export type ActivityModelId =
-  | "dh-limiting"
-  | "dh-extended"
-  | "guntelberg"
-  | "davies"
-  | "truesdell-jones"
-  | "pitzer"
-  | "sit";
+  "dh-limiting" | "dh-extended" | "guntelberg" | "davies" | "truesdell-jones" | "pitzer" | "sit";
 
 /** An ion as the models see it: molal concentration on the molality scale (mol/kg solvent). */
 export interface ModelIon {

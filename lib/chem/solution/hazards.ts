@@ -30,14 +30,18 @@ function computeHazards(species: readonly ResolvedSpecies[], solventId: string):
   }
   const acidic = ions.has("H+") || species.some((s) => s.kind === "acid");
   if (acidic && (ions.has("Fe(CN)6^3-") || ions.has("Fe(CN)6^4-"))) {
-    hazards.add("Hexacyanoferrate with acid: hot or concentrated acid releases HCN gas; work in a fume hood.");
+    hazards.add(
+      "Hexacyanoferrate with acid: hot or concentrated acid releases HCN gas; work in a fume hood.",
+    );
   }
   if (acidic && ions.has("CN-")) hazards.add("Cyanide with acid releases HCN gas: do not mix.");
   if (acidic && FLUORINATED.some((f) => ions.has(f))) {
     hazards.add("Fluoride or fluorinated anion with acid can form HF: use HF precautions.");
   }
   if (ions.has("ClO4-") && solventId !== "water") {
-    hazards.add("Perchlorate in an organic solvent: never evaporate to dryness; dry perchlorate–organic residues can explode.");
+    hazards.add(
+      "Perchlorate in an organic solvent: never evaporate to dryness; dry perchlorate–organic residues can explode.",
+    );
   }
   return [...hazards];
 }

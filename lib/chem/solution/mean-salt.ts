@@ -33,8 +33,13 @@ export function meanSaltResults(
     const meanGamma = Math.exp(lnMeanGamma);
     const meanMolality = amounts[component].molality * Math.exp(logStoich / nu);
     salts.push({
-      formula: s.saltFormula, component, meanGamma, meanMolality, meanActivity: meanGamma * meanMolality,
-      lnMeanGamma, log10MeanGamma: lnMeanGamma / Math.LN10,
+      formula: s.saltFormula,
+      component,
+      meanGamma,
+      meanMolality,
+      meanActivity: meanGamma * meanMolality,
+      lnMeanGamma,
+      log10MeanGamma: lnMeanGamma / Math.LN10,
     });
   });
   return salts;

@@ -38,6 +38,9 @@ export function osmoticCoefficientByGibbsDuhem(
   return 1 + (endTerm - integral) / totalMolality;
 }
 
-export function waterActivityFromOsmotic(osmoticCoefficient: number, totalMolality: number): number {
+export function waterActivityFromOsmotic(
+  osmoticCoefficient: number,
+  totalMolality: number,
+): number {
   return Math.exp(-osmoticCoefficient * WATER_MOLAR_MASS_KG_PER_MOL * totalMolality);
 }

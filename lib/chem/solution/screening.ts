@@ -4,7 +4,13 @@
  *   κ² = 2 N_A e² I_c / (ε0 εr k T)   with I_c in mol/m³;  Debye length λ_D = 1/κ
  * (the general expression for any solvent; CODATA 2018 constants).
  */
-import { AVOGADRO_PER_MOL, BOLTZMANN_J_PER_K, ELEMENTARY_CHARGE_C, VACUUM_PERMITTIVITY_F_PER_M, kelvin } from "../constants";
+import {
+  AVOGADRO_PER_MOL,
+  BOLTZMANN_J_PER_K,
+  ELEMENTARY_CHARGE_C,
+  VACUUM_PERMITTIVITY_F_PER_M,
+  kelvin,
+} from "../constants";
 
 export interface IonAmount {
   formula: string;
@@ -25,17 +31,27 @@ export function ionicStrength(ions: readonly IonAmount[]): { molal: number; mola
 }
 
 /** κ in nm⁻¹ from the molar ionic strength. */
-export function kappaPerNm(ionicStrengthMolar: number, relativePermittivity: number, temperatureC: number): number {
+export function kappaPerNm(
+  ionicStrengthMolar: number,
+  relativePermittivity: number,
+  temperatureC: number,
+): number {
   const molPerM3 = ionicStrengthMolar * 1000;
   const kappaPerM = Math.sqrt(
     (2 * AVOGADRO_PER_MOL * ELEMENTARY_CHARGE_C ** 2 * molPerM3) /
-      (VACUUM_PERMITTIVITY_F_PER_M * relativePermittivity * BOLTZMANN_J_PER_K * kelvin(temperatureC)),
+      (VACUUM_PERMITTIVITY_F_PER_M *
+        relativePermittivity *
+        BOLTZMANN_J_PER_K *
+        kelvin(temperatureC)),
   );
   return kappaPerM * 1e-9;
 }
 
 /** Charge excess in equivalents per kg (Σ mi zi) and a warning when it is not ~0. */
-export function chargeBalance(ions: readonly IonAmount[]): { excessEqPerKg: number; warning?: string } {
+export function chargeBalance(ions: readonly IonAmount[]): {
+  excessEqPerKg: number;
+  warning?: string;
+} {
   let sum = 0;
   let scale = 0;
   for (const ion of ions) {
@@ -52,7 +68,16 @@ export function chargeBalance(ions: readonly IonAmount[]): { excessEqPerKg: numb
 
 /** Bjerrum length e² / (4π ε0 εr k T) in nm: the distance at which ion–ion energy equals kT. */
 export function bjerrumLengthNm(relativePermittivity: number, temperatureC: number): number {
-  return (ELEMENTARY_CHARGE_C ** 2 / (4 * Math.PI * VACUUM_PERMITTIVITY_F_PER_M * relativePermittivity * BOLTZMANN_J_PER_K * kelvin(temperatureC))) * 1e9;
+  return (
+    (ELEMENTARY_CHARGE_C ** 2 /
+      (4 *
+        Math.PI *
+        VACUUM_PERMITTIVITY_F_PER_M *
+        relativePermittivity *
+        BOLTZMANN_J_PER_K *
+        kelvin(temperatureC))) *
+    1e9
+  );
 }
 
 /**
@@ -60,7 +85,11 @@ export function bjerrumLengthNm(relativePermittivity: number, temperatureC: numb
  * Selsk. Mat.-Fys. Medd. 7, 1): below εr ≈ 20 free-ion models describe only a minority of
  * the salt (the threshold is common practice, no single source).
  */
-export function ionPairingMessage(relativePermittivity: number, temperatureC: number, ionicStrengthMolar: number): string[] {
+export function ionPairingMessage(
+  relativePermittivity: number,
+  temperatureC: number,
+  ionicStrengthMolar: number,
+): string[] {
   if (relativePermittivity >= 20 || ionicStrengthMolar <= 1e-4) return [];
   return [
     `εr = ${relativePermittivity.toFixed(1)}: the Bjerrum length is ${bjerrumLengthNm(relativePermittivity, temperatureC).toFixed(1)} nm, so most ions are paired; free-ion activity coefficients and I overstate the dissociated salt.`,

@@ -67,7 +67,12 @@ export interface SolutionResult {
   waterActivity?: number;
   chargeExcessEqPerKg: number;
   constants: DebyeHuckelConstants;
-  model: { requested: ActivityModelId | "auto"; used: ActivityModelId; reason: string; label: string };
+  model: {
+    requested: ActivityModelId | "auto";
+    used: ActivityModelId;
+    reason: string;
+    label: string;
+  };
   /** The model's equation with this solution's numbers, for KaTeX. */
   formulaTex: string;
   formulaTexGeneral: string;

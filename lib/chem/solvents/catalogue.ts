@@ -26,7 +26,8 @@ export interface SolventData {
   aliases: string[];
 }
 
-const IZUTSU = "Izutsu (2009) Electrochemistry in Nonaqueous Solutions, 2nd ed., Table 1.1 (from memory)";
+const IZUTSU =
+  "Izutsu (2009) Electrochemistry in Nonaqueous Solutions, 2nd ed., Table 1.1 (from memory)";
 
 // [id, name, formula, mp °C, bp °C, εr 25 °C, ρ 25 °C g/mL, aliases]
 const NON_AQUEOUS: [string, string, string, number, number, number, number, string[]][] = [
@@ -36,7 +37,16 @@ const NON_AQUEOUS: [string, string, string, number, number, number, number, stri
   ["propylene-carbonate", "propylene carbonate", "C4H6O3", -48.8, 242, 64.92, 1.1995, ["PC"]],
   ["methanol", "methanol", "CH3OH", -97.7, 64.7, 32.66, 0.7866, ["MeOH"]],
   ["ethanol", "ethanol", "C2H5OH", -114.1, 78.3, 24.55, 0.7849, ["EtOH"]],
-  ["dichloromethane", "dichloromethane", "CH2Cl2", -96.7, 39.6, 8.93, 1.3168, ["DCM", "methylene chloride"]],
+  [
+    "dichloromethane",
+    "dichloromethane",
+    "CH2Cl2",
+    -96.7,
+    39.6,
+    8.93,
+    1.3168,
+    ["DCM", "methylene chloride"],
+  ],
   ["acetone", "acetone", "(CH3)2CO", -94.7, 56.1, 20.56, 0.7845, ["propanone"]],
   ["thf", "tetrahydrofuran", "C4H8O", -108.4, 66, 7.58, 0.8833, ["THF"]],
   ["nitromethane", "nitromethane", "CH3NO2", -28.5, 101.2, 35.87, 1.1313, ["MeNO2"]],
@@ -52,20 +62,29 @@ const WATER: SolventData = {
   relativePermittivity25C: waterRelativePermittivity(25),
   densityGPerMl25C: waterDensityGPerMl(25),
   temperatureDependent: true,
-  source: "εr: Malmberg & Maryott (1956) J. Res. NBS 56, 1–8; ρ: Kell (1975) J. Chem. Eng. Data 20, 97–105",
+  source:
+    "εr: Malmberg & Maryott (1956) J. Res. NBS 56, 1–8; ρ: Kell (1975) J. Chem. Eng. Data 20, 97–105",
   aliases: ["H2O", "aqueous"],
 };
 
 export const SOLVENTS: readonly SolventData[] = [
   WATER,
   ...NON_AQUEOUS.map(([id, name, formula, min, max, eps, rho, aliases]) => ({
-    id, name, formula, liquidRangeC: { min, max }, relativePermittivity25C: eps, densityGPerMl25C: rho,
-    temperatureDependent: false, source: IZUTSU, aliases,
+    id,
+    name,
+    formula,
+    liquidRangeC: { min, max },
+    relativePermittivity25C: eps,
+    densityGPerMl25C: rho,
+    temperatureDependent: false,
+    source: IZUTSU,
+    aliases,
   })),
 ];
 
 const BY_NAME = new Map<string, SolventData>();
-for (const s of SOLVENTS) for (const n of [s.id, s.name, s.formula, ...s.aliases]) BY_NAME.set(n.toLowerCase(), s);
+for (const s of SOLVENTS)
+  for (const n of [s.id, s.name, s.formula, ...s.aliases]) BY_NAME.set(n.toLowerCase(), s);
 
 export function findSolvent(idOrName: string): SolventData | undefined {
   return BY_NAME.get(String(idOrName).trim().toLowerCase());
@@ -82,8 +101,24 @@ export function getSolvent(idOrName: string): SolventData {
   return solvent;
 }
 
-export function listSolvents(): { id: string; name: string; formula: string; relativePermittivity25C: number; densityGPerMl25C: number; liquidRangeC: { min: number; max: number }; source: string }[] {
-  return SOLVENTS.map(({ id, name, formula, relativePermittivity25C, densityGPerMl25C, liquidRangeC, source }) => ({
-    id, name, formula, relativePermittivity25C, densityGPerMl25C, liquidRangeC: { ...liquidRangeC }, source,
-  }));
+export function listSolvents(): {
+  id: string;
+  name: string;
+  formula: string;
+  relativePermittivity25C: number;
+  densityGPerMl25C: number;
+  liquidRangeC: { min: number; max: number };
+  source: string;
+}[] {
+  return SOLVENTS.map(
+    ({ id, name, formula, relativePermittivity25C, densityGPerMl25C, liquidRangeC, source }) => ({
+      id,
+      name,
+      formula,
+      relativePermittivity25C,
+      densityGPerMl25C,
+      liquidRangeC: { ...liquidRangeC },
+      source,
+    }),
+  );
 }

@@ -45,6 +45,7 @@ export function waterRelativePermittivity(temperatureC: number): number {
 /** Density of water in g/mL (= g/cm³) at 1 atm, Kell (1975). */
 export function waterDensityGPerMl(temperatureC: number): number {
   assertWaterTemperature(temperatureC);
-  const kgPerM3 = polynomial(KELL_1975_NUMERATOR, temperatureC) / (1 + KELL_1975_DENOMINATOR * temperatureC);
+  const kgPerM3 =
+    polynomial(KELL_1975_NUMERATOR, temperatureC) / (1 + KELL_1975_DENOMINATOR * temperatureC);
   return kgPerM3 / 1000;
 }

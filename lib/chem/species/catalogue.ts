@@ -13,7 +13,8 @@ export interface CatalogueSalt extends SaltData {
 }
 
 function kindOf(salt: SaltData, ions: IonCount[]): SpeciesKind {
-  if (salt.weak) return salt.name.endsWith("acid") ? "acid" : salt.formula === "NH3" ? "base" : "molecule";
+  if (salt.weak)
+    return salt.name.endsWith("acid") ? "acid" : salt.formula === "NH3" ? "base" : "molecule";
   if (ions.some((i) => i.formula === "H+")) return "acid";
   if (ions.some((i) => i.formula === "OH-")) return "base";
   return "salt";
@@ -27,12 +28,16 @@ for (const salt of SALTS) {
   const parsed = parseFormulaWith(salt.formula, { isKnownIonKey });
   const ions = parseDissociation(salt.dissociation);
   const entry: CatalogueSalt = {
-    ...salt, ions, key: parsed.anhydrousKey, kind: kindOf(salt, ions),
+    ...salt,
+    ions,
+    key: parsed.anhydrousKey,
+    kind: kindOf(salt, ions),
     hazards: COMPOUND_HAZARDS[salt.formula] ? [COMPOUND_HAZARDS[salt.formula]] : [],
   };
   CATALOGUE_SALTS.push(entry);
   BY_KEY.set(entry.key, entry);
-  for (const alias of [salt.name, ...(salt.aliases ?? [])]) BY_ALIAS.set(alias.toLowerCase(), entry);
+  for (const alias of [salt.name, ...(salt.aliases ?? [])])
+    BY_ALIAS.set(alias.toLowerCase(), entry);
 }
 
 export function saltByKey(key: string): CatalogueSalt | undefined {
@@ -62,16 +67,31 @@ export interface SpeciesSummary {
 }
 
 const SUMMARIES: SpeciesSummary[] = [
-  ...CATALOGUE_SALTS.map((s) => ({ formula: s.formula, name: s.name, kind: s.kind, aliases: s.aliases ?? [] })),
-  ...allIons().map((i) => ({ formula: parseFormulaWith(i.formula).formula, name: i.name, kind: "ion" as const, aliases: i.aliases ?? [] })),
+  ...CATALOGUE_SALTS.map((s) => ({
+    formula: s.formula,
+    name: s.name,
+    kind: s.kind,
+    aliases: s.aliases ?? [],
+  })),
+  ...allIons().map((i) => ({
+    formula: parseFormulaWith(i.formula).formula,
+    name: i.name,
+    kind: "ion" as const,
+    aliases: i.aliases ?? [],
+  })),
 ];
 
 /**
  * Type-ahead search over formulas, names and aliases. Exact and prefix matches of the
  * formula rank first, then prefix matches of the name or an alias, then substrings.
  */
-export function searchSpecies(query: string, limit = 20): { formula: string; name: string; kind: SpeciesKind }[] {
-  const q = String(query ?? "").trim().toLowerCase();
+export function searchSpecies(
+  query: string,
+  limit = 20,
+): { formula: string; name: string; kind: SpeciesKind }[] {
+  const q = String(query ?? "")
+    .trim()
+    .toLowerCase();
   if (!q) return [];
   const scored: [number, number, SpeciesSummary][] = [];
   SUMMARIES.forEach((s, index) => {
@@ -80,10 +100,15 @@ export function searchSpecies(query: string, limit = 20): { formula: string; nam
     let score = -1;
     if (f === q || words.includes(q)) score = 0;
     else if (f.startsWith(q)) score = 1;
-    else if (words.some((w) => w.startsWith(q) || w.split(/[\s(),-]+/).some((part) => part.startsWith(q)))) score = 2;
+    else if (
+      words.some((w) => w.startsWith(q) || w.split(/[\s(),-]+/).some((part) => part.startsWith(q)))
+    )
+      score = 2;
     else if (f.includes(q) || words.some((w) => w.includes(q))) score = 3;
     if (score >= 0) scored.push([score, index, s]);
   });
   scored.sort((a, b) => a[0] - b[0] || a[2].formula.length - b[2].formula.length || a[1] - b[1]);
-  return scored.slice(0, limit).map(([, , s]) => ({ formula: s.formula, name: s.name, kind: s.kind }));
+  return scored
+    .slice(0, limit)
+    .map(([, , s]) => ({ formula: s.formula, name: s.name, kind: s.kind }));
 }

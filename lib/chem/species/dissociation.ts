@@ -17,6 +17,11 @@ export function parseDissociation(text: string): IonCount[] {
     const m = /^\s*(\d+)?\s*(\S+)\s*$/.exec(term);
     if (!m) throw new Error(`Bad dissociation term "${term}" in "${text}"`);
     const parsed = parseFormulaWith(m[2], { isKnownIonKey });
-    return { formula: parsed.formula, charge: parsed.charge, count: m[1] ? Number(m[1]) : 1, key: parsed.key };
+    return {
+      formula: parsed.formula,
+      charge: parsed.charge,
+      count: m[1] ? Number(m[1]) : 1,
+      key: parsed.key,
+    };
   });
 }

@@ -19,9 +19,35 @@ interface Candidate {
 
 const ANIONS: Candidate[] = allIons()
   .filter((i) => i.charge < 0)
-  .map((i) => ({ formula: parseFormulaWith(i.formula).formula, charge: i.charge, elements: parseFormulaWith(i.formula).elements }));
+  .map((i) => ({
+    formula: parseFormulaWith(i.formula).formula,
+    charge: i.charge,
+    elements: parseFormulaWith(i.formula).elements,
+  }));
 
-const NON_METALS = new Set(["H", "B", "C", "N", "O", "F", "P", "S", "Cl", "Se", "Br", "I", "He", "Ne", "Ar", "Kr", "Xe", "Rn", "Si", "As", "Te"]);
+const NON_METALS = new Set([
+  "H",
+  "B",
+  "C",
+  "N",
+  "O",
+  "F",
+  "P",
+  "S",
+  "Cl",
+  "Se",
+  "Br",
+  "I",
+  "He",
+  "Ne",
+  "Ar",
+  "Kr",
+  "Xe",
+  "Rn",
+  "Si",
+  "As",
+  "Te",
+]);
 
 function subtract(a: Composition, b: Composition, times: number): Composition | null {
   const out: Composition = { ...a };
@@ -41,7 +67,9 @@ function ion(formula: string, charge: number, count: number): IonCount {
 
 export function inferDissociation(elements: Composition): IonCount[] | null {
   for (const anion of ANIONS) {
-    const maxTimes = Math.min(...Object.entries(anion.elements).map(([el, c]) => Math.floor((elements[el] ?? 0) / c)));
+    const maxTimes = Math.min(
+      ...Object.entries(anion.elements).map(([el, c]) => Math.floor((elements[el] ?? 0) / c)),
+    );
     for (let q = 1; q <= maxTimes; q++) {
       const rest = subtract(elements, anion.elements, q);
       if (!rest || Object.keys(rest).length === 0) continue;
@@ -51,7 +79,10 @@ export function inferDissociation(elements: Composition): IonCount[] | null {
         const p = rest[symbols[0]];
         const charge = negative / p;
         if (Number.isInteger(charge) && charge >= 1 && charge <= 4) {
-          return [ion(symbols[0] + chargeSuffix(charge), charge, p), ion(anion.formula, anion.charge, q)];
+          return [
+            ion(symbols[0] + chargeSuffix(charge), charge, p),
+            ion(anion.formula, anion.charge, q),
+          ];
         }
       }
       for (let p = 1; p <= negative; p++) {
@@ -66,7 +97,8 @@ export function inferDissociation(elements: Composition): IonCount[] | null {
         const known = ionByKey(compositionKey(unit, negative / p));
         // An acid not in the catalogue is most likely weak (or the formula is organic):
         // do not guess that it gives up all its protons.
-        if (known && known.formula !== "H+") return [ion(known.formula, known.charge, p), ion(anion.formula, anion.charge, q)];
+        if (known && known.formula !== "H+")
+          return [ion(known.formula, known.charge, p), ion(anion.formula, anion.charge, q)];
       }
     }
   }

@@ -33,7 +33,11 @@ export interface ResolvedSpecies {
 const cache = new Map<string, ResolvedSpecies>();
 
 /** Spellings of the same thermodynamic species: H3O+ is H+ with its water of hydration. */
-const SAME_SPECIES: Record<string, string> = { "H3O+": "H+", hydronium: "H+", "hydronium ion": "H+" };
+const SAME_SPECIES: Record<string, string> = {
+  "H3O+": "H+",
+  hydronium: "H+",
+  "hydronium ion": "H+",
+};
 
 function fromParsed(parsed: ParsedFormula, field: string): ResolvedSpecies {
   const base = {
@@ -48,21 +52,42 @@ function fromParsed(parsed: ParsedFormula, field: string): ResolvedSpecies {
   };
   if (parsed.charge !== 0) {
     const known = ionByKey(parsed.anhydrousKey);
-    const ion: IonCount = { formula: parsed.anhydrousFormula, charge: parsed.charge, count: 1, key: parsed.anhydrousKey };
-    if (!known) base.warnings.push(`${parsed.anhydrousFormula} is not in the ion catalogue; it is taken as an ion of charge ${parsed.charge > 0 ? "+" : ""}${parsed.charge}.`);
-    return { ...base, name: known?.name, kind: "ion", ions: [ion], hazards: [...(known?.hazards ?? [])] };
+    const ion: IonCount = {
+      formula: parsed.anhydrousFormula,
+      charge: parsed.charge,
+      count: 1,
+      key: parsed.anhydrousKey,
+    };
+    if (!known)
+      base.warnings.push(
+        `${parsed.anhydrousFormula} is not in the ion catalogue; it is taken as an ion of charge ${parsed.charge > 0 ? "+" : ""}${parsed.charge}.`,
+      );
+    return {
+      ...base,
+      name: known?.name,
+      kind: "ion",
+      ions: [ion],
+      hazards: [...(known?.hazards ?? [])],
+    };
   }
   const salt = saltByKey(parsed.anhydrousKey);
   if (salt) {
     return {
-      ...base, saltFormula: salt.formula, name: salt.name, kind: salt.kind, ions: salt.ions,
-      hazards: [...salt.hazards], notes: salt.note ? [salt.note] : [],
+      ...base,
+      saltFormula: salt.formula,
+      name: salt.name,
+      kind: salt.kind,
+      ions: salt.ions,
+      hazards: [...salt.hazards],
+      notes: salt.note ? [salt.note] : [],
     };
   }
   const inferred = inferDissociation(parsed.anhydrousElements);
   if (inferred) {
     const text = inferred.map((i) => `${i.count > 1 ? i.count + " " : ""}${i.formula}`).join(" + ");
-    base.warnings.push(`${parsed.anhydrousFormula} is not in the catalogue; its dissociation was inferred from ionic charges as ${text}.`);
+    base.warnings.push(
+      `${parsed.anhydrousFormula} is not in the catalogue; its dissociation was inferred from ionic charges as ${text}.`,
+    );
     return { ...base, kind: "salt", ions: inferred };
   }
   throw new ChemInputError(
@@ -79,13 +104,25 @@ function nonElectrolyte(text: string, field: string): ResolvedSpecies | null {
   if (parsed.charge !== 0) return null;
   const salt = saltByKey(parsed.anhydrousKey);
   if (salt && salt.ions.length > 0) {
-    throw new ChemInputError(`${salt.formula} is an electrolyte; enter it without "(aq)".`, { field, code: "bad_formula" });
+    throw new ChemInputError(`${salt.formula} is an electrolyte; enter it without "(aq)".`, {
+      field,
+      code: "bad_formula",
+    });
   }
   return {
-    formula: parsed.formula, saltFormula: parsed.anhydrousFormula, name: salt?.name, kind: "molecule", ions: [],
-    molarMassGPerMol: compositionMolarMass(parsed.elements), anhydrousMolarMassGPerMol: compositionMolarMass(parsed.anhydrousElements),
-    hydrateWater: parsed.hydrateWater, hazards: [...(salt?.hazards ?? [])], notes: [],
-    warnings: [`${parsed.formula} is taken as a dissolved non-electrolyte (no ions, activity coefficient 1).`],
+    formula: parsed.formula,
+    saltFormula: parsed.anhydrousFormula,
+    name: salt?.name,
+    kind: "molecule",
+    ions: [],
+    molarMassGPerMol: compositionMolarMass(parsed.elements),
+    anhydrousMolarMassGPerMol: compositionMolarMass(parsed.anhydrousElements),
+    hydrateWater: parsed.hydrateWater,
+    hazards: [...(salt?.hazards ?? [])],
+    notes: [],
+    warnings: [
+      `${parsed.formula} is taken as a dissolved non-electrolyte (no ions, activity coefficient 1).`,
+    ],
   };
 }
 
@@ -100,10 +137,15 @@ export function resolveSpecies(text: string, field = "formula"): ResolvedSpecies
   const alias = typeof text === "string" ? saltByAlias(text) : undefined;
   const same = typeof text === "string" ? SAME_SPECIES[text.trim()] : undefined;
   if (!alias && !same && typeof text === "string" && !ionByAlias(text) && looksLikeName(text)) {
-    throw new ChemInputError(`"${text}" is not a name in the species catalogue; type its formula or its ions (for example "Na+").`, { field, code: "unknown_species" });
+    throw new ChemInputError(
+      `"${text}" is not a name in the species catalogue; type its formula or its ions (for example "Na+").`,
+      { field, code: "unknown_species" },
+    );
   }
   try {
-    resolved = nonElectrolyte(text, field) ?? fromParsed(parseFormula(same ?? (alias ? alias.formula : text)), field);
+    resolved =
+      nonElectrolyte(text, field) ??
+      fromParsed(parseFormula(same ?? (alias ? alias.formula : text)), field);
   } catch (error) {
     if (error instanceof ChemInputError && error.field !== field) {
       throw new ChemInputError(error.message, { field, code: error.code });

@@ -7,13 +7,24 @@ import { afterAll, beforeAll } from "vitest";
 export const BASE_URL = process.env.E2E_BASE_URL ?? "http://localhost:3000";
 
 /** Debian's Chromium, headless, with the flags this closed network needs. */
-export async function openBrowser(): Promise<{ context: BrowserContext; close: () => Promise<void> }> {
+export async function openBrowser(): Promise<{
+  context: BrowserContext;
+  close: () => Promise<void>;
+}> {
   const profile = mkdtempSync(path.join(tmpdir(), "ionleaf-e2e-"));
   const context = await chromium.launchPersistentContext(profile, {
     executablePath: process.env.CHROMIUM_PATH ?? "/usr/bin/chromium",
     headless: true,
     viewport: { width: 1360, height: 900 },
-    args: ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"],
+    args: [
+      "--no-sandbox",
+      "--disable-gpu",
+      "--disable-quic",
+      "--no-first-run",
+      "--disable-background-networking",
+      "--disable-component-update",
+      "--disable-sync",
+    ],
   });
   return {
     context,

@@ -19,6 +19,12 @@ export async function archiveEntryAction(_prev: ActionState, form: FormData): Pr
   return runAction(async () => {
     await setEntryArchived(await requireActor(), entryId, archived === "true");
     revalidatePath(`/entries/${entryId}`);
-    return { ok: true, message: archived === "true" ? "Archived. It stays readable and searchable by link." : "Restored to the lists." };
+    return {
+      ok: true,
+      message:
+        archived === "true"
+          ? "Archived. It stays readable and searchable by link."
+          : "Restored to the lists.",
+    };
   });
 }

@@ -11,7 +11,11 @@ export async function createEntryAction(_prev: ActionState, form: FormData): Pro
   let createdId = "";
   const state = await runAction(async () => {
     const actor = await requireActor();
-    const { id } = await createEntry(actor, { projectId: values.projectId, title: values.title, template: values.template || null });
+    const { id } = await createEntry(actor, {
+      projectId: values.projectId,
+      title: values.title,
+      template: values.template || null,
+    });
     createdId = id;
   }, values);
   if (!state.ok) return state;

@@ -13,7 +13,14 @@ export default async function NewEntryPage() {
     <div className="mx-auto max-w-2xl space-y-6">
       <h1 className="text-2xl font-semibold tracking-tight">New entry</h1>
       <section className="card p-6">
-        <NewEntryForm projects={projects} templates={entryTemplates.map(({ id, title, description }) => ({ id, title, description }))} />
+        <NewEntryForm
+          projects={projects}
+          templates={entryTemplates.map(({ id, title, description }) => ({
+            id,
+            title,
+            description,
+          }))}
+        />
       </section>
     </div>
   );

@@ -23,19 +23,34 @@ export default async function MailCatcherPage() {
     <div className="space-y-6">
       <div>
         <h1 className="text-2xl font-semibold tracking-tight">Mail catcher</h1>
-        <p className="text-sm text-ink-soft">Messages Ionleaf sent while mail goes to the local catcher. Nothing here left this machine.</p>
+        <p className="text-sm text-ink-soft">
+          Messages Ionleaf sent while mail goes to the local catcher. Nothing here left this
+          machine.
+        </p>
       </div>
-      {unreachable ? <p role="alert" className="card p-4 text-sm text-red-700">The mail catcher is not answering. Is `npm start` still running?</p> : null}
-      {messages.length === 0 && !unreachable ? <p className="card p-6 text-sm text-ink-soft">No messages yet.</p> : null}
+      {unreachable ? (
+        <p role="alert" className="card p-4 text-sm text-red-700">
+          The mail catcher is not answering. Is `npm start` still running?
+        </p>
+      ) : null}
+      {messages.length === 0 && !unreachable ? (
+        <p className="card p-6 text-sm text-ink-soft">No messages yet.</p>
+      ) : null}
       <ul className="space-y-4">
         {messages.map((m) => (
           <li key={m.id} className="card p-5" data-testid="caught-message">
             <div className="flex flex-wrap justify-between gap-2 text-sm">
               <p className="font-semibold">{m.subject}</p>
-              <time className="font-mono text-xs text-ink-soft">{m.receivedAt.slice(0, 19).replace("T", " ")}</time>
+              <time className="font-mono text-xs text-ink-soft">
+                {m.receivedAt.slice(0, 19).replace("T", " ")}
+              </time>
             </div>
-            <p className="text-xs text-ink-soft">to {m.to.join(", ")} · from {m.from}</p>
-            <pre className="mt-3 whitespace-pre-wrap rounded-md bg-paper-deep p-3 font-mono text-xs">{m.text}</pre>
+            <p className="text-xs text-ink-soft">
+              to {m.to.join(", ")} · from {m.from}
+            </p>
+            <pre className="mt-3 rounded-md bg-paper-deep p-3 font-mono text-xs whitespace-pre-wrap">
+              {m.text}
+            </pre>
           </li>
         ))}
       </ul>

@@ -17,15 +17,50 @@ export function AcceptInvitationForm({ token, email }: { token: string; email: s
         <p className="rounded-md bg-paper-deep px-3 py-2 text-sm">{email}</p>
       </div>
       <Field id="name" label="Your name" errors={state.fieldErrors?.name}>
-        {(aria) => <input {...aria} name="name" autoComplete="name" className="input" defaultValue={state.values?.name ?? ""} />}
+        {(aria) => (
+          <input
+            {...aria}
+            name="name"
+            autoComplete="name"
+            className="input"
+            defaultValue={state.values?.name ?? ""}
+          />
+        )}
       </Field>
-      <Field id="password" label="Choose a password" hint="At least 10 characters, letters mixed with digits or symbols." errors={state.fieldErrors?.password}>
-        {(aria) => <input {...aria} name="password" type="password" autoComplete="new-password" className="input" />}
+      <Field
+        id="password"
+        label="Choose a password"
+        hint="At least 10 characters, letters mixed with digits or symbols."
+        errors={state.fieldErrors?.password}
+      >
+        {(aria) => (
+          <input
+            {...aria}
+            name="password"
+            type="password"
+            autoComplete="new-password"
+            className="input"
+          />
+        )}
       </Field>
-      <Field id="confirmPassword" label="Repeat the password" errors={state.fieldErrors?.confirmPassword}>
-        {(aria) => <input {...aria} name="confirmPassword" type="password" autoComplete="new-password" className="input" />}
+      <Field
+        id="confirmPassword"
+        label="Repeat the password"
+        errors={state.fieldErrors?.confirmPassword}
+      >
+        {(aria) => (
+          <input
+            {...aria}
+            name="confirmPassword"
+            type="password"
+            autoComplete="new-password"
+            className="input"
+          />
+        )}
       </Field>
-      <SubmitButton pendingLabel="Joining…" className="btn-primary w-full">Join the lab</SubmitButton>
+      <SubmitButton pendingLabel="Joining…" className="btn-primary w-full">
+        Join the lab
+      </SubmitButton>
     </form>
   );
 }

@@ -13,14 +13,18 @@ export default async function InvitationPage({ params }: { params: Promise<{ tok
       <section className="card p-7" data-testid="invitation-closed">
         <h1 className="text-lg font-semibold">This link cannot be used</h1>
         <p className="mt-2 text-sm text-ink-soft">{invitationStateMessage(state.kind)}</p>
-        <Link href="/sign-in" className="btn-quiet mt-6">Go to sign-in</Link>
+        <Link href="/sign-in" className="mt-6 btn-quiet">
+          Go to sign-in
+        </Link>
       </section>
     );
   }
   return (
     <section className="card p-7">
       <h1 className="text-lg font-semibold">Join {state.labName}</h1>
-      <p className="mb-6 mt-1 text-sm text-ink-soft">You were invited as a <strong>{state.role}</strong>. Choose a password to finish.</p>
+      <p className="mt-1 mb-6 text-sm text-ink-soft">
+        You were invited as a <strong>{state.role}</strong>. Choose a password to finish.
+      </p>
       <AcceptInvitationForm token={token} email={state.email} />
     </section>
   );

@@ -9,7 +9,15 @@ type Params = { id: string };
 export const GET = authedRoute<Params>(async (_request, actor, params) => {
   const { entry, authorName, projectName, current } = await openEntry(actor, params.id);
   return Response.json({
-    entry: { id: entry.id, title: entry.title, status: entry.status, revision: entry.currentRevisionNumber, authorName, projectName, archived: entry.archivedAt !== null },
+    entry: {
+      id: entry.id,
+      title: entry.title,
+      status: entry.status,
+      revision: entry.currentRevisionNumber,
+      authorName,
+      projectName,
+      archived: entry.archivedAt !== null,
+    },
     content: current.content,
   });
 });

@@ -25,27 +25,38 @@ export interface AcidSystemData {
 }
 
 export type BufferSystemId =
-  | "phosphate"
-  | "acetate"
-  | "citrate"
-  | "carbonate"
-  | "borate"
-  | "tris"
-  | "hepes"
-  | "mes"
-  | "mops";
+  "phosphate" | "acetate" | "citrate" | "carbonate" | "borate" | "tris" | "hepes" | "mes" | "mops";
 
-const GKL2002 = "Goldberg, Kishore & Lennen (2002) J. Phys. Chem. Ref. Data 31, 231, Table 4 (from memory)";
+const GKL2002 =
+  "Goldberg, Kishore & Lennen (2002) J. Phys. Chem. Ref. Data 31, 231, Table 4 (from memory)";
 
-const step = (pKa25: number, deltaHkJPerMol: number, deltaCpJPerMolK: number): DissociationStep => ({
+const step = (
+  pKa25: number,
+  deltaHkJPerMol: number,
+  deltaCpJPerMolK: number,
+): DissociationStep => ({
   pKa25,
   deltaHkJPerMol,
   deltaCpJPerMolK,
 });
 
 export const ACID_SYSTEMS: readonly AcidSystemData[] = [
-  { id: "phosphate", name: "phosphate", species: ["H3PO4", "H2PO4-", "HPO4^2-", "PO4^3-"], charge0: 0, steps: [step(2.148, -8.0, -141), step(7.198, 3.6, -230), step(12.35, 16.0, -242)], source: GKL2002 },
-  { id: "acetate", name: "acetate", species: ["CH3COOH", "CH3COO-"], charge0: 0, steps: [step(4.756, -0.41, -142)], source: GKL2002 },
+  {
+    id: "phosphate",
+    name: "phosphate",
+    species: ["H3PO4", "H2PO4-", "HPO4^2-", "PO4^3-"],
+    charge0: 0,
+    steps: [step(2.148, -8.0, -141), step(7.198, 3.6, -230), step(12.35, 16.0, -242)],
+    source: GKL2002,
+  },
+  {
+    id: "acetate",
+    name: "acetate",
+    species: ["CH3COOH", "CH3COO-"],
+    charge0: 0,
+    steps: [step(4.756, -0.41, -142)],
+    source: GKL2002,
+  },
   {
     id: "citrate",
     name: "citrate",
@@ -55,14 +66,56 @@ export const ACID_SYSTEMS: readonly AcidSystemData[] = [
     source: GKL2002,
   },
   // H2CO3* = CO2(aq) + H2CO3; the first constant is for CO2(aq) + H2O ⇌ H+ + HCO3−.
-  { id: "carbonate", name: "carbonate", species: ["CO2(aq)", "HCO3-", "CO3^2-"], charge0: 0, steps: [step(6.351, 9.15, -371), step(10.329, 14.7, -249)], source: GKL2002 },
+  {
+    id: "carbonate",
+    name: "carbonate",
+    species: ["CO2(aq)", "HCO3-", "CO3^2-"],
+    charge0: 0,
+    steps: [step(6.351, 9.15, -371), step(10.329, 14.7, -249)],
+    source: GKL2002,
+  },
   // B(OH)3 + H2O ⇌ B(OH)4− + H+ (polyborates neglected: fine below about 0.025 mol/kg boron).
-  { id: "borate", name: "borate", species: ["B(OH)3", "B(OH)4-"], charge0: 0, steps: [step(9.237, 13.8, -240)], source: GKL2002 },
-  { id: "tris", name: "Tris", species: ["TrisH+", "Tris"], charge0: 1, steps: [step(8.072, 47.45, -59)], source: GKL2002 },
+  {
+    id: "borate",
+    name: "borate",
+    species: ["B(OH)3", "B(OH)4-"],
+    charge0: 0,
+    steps: [step(9.237, 13.8, -240)],
+    source: GKL2002,
+  },
+  {
+    id: "tris",
+    name: "Tris",
+    species: ["TrisH+", "Tris"],
+    charge0: 1,
+    steps: [step(8.072, 47.45, -59)],
+    source: GKL2002,
+  },
   // Good's buffers: only the step near neutrality (the sulfonic acid step, pKa < 3, is not modelled).
-  { id: "hepes", name: "HEPES", species: ["HEPES", "HEPES-"], charge0: 0, steps: [step(7.564, 20.4, 47)], source: GKL2002 },
-  { id: "mes", name: "MES", species: ["MES", "MES-"], charge0: 0, steps: [step(6.27, 14.8, 5)], source: GKL2002 },
-  { id: "mops", name: "MOPS", species: ["MOPS", "MOPS-"], charge0: 0, steps: [step(7.184, 21.1, 25)], source: GKL2002 },
+  {
+    id: "hepes",
+    name: "HEPES",
+    species: ["HEPES", "HEPES-"],
+    charge0: 0,
+    steps: [step(7.564, 20.4, 47)],
+    source: GKL2002,
+  },
+  {
+    id: "mes",
+    name: "MES",
+    species: ["MES", "MES-"],
+    charge0: 0,
+    steps: [step(6.27, 14.8, 5)],
+    source: GKL2002,
+  },
+  {
+    id: "mops",
+    name: "MOPS",
+    species: ["MOPS", "MOPS-"],
+    charge0: 0,
+    steps: [step(7.184, 21.1, 25)],
+    source: GKL2002,
+  },
 ];
 
 /**

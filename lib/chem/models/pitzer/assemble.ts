@@ -30,7 +30,10 @@ export function assemblePitzerSystem(
   const validityMessages: string[] = [];
   const missingPairs: string[] = [];
   ions.forEach((ion) => {
-    if (ion.charge === 0) notes.push(`${ion.formula}: neutral species are given γ = 1 in this Pitzer implementation (no λ terms).`);
+    if (ion.charge === 0)
+      notes.push(
+        `${ion.formula}: neutral species are given γ = 1 in this Pitzer implementation (no λ terms).`,
+      );
   });
   const usedSources = new Set<string>();
   // Only pairs that are present (both molalities > 0) speak; absent pairs contribute m_c m_a = 0 anyway.
@@ -51,7 +54,9 @@ export function assemblePitzerSystem(
       validityMessages.push(...p.temperatureMessages);
       if (p.temperatureNote) notes.push(p.temperatureNote);
       if (p.derivativeMaxI !== null && ionicStrengthMolal > p.derivativeMaxI * (1 + 1e-9)) {
-        validityMessages.push(`${p.row.salt}: the temperature derivatives were fitted only up to I = ${fmt(p.derivativeMaxI)} mol/kg.`);
+        validityMessages.push(
+          `${p.row.salt}: the temperature derivatives were fitted only up to I = ${fmt(p.derivativeMaxI)} mol/kg.`,
+        );
       }
       return p.terms;
     }),
@@ -60,7 +65,8 @@ export function assemblePitzerSystem(
   const thetaNotes = (list: { key: string }[], m: number[], missing: boolean[][]) => {
     for (let i = 0; i < list.length; i++)
       for (let j = i + 1; j < list.length; j++)
-        if (missing[i][j] && m[i] > 0 && m[j] > 0) notes.push(`θ(${list[i].key}, ${list[j].key}) not tabulated: taken as 0.`);
+        if (missing[i][j] && m[i] > 0 && m[j] > 0)
+          notes.push(`θ(${list[i].key}, ${list[j].key}) not tabulated: taken as 0.`);
   };
   thetaNotes(s.cations, mc, s.thetaMissing.cations);
   thetaNotes(s.anions, ma, s.thetaMissing.anions);

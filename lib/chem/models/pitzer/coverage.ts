@@ -12,13 +12,18 @@ export interface PitzerCoverage {
   reasons: string[];
 }
 
-export function pitzerCoverage(ions: readonly ModelIon[], temperatureC: number, ionicStrengthMolal: number): PitzerCoverage {
+export function pitzerCoverage(
+  ions: readonly ModelIon[],
+  temperatureC: number,
+  ionicStrengthMolal: number,
+): PitzerCoverage {
   const charged = ions.filter((i) => i.charge !== 0 && i.molality > 0);
   if (!charged.some((i) => i.charge > 0) || !charged.some((i) => i.charge < 0)) {
     return { covered: false, reasons: ["Pitzer needs at least one cation and one anion."] };
   }
   const assembly = assemblePitzerSystem(ions, temperatureC, ionicStrengthMolal);
   const reasons = [...assembly.validityMessages];
-  if (assembly.missingPairs.length > 0) reasons.unshift(`no Pitzer parameters for ${assembly.missingPairs.join(", ")}`);
+  if (assembly.missingPairs.length > 0)
+    reasons.unshift(`no Pitzer parameters for ${assembly.missingPairs.join(", ")}`);
   return { covered: reasons.length === 0, reasons };
 }

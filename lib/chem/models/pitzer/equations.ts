@@ -82,7 +82,8 @@ export function pitzerMixture(system: PitzerSystem, aPhi: number): PitzerResult 
   const sqrtI = Math.sqrt(I);
   const lnGc = new Array<number>(nc).fill(0);
   const lnGa = new Array<number>(na).fill(0);
-  if (!(I > 0)) return { lnGammaCations: lnGc, lnGammaAnions: lnGa, osmoticCoefficient: 1, lnWaterActivity: 0 };
+  if (!(I > 0))
+    return { lnGammaCations: lnGc, lnGammaAnions: lnGa, osmoticCoefficient: 1, lnWaterActivity: 0 };
 
   // Binary terms per cation–anion pair.
   const Bca: number[][] = [];

@@ -31,12 +31,17 @@ function firstWins<T>(rows: readonly T[], key: (row: T) => string, into: Map<str
 }
 
 const binaryByPair = new Map<string, PitzerBinaryRow>();
-for (const set of BINARY_SETS_IN_PRIORITY) firstWins(set, (r) => pairKey(r.cation, r.anion), binaryByPair);
+for (const set of BINARY_SETS_IN_PRIORITY)
+  firstWins(set, (r) => pairKey(r.cation, r.anion), binaryByPair);
 
 const thetaByPair = new Map<string, PitzerMixingRow>();
 const psiByTriple = new Map<string, PitzerMixingRow>();
 for (const set of [HMW_1984_MIXING, PITZER_KIM_1974_MIXING]) {
-  firstWins(set.filter((r) => r.kind === "theta"), (r) => pairKey(r.ionI, r.ionJ), thetaByPair);
+  firstWins(
+    set.filter((r) => r.kind === "theta"),
+    (r) => pairKey(r.ionI, r.ionJ),
+    thetaByPair,
+  );
   firstWins(
     set.filter((r) => r.kind === "psi"),
     (r) => pairKey(r.ionI, r.ionJ, r.kind === "psi" ? r.commonIon : ""),
@@ -51,7 +56,10 @@ export function binaryParameters(cation: string, anion: string): PitzerBinaryRow
   return binaryByPair.get(pairKey(cation, anion));
 }
 
-export function temperatureDerivatives(cation: string, anion: string): PitzerTemperatureRow | undefined {
+export function temperatureDerivatives(
+  cation: string,
+  anion: string,
+): PitzerTemperatureRow | undefined {
   return temperatureByPair.get(pairKey(cation, anion));
 }
 
@@ -59,9 +67,12 @@ export function thetaParameter(ionI: string, ionJ: string): PitzerMixingRow | un
   return thetaByPair.get(pairKey(ionI, ionJ));
 }
 
-export function psiParameter(ionI: string, ionJ: string, common: string): PitzerMixingRow | undefined {
+export function psiParameter(
+  ionI: string,
+  ionJ: string,
+  common: string,
+): PitzerMixingRow | undefined {
   return psiByTriple.get(pairKey(ionI, ionJ, common));
 }
 
 /** Every distinct cation–anion pair Ionleaf has binary parameters for. */
-

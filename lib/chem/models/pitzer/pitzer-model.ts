@@ -9,8 +9,7 @@ import type { ActivityModel, ActivityModelInput, ActivityModelOutput } from "../
 import { assemblePitzerSystem } from "./assemble";
 import { pitzerMixture } from "./equations";
 
-export const PITZER_FORMULA_TEX =
-  String.raw`\ln\gamma_M = z_M^2 F + \sum_a m_a (2B_{Ma} + Z C_{Ma}) + \sum_c m_c \big(2\Phi_{Mc} + \sum_a m_a \psi_{Mca}\big) + \sum_{a<a'} m_a m_{a'} \psi_{Maa'} + |z_M| \sum_c \sum_a m_c m_a C_{ca}`;
+export const PITZER_FORMULA_TEX = String.raw`\ln\gamma_M = z_M^2 F + \sum_a m_a (2B_{Ma} + Z C_{Ma}) + \sum_c m_c \big(2\Phi_{Mc} + \sum_a m_a \psi_{Mca}\big) + \sum_{a<a'} m_a m_{a'} \psi_{Maa'} + |z_M| \sum_c \sum_a m_c m_a C_{ca}`;
 
 function checkInput(input: ActivityModelInput): void {
   if (input.solvent !== "water") {
@@ -28,10 +27,13 @@ function checkInput(input: ActivityModelInput): void {
   }
   input.ions.forEach((ion, i) => {
     if (!(Number.isFinite(ion.molality) && ion.molality >= 0)) {
-      throw new ChemInputError(`Molality of ${ion.formula} must be a finite, non-negative number.`, {
-        field: `ions[${i}].molality`,
-        code: "invalid_amount",
-      });
+      throw new ChemInputError(
+        `Molality of ${ion.formula} must be a finite, non-negative number.`,
+        {
+          field: `ions[${i}].molality`,
+          code: "invalid_amount",
+        },
+      );
     }
     if (!Number.isInteger(ion.charge)) {
       throw new ChemInputError(`Charge of ${ion.formula} must be a whole number.`, {
@@ -61,7 +63,11 @@ export function computePitzer(input: ActivityModelInput): ActivityModelOutput {
     return 0;
   });
   const waterActivity = Math.exp(result.lnWaterActivity);
-  if (!lnGamma.every(Number.isFinite) || !Number.isFinite(result.osmoticCoefficient) || !Number.isFinite(waterActivity)) {
+  if (
+    !lnGamma.every(Number.isFinite) ||
+    !Number.isFinite(result.osmoticCoefficient) ||
+    !Number.isFinite(waterActivity)
+  ) {
     throw new ChemInputError("The Pitzer model could not be evaluated for this composition.", {
       field: "ions",
       code: "model_failed",

@@ -3,7 +3,10 @@ function gcd(a: number, b: number): number {
   return b === 0 ? a : gcd(b, a % b);
 }
 
-export function stoichiometry(cationCharge: number, anionCharge: number): { nuCation: number; nuAnion: number } {
+export function stoichiometry(
+  cationCharge: number,
+  anionCharge: number,
+): { nuCation: number; nuAnion: number } {
   const a = Math.abs(cationCharge);
   const b = Math.abs(anionCharge);
   const g = gcd(a, b);
@@ -11,7 +14,11 @@ export function stoichiometry(cationCharge: number, anionCharge: number): { nuCa
 }
 
 /** Ionic strength of a pure salt of these charges at molality m: ½ m (ν+ z+² + ν− z−²). */
-export function saltIonicStrength(cationCharge: number, anionCharge: number, molality: number): number {
+export function saltIonicStrength(
+  cationCharge: number,
+  anionCharge: number,
+  molality: number,
+): number {
   const { nuCation, nuAnion } = stoichiometry(cationCharge, anionCharge);
   return 0.5 * molality * (nuCation * cationCharge ** 2 + nuAnion * anionCharge ** 2);
 }

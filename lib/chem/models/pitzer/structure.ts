@@ -7,7 +7,12 @@ import type { ModelIon } from "../types";
 import type { PitzerBinaryRow } from "./data/binary-row";
 import type { PitzerBinaryTerms } from "./equations";
 import { ionKey } from "./ion-key";
-import { binaryParameters, psiParameter, temperatureDerivatives, thetaParameter } from "./parameter-tables";
+import {
+  binaryParameters,
+  psiParameter,
+  temperatureDerivatives,
+  thetaParameter,
+} from "./parameter-tables";
 
 const REFERENCE_TEMPERATURE_C = 25;
 /** Within this many kelvin of 25 °C no correction is applied (common practice, no source). */
@@ -54,7 +59,11 @@ export interface Structure {
 const structureCache = new Map<string, Structure>();
 const CACHE_LIMIT = 64;
 
-function pairStructure(c: { key: string; charge: number }, a: { key: string; charge: number }, temperatureC: number): PairStructure | null {
+function pairStructure(
+  c: { key: string; charge: number },
+  a: { key: string; charge: number },
+  temperatureC: number,
+): PairStructure | null {
   const row = binaryParameters(c.key, a.key);
   if (!row) return null;
   const dT = temperatureC - REFERENCE_TEMPERATURE_C;
@@ -65,7 +74,9 @@ function pairStructure(c: { key: string; charge: number }, a: { key: string; cha
   if (Math.abs(dT) >= TEMPERATURE_TOLERANCE_K) {
     const d = temperatureDerivatives(c.key, a.key);
     if (!d) {
-      temperatureMessages.push(`Pitzer parameters for ${row.salt} exist at 25 °C only; the result at ${fmt(temperatureC)} °C uses them unchanged.`);
+      temperatureMessages.push(
+        `Pitzer parameters for ${row.salt} exist at 25 °C only; the result at ${fmt(temperatureC)} °C uses them unchanged.`,
+      );
     } else {
       terms.beta0 += d.dBeta0 * dT;
       terms.beta1 += d.dBeta1 * dT;
@@ -74,7 +85,9 @@ function pairStructure(c: { key: string; charge: number }, a: { key: string; cha
       temperatureNote = `${row.salt}: β and Cφ moved from 25 °C with the ∂P/∂T of ${d.source}.`;
       derivativeMaxI = saltIonicStrength(c.charge, a.charge, d.maxMolality);
       if (Math.abs(dT) > DERIVATIVE_SPAN_K) {
-        temperatureMessages.push(`${row.salt}: the first-order temperature correction from 25 °C holds for about 10–40 °C; ${fmt(temperatureC)} °C is outside it.`);
+        temperatureMessages.push(
+          `${row.salt}: the first-order temperature correction from 25 °C holds for about 10–40 °C; ${fmt(temperatureC)} °C is outside it.`,
+        );
       }
     }
   }
@@ -91,7 +104,8 @@ function mixingTerms(list: { key: string }[], others: { key: string }[]) {
       const t = thetaParameter(list[i].key, list[j].key);
       if (t) theta[i][j] = t.value;
       else missing[i][j] = true;
-      for (let k = 0; k < others.length; k++) psi[i][j][k] = psiParameter(list[i].key, list[j].key, others[k].key)?.value ?? 0;
+      for (let k = 0; k < others.length; k++)
+        psi[i][j][k] = psiParameter(list[i].key, list[j].key, others[k].key)?.value ?? 0;
     }
   return { theta, psi, missing };
 }
@@ -127,4 +141,3 @@ export function structureFor(ions: readonly ModelIon[], temperatureC: number): S
   structureCache.set(cacheKey, structure);
   return structure;
 }
-

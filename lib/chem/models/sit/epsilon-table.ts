@@ -13,7 +13,8 @@ export interface SitEpsilonRow {
   source: string;
 }
 
-const NEA = "NEA-TDB SIT coefficients (Grenthe et al. 1992; Guillaumont et al. 2003, App. B; Lemire et al. 2013)";
+const NEA =
+  "NEA-TDB SIT coefficients (Grenthe et al. 1992; Guillaumont et al. 2003, App. B; Lemire et al. 2013)";
 
 export const SIT_EPSILON_25C: readonly SitEpsilonRow[] = [
   { cation: "Ag+", anion: "Cl-", epsilonKgPerMol: 0.031, source: NEA },

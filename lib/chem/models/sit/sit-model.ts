@@ -43,21 +43,30 @@ export function sitMissingPairs(ions: readonly ModelIon[]): string[] {
 
 export function computeSit(input: ActivityModelInput): ActivityModelOutput {
   if (input.solvent !== "water") {
-    throw new ChemInputError(`The SIT ε coefficients are for water; they do not apply to ${input.solvent}.`, {
-      field: "solvent",
-      code: "model_not_applicable",
-    });
+    throw new ChemInputError(
+      `The SIT ε coefficients are for water; they do not apply to ${input.solvent}.`,
+      {
+        field: "solvent",
+        code: "model_not_applicable",
+      },
+    );
   }
   const A = input.constants?.aLog10;
   if (!(typeof A === "number" && Number.isFinite(A) && A > 0)) {
-    throw new ChemInputError("The Debye–Hückel constant A must be a positive number.", { field: "constants.aLog10", code: "invalid_constant" });
+    throw new ChemInputError("The Debye–Hückel constant A must be a positive number.", {
+      field: "constants.aLog10",
+      code: "invalid_constant",
+    });
   }
   input.ions.forEach((ion, i) => {
     if (!(Number.isFinite(ion.molality) && ion.molality >= 0)) {
-      throw new ChemInputError(`Molality of ${ion.formula} must be a finite, non-negative number.`, {
-        field: `ions[${i}].molality`,
-        code: "invalid_amount",
-      });
+      throw new ChemInputError(
+        `Molality of ${ion.formula} must be a finite, non-negative number.`,
+        {
+          field: `ions[${i}].molality`,
+          code: "invalid_amount",
+        },
+      );
     }
   });
   const I = input.ionicStrengthMolal;
@@ -84,23 +93,33 @@ export function computeSit(input: ActivityModelInput): ActivityModelOutput {
 
   const validityMessages: string[] = [];
   if (I > SIT_MAX_IONIC_STRENGTH_MOLAL) {
-    validityMessages.push(`I = ${Number(I.toPrecision(3))} mol/kg is above the SIT range (I ≤ ${SIT_MAX_IONIC_STRENGTH_MOLAL} mol/kg, NEA-TDB).`);
+    validityMessages.push(
+      `I = ${Number(I.toPrecision(3))} mol/kg is above the SIT range (I ≤ ${SIT_MAX_IONIC_STRENGTH_MOLAL} mol/kg, NEA-TDB).`,
+    );
   }
   if (Math.abs(input.temperatureC - 25) > SIT_TEMPERATURE_SPAN_K) {
-    validityMessages.push(`SIT ε values are for 25 °C; at ${input.temperatureC} °C they are used unchanged, beyond the ±25 K the NEA-TDB accepts.`);
+    validityMessages.push(
+      `SIT ε values are for 25 °C; at ${input.temperatureC} °C they are used unchanged, beyond the ±25 K the NEA-TDB accepts.`,
+    );
   }
   const missing = sitMissingPairs(input.ions);
-  if (missing.length > 0) validityMessages.push(`No SIT ε for ${missing.join(", ")}: taken as zero.`);
+  if (missing.length > 0)
+    validityMessages.push(`No SIT ε for ${missing.join(", ")}: taken as zero.`);
   const lnGamma = log10Gamma.map((x) => x * Math.LN10);
   if (!lnGamma.every(Number.isFinite) || !Number.isFinite(osmoticCoefficient)) {
-    throw new ChemInputError("The SIT model could not be evaluated for this composition.", { field: "ions", code: "model_failed" });
+    throw new ChemInputError("The SIT model could not be evaluated for this composition.", {
+      field: "ions",
+      code: "model_failed",
+    });
   }
   return {
     lnGamma,
     osmoticCoefficient,
     waterActivity,
     validityMessages,
-    notes: ["SIT ε from the NEA-TDB compilation (Guillaumont et al. 2003, App. B); D with a·B = 1.5 kg^½ mol^−½."],
+    notes: [
+      "SIT ε from the NEA-TDB compilation (Guillaumont et al. 2003, App. B); D with a·B = 1.5 kg^½ mol^−½.",
+    ],
   };
 }
 
@@ -109,18 +128,26 @@ export const sitModel: ActivityModel = {
   label: "Specific ion interaction theory (SIT)",
   formulaTex: String.raw`\log_{10}\gamma_j = -z_j^2\,\frac{A\sqrt{I}}{1+1.5\sqrt{I}} + \sum_k \varepsilon(j,k)\,m_k`,
   compute: computeSit,
-  validityNote: "Aqueous solutions with I ≤ 3.5 mol/kg near 25 °C, for ion pairs with an NEA-TDB ε (Grenthe et al. 1992; Guillaumont et al. 2003).",
+  validityNote:
+    "Aqueous solutions with I ≤ 3.5 mol/kg near 25 °C, for ion pairs with an NEA-TDB ε (Grenthe et al. 1992; Guillaumont et al. 2003).",
   maxIonicStrengthMolal: SIT_MAX_IONIC_STRENGTH_MOLAL,
 };
 
 /** Whether SIT covers a composition, for the "auto" model choice. */
-export function sitCoverage(ions: readonly ModelIon[], temperatureC: number, ionicStrengthMolal: number): { covered: boolean; reasons: string[] } {
+export function sitCoverage(
+  ions: readonly ModelIon[],
+  temperatureC: number,
+  ionicStrengthMolal: number,
+): { covered: boolean; reasons: string[] } {
   const reasons: string[] = [];
   const charged = ions.filter((i) => i.charge !== 0 && i.molality > 0);
-  if (!charged.some((i) => i.charge > 0) || !charged.some((i) => i.charge < 0)) reasons.push("SIT needs at least one cation and one anion.");
+  if (!charged.some((i) => i.charge > 0) || !charged.some((i) => i.charge < 0))
+    reasons.push("SIT needs at least one cation and one anion.");
   const missing = sitMissingPairs(ions);
   if (missing.length > 0) reasons.push(`no SIT ε for ${missing.join(", ")}`);
-  if (ionicStrengthMolal > SIT_MAX_IONIC_STRENGTH_MOLAL) reasons.push(`I above ${SIT_MAX_IONIC_STRENGTH_MOLAL} mol/kg`);
-  if (Math.abs(temperatureC - 25) > SIT_TEMPERATURE_SPAN_K) reasons.push("temperature more than 25 K from 25 °C");
+  if (ionicStrengthMolal > SIT_MAX_IONIC_STRENGTH_MOLAL)
+    reasons.push(`I above ${SIT_MAX_IONIC_STRENGTH_MOLAL} mol/kg`);
+  if (Math.abs(temperatureC - 25) > SIT_TEMPERATURE_SPAN_K)
+    reasons.push("temperature more than 25 K from 25 °C");
   return { covered: reasons.length === 0, reasons };
 }

@@ -13,7 +13,10 @@ export default async function RevisionHistoryPage({ params }: { params: Promise<
   const actor = await requireActor();
   let data;
   try {
-    data = { header: await getEntryHeader(actor, id), revisions: await getRevisionHistory(actor, id) };
+    data = {
+      header: await getEntryHeader(actor, id),
+      revisions: await getRevisionHistory(actor, id),
+    };
   } catch (error) {
     if (isAppError(error) && error.code === "not_found") notFound();
     throw error;
@@ -21,24 +24,56 @@ export default async function RevisionHistoryPage({ params }: { params: Promise<
   return (
     <div className="mx-auto max-w-3xl space-y-6">
       <div>
-        <Link href={`/entries/${id}`} className="text-sm text-copper-700 hover:underline">← Back to the entry</Link>
+        <Link href={`/entries/${id}`} className="text-sm text-copper-700 hover:underline">
+          ← Back to the entry
+        </Link>
         <h1 className="mt-1 text-2xl font-semibold tracking-tight">Revision history</h1>
-        <p className="text-sm text-ink-soft">{data.header.entry.title}. Every save that changed the content is kept, unchangeable, with its SHA-256.</p>
+        <p className="text-sm text-ink-soft">
+          {data.header.entry.title}. Every save that changed the content is kept, unchangeable, with
+          its SHA-256.
+        </p>
       </div>
-      <ol className="card divide-y divide-ink/5" aria-label="Revisions">
+      <ol className="divide-y divide-ink/5 card" aria-label="Revisions">
         {data.revisions.map((r) => (
-          <li key={r.number} className="flex flex-wrap items-center justify-between gap-3 px-5 py-3 text-sm">
+          <li
+            key={r.number}
+            className="flex flex-wrap items-center justify-between gap-3 px-5 py-3 text-sm"
+          >
             <span>
-              <Link href={`/entries/${id}/revisions/${r.number}`} className="font-medium hover:text-copper-700 hover:underline">Revision {r.number}</Link>
-              <span className="text-ink-soft"> · {r.authorName} · {new Date(r.createdAt).toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "medium" })}</span>
+              <Link
+                href={`/entries/${id}/revisions/${r.number}`}
+                className="font-medium hover:text-copper-700 hover:underline"
+              >
+                Revision {r.number}
+              </Link>
+              <span className="text-ink-soft">
+                {" "}
+                · {r.authorName} ·{" "}
+                {new Date(r.createdAt).toLocaleString("en-GB", {
+                  dateStyle: "medium",
+                  timeStyle: "medium",
+                })}
+              </span>
             </span>
-            <code className="font-mono text-xs text-ink-faint" title="SHA-256 of the canonical document">{r.contentHash.slice(0, 16)}…</code>
-            <ul className="w-full text-xs text-ink-soft" aria-label={`Changes in revision ${r.number}`}>
-              {r.changes.map((c) => <li key={c}>· {c}</li>)}
+            <code
+              className="font-mono text-xs text-ink-faint"
+              title="SHA-256 of the canonical document"
+            >
+              {r.contentHash.slice(0, 16)}…
+            </code>
+            <ul
+              className="w-full text-xs text-ink-soft"
+              aria-label={`Changes in revision ${r.number}`}
+            >
+              {r.changes.map((c) => (
+                <li key={c}>· {c}</li>
+              ))}
             </ul>
           </li>
         ))}
-        {data.revisions.length === 0 ? <li className="px-5 py-4 text-sm text-ink-soft">Not saved yet.</li> : null}
+        {data.revisions.length === 0 ? (
+          <li className="px-5 py-4 text-sm text-ink-soft">Not saved yet.</li>
+        ) : null}
       </ol>
     </div>
   );

@@ -49,5 +49,18 @@ export function binaryRow(
   maxMolalityBasis: string,
   source: string,
 ): PitzerBinaryRow {
-  return { salt, cation, anion, beta0, beta1, beta2, alpha1, alpha2, cPhi, maxMolality, maxMolalityBasis, source };
+  return {
+    salt,
+    cation,
+    anion,
+    beta0,
+    beta1,
+    beta2,
+    alpha1,
+    alpha2,
+    cPhi,
+    maxMolality,
+    maxMolalityBasis,
+    source,
+  };
 }

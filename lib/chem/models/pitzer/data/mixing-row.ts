@@ -4,10 +4,21 @@ export type PitzerMixingRow =
   | { kind: "theta"; ionI: string; ionJ: string; value: number; source: string }
   | { kind: "psi"; ionI: string; ionJ: string; commonIon: string; value: number; source: string };
 
-export function thetaRow(ionI: string, ionJ: string, value: number, source: string): PitzerMixingRow {
+export function thetaRow(
+  ionI: string,
+  ionJ: string,
+  value: number,
+  source: string,
+): PitzerMixingRow {
   return { kind: "theta", ionI, ionJ, value, source };
 }
 
-export function psiRow(ionI: string, ionJ: string, commonIon: string, value: number, source: string): PitzerMixingRow {
+export function psiRow(
+  ionI: string,
+  ionJ: string,
+  commonIon: string,
+  value: number,
+  source: string,
+): PitzerMixingRow {
   return { kind: "psi", ionI, ionJ, commonIon, value, source };
 }

@@ -8,7 +8,11 @@ import { getRevision } from "@/lib/notebook/revisions";
 
 export const metadata: Metadata = { title: "Earlier revision" };
 
-export default async function RevisionPage({ params }: { params: Promise<{ id: string; number: string }> }) {
+export default async function RevisionPage({
+  params,
+}: {
+  params: Promise<{ id: string; number: string }>;
+}) {
   const { id, number } = await params;
   const actor = await requireActor();
   let revision;
@@ -20,9 +24,16 @@ export default async function RevisionPage({ params }: { params: Promise<{ id: s
   }
   return (
     <div className="space-y-4">
-      <Link href={`/entries/${id}/revisions`} className="text-sm text-copper-700 hover:underline">← All revisions</Link>
+      <Link href={`/entries/${id}/revisions`} className="text-sm text-copper-700 hover:underline">
+        ← All revisions
+      </Link>
       <div className="rounded-md border border-ink/10 bg-paper-deep px-4 py-2 text-sm">
-        Revision {revision.number} by {revision.authorName}, {new Date(revision.createdAt).toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "medium" })} — read-only.
+        Revision {revision.number} by {revision.authorName},{" "}
+        {new Date(revision.createdAt).toLocaleString("en-GB", {
+          dateStyle: "medium",
+          timeStyle: "medium",
+        })}{" "}
+        — read-only.
         <code className="ml-2 font-mono text-xs text-ink-faint">sha256 {revision.contentHash}</code>
       </div>
       <h1 className="text-2xl font-semibold tracking-tight">{revision.title}</h1>
