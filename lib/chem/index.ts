@@ -1,4 +1,4 @@
-/** Public API of the electrolyte engine (see ../shared/DESIGN.md, "The computation contract"). */
+/** Public API of the electrolyte engine (see docs/architecture.md, "The computation contract"). */
 export { ChemInputError, isChemInputError } from "./errors";
 export { parseFormula, molarMass } from "./formula";
 export type { ParsedFormula, Composition } from "./formula";

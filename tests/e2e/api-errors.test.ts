@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { request as playwrightRequest } from "playwright-core";
 import { DEMO_LABS, DEMO_PASSWORD } from "@/lib/demo/scenario";
-import { BASE_URL, openBrowser, signIn, useBrowser } from "./support/browser";
+import { BASE_URL, openBrowser, signIn, useBrowser } from "../support/e2e-browser";
 
 const saltmarshResearcher = DEMO_LABS[0].members.find((m) => m.role === "researcher")!;
 const ridgebackResearcher = DEMO_LABS[1].members.find((m) => m.role === "researcher")!;

@@ -1,7 +1,7 @@
 import { beforeAll, describe, expect, it } from "vitest";
 import type { Page } from "playwright-core";
 import { DEMO_LABS, DEMO_PASSWORD } from "@/lib/demo/scenario";
-import { BASE_URL, useBrowser, signIn } from "./support/browser";
+import { BASE_URL, useBrowser, signIn } from "../support/e2e-browser";
 
 const researcher = DEMO_LABS[0].members.find((m) => m.email.startsWith("mira"))!;
 

@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import type { Locator, Page } from "playwright-core";
 import { DEMO_LABS, DEMO_PASSWORD } from "@/lib/demo/scenario";
 import { parseShownNumber } from "@/lib/ui/format-number";
-import { BASE_URL, useBrowser, screenshot, signIn } from "./support/browser";
+import { BASE_URL, useBrowser, screenshot, signIn } from "../support/e2e-browser";
 
 const researcher = DEMO_LABS[0].members.find((m) => m.role === "researcher")!;
 

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { DEMO_LABS, DEMO_PASSWORD } from "@/lib/demo/scenario";
-import { BASE_URL, openBrowser, useBrowser, signIn } from "./support/browser";
+import { BASE_URL, openBrowser, useBrowser, signIn } from "../support/e2e-browser";
 
 const admin = DEMO_LABS[1].members.find((m) => m.role === "admin")!;
 

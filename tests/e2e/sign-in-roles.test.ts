@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { DEMO_LABS, DEMO_PASSWORD } from "@/lib/demo/scenario";
-import { BASE_URL, openBrowser, screenshot, signIn, useBrowser } from "./support/browser";
+import { BASE_URL, openBrowser, screenshot, signIn, useBrowser } from "../support/e2e-browser";
 
 const lab = DEMO_LABS[0];
 const byRole = (role: string) => lab.members.find((m) => m.role === role)!;

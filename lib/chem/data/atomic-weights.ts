@@ -8,7 +8,7 @@
  *   standard atomic weight; by common practice the mass number of the longest-lived isotope
  *   is used (marked `radioactive: true`). Th, Pa and U do have standard atomic weights.
  * - Values for H, Li, C, N, O, F, Na, Mg, Al, P, S, Cl, K, Ca, Cr, Mn, Fe, Co, Ni, Cu, Zn, Br,
- *   Ag, Cd, I, Cs, Ba, La, Hg, Pb were checked against ../shared/reference/constants.csv;
+ *   Ag, Cd, I, Cs, Ba, La, Hg, Pb were checked against tests/fixtures/reference/constants.csv;
  *   the others are the abridged table as recalled (from memory).
  */
 export interface ElementData {

@@ -2,7 +2,7 @@
  * Helgeson (1969) B-dot model, Am. J. Sci. 267, 729–804:
  *   log10 γ = −A z² √I / (1 + B å √I) + Ḃ I
  * with ion sizes å of the EQ3/6 data0 / llnl.dat database (largely Kielland 1937) and Ḃ from
- * its LLNL_AQUEOUS_MODEL_PARAMETERS block (../shared/reference/ion_size.csv, confirmed).
+ * its LLNL_AQUEOUS_MODEL_PARAMETERS block (tests/fixtures/reference/ion-size.csv, confirmed).
  * The engine uses it inside the Truesdell–Jones model for ions WATEQ4F does not fit.
  */
 import { interpolate } from "../interpolate";

@@ -1,7 +1,7 @@
 /**
  * Ion-size parameters å (ångström) of Kielland (1937), J. Am. Chem. Soc. 59, 1675–1678,
  * for the extended Debye–Hückel equation in water. Values as in
- * ../shared/reference/ion_size.csv (recalled; most confirmed by the same value in the EQ3/6
+ * tests/fixtures/reference/ion-size.csv (recalled; most confirmed by the same value in the EQ3/6
  * llnl.dat database). Kielland's "4.0–4.5" class is entered as 4.0, as Freeze & Cherry (1979)
  * App. IV reproduce it. Tetraalkylammonium sizes are Kielland's as recalled (memory).
  */

@@ -3,7 +3,7 @@
  *   log10 γ = −A z² √I / (1 + B å √I) + b I
  * Truesdell & Jones (1974), J. Res. U.S. Geol. Surv. 2, 233–248, as tabulated in WATEQ4F
  * (Ball & Nordstrom 1991, U.S. Geol. Surv. Open-File Rep. 91-183), `-gamma a b` entries
- * (../shared/reference/ion_size.csv, confirmed). b = 0 marks ions for which WATEQ4F uses the
+ * (tests/fixtures/reference/ion-size.csv, confirmed). b = 0 marks ions for which WATEQ4F uses the
  * plain extended equation with its own å.
  */
 export const TRUESDELL_JONES_SOURCE =

@@ -1,7 +1,7 @@
 /**
  * Standard reduction potentials E° (V vs SHE, 25 °C, unit activities, 1 bar).
  * Source: CRC Handbook of Chemistry and Physics, 92nd ed. (2011), P. Vanýsek, "Electrochemical
- * Series" (recalled); rows marked `confirmed` agree with ../shared/reference/electrode_potentials.csv,
+ * Series" (recalled); rows marked `confirmed` agree with tests/fixtures/reference/electrode-potentials.csv,
  * which names the public copy. Formal potentials: Skoog, West, Holler & Crouch, Fundamentals
  * of Analytical Chemistry, appendix "Standard and Formal Electrode Potentials" (the
  * hexacyanoferrate values confirmed, the others recalled).
@@ -175,7 +175,7 @@ export const COUPLES: readonly CoupleData[] = [
 
 /**
  * E° of AgCl/Ag against temperature, Bates & Bower (1954), J. Res. Natl. Bur. Stand. 53,
- * 283–290 (recalled; ../shared/reference/electrode_potentials.csv).
+ * 283–290 (recalled; tests/fixtures/reference/electrode-potentials.csv).
  */
 export const AGCL_STANDARD_POTENTIAL_BY_TEMPERATURE: readonly [number, number][] = [
   [0, 0.23655],

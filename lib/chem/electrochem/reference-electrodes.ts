@@ -4,7 +4,7 @@
  *
  * Sources: SCE 0.2412 V and Ag/AgCl (sat. KCl) 0.197 V, 3.5 M KCl 0.205 V, 3 M KCl 0.210 V:
  * Bard & Faulkner, Electrochemical Methods, 2nd ed. (2001) (values confirmed in public
- * copies, ../shared/reference/electrode_potentials.csv). Hg/HgO (1 M NaOH) 0.140 V and
+ * copies, tests/fixtures/reference/electrode-potentials.csv). Hg/HgO (1 M NaOH) 0.140 V and
  * Hg/Hg2SO4 (sat. K2SO4) 0.640 V: Sawyer, Sobkowiak & Roberts, Electrochemistry for
  * Chemists, 2nd ed. (1995), §5.2 (recalled; other sources give 0.650–0.658 V for the latter).
  * Temperature coefficients: Sawyer, Sobkowiak & Roberts (1995) (recalled).

@@ -1,4 +1,4 @@
-/** Input and result of `computeSolution` (../shared/DESIGN.md, "The computation contract"). */
+/** Input and result of `computeSolution` (docs/architecture.md, "The computation contract"). */
 import type { ActivityModelId, ActivityModelOptions, DebyeHuckelConstants } from "../models/types";
 import type { SpeciesKind } from "../species/salts";
 

@@ -20,7 +20,7 @@ const TEMPERATURE_TOLERANCE_K = 0.5;
 /**
  * First-order derivative corrections hold within about ±15 K of 25 °C: measured against
  * Pitzer, Peiper & Busey (1984) NaCl, γ± stays within 2 % at 10–40 °C but errs by up to 5 %
- * at 0 °C and 3–5 mol/kg, where the curvature of β0(T) matters (tests/chem/pitzer-temperature).
+ * at 0 °C and 3–5 mol/kg, where the curvature of β0(T) matters (tests/unit/chem/pitzer-temperature).
  */
 const DERIVATIVE_SPAN_K = 15;
 

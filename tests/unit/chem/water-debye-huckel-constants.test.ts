@@ -7,7 +7,7 @@ import {
   waterRelativePermittivity,
 } from "@/lib/chem";
 import * as C from "@/lib/chem/constants";
-import { readFixture, shortSource } from "./fixtures/read-fixture";
+import { readFixture, shortSource } from "../../support/read-reference";
 
 const water = readFixture("water-properties.csv");
 const bySource = (fragment: string) => water.filter((r) => r.original_source.includes(fragment));

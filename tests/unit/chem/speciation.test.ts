@@ -1,11 +1,11 @@
 /**
  * Reverse mode (`speciate`): pH of standard buffers from their composition, against the
- * assigned pH(S) values (fixtures/buffer-standards.ts; Bates 1973, IUPAC 2002, Durst & Staples
+ * assigned pH(S) values (tests/fixtures/reference/buffer-standards.ts; Bates 1973, IUPAC 2002, Durst & Staples
  * 1972; from memory), and the invariants any speciation must keep.
  */
 import { describe, expect, it } from "vitest";
 import { speciate } from "@/lib/chem";
-import { BUFFER_STANDARDS } from "./fixtures/buffer-standards";
+import { BUFFER_STANDARDS } from "../../fixtures/reference/buffer-standards";
 
 /** Measured agreement, per standard: phosphate and borax within 0.01; carbonate and Tris within 0.02 (see report). */
 const TOLERANCE: Record<string, number> = { carbonate: 0.02, Tris: 0.025 };

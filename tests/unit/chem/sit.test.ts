@@ -6,7 +6,7 @@
  */
 import { describe, expect, it } from "vitest";
 import { computeSit, sitCoverage } from "@/lib/chem/models/sit";
-import { GAMMA_REFERENCE } from "./fixtures/pitzer-gamma-reference";
+import { GAMMA_REFERENCE } from "../../fixtures/reference/pitzer-gamma-reference";
 
 // A (log10) = 0.5100 at 25 °C from Aφ = 0.3915 (Pitzer 1991; reference worked_examples.md §4).
 const C25 = { temperatureK: 298.15, aLog10: 0.51, bPerAngstrom: 0.3287, aPhi: 0.3915 };

@@ -6,7 +6,7 @@ import { NotebookEditor } from "@/editor/notebook-editor";
 import { defaultSolutionBlockInput } from "@/lib/entries/block-defaults";
 import { extractSolutionBlocks } from "@/lib/entries/extract-blocks";
 import { parseShownNumber } from "@/lib/ui/format-number";
-import { preloadBlockPanels } from "./preload-blocks";
+import { preloadBlockPanels } from "../../support/preload-blocks";
 
 afterEach(cleanup);
 beforeAll(preloadBlockPanels, 60000);

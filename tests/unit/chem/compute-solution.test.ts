@@ -7,7 +7,7 @@ import {
   type SolutionInput,
 } from "@/lib/chem";
 import { CATALOGUE_SALTS } from "@/lib/chem/species/catalogue";
-import { readFixture } from "./fixtures/read-fixture";
+import { readFixture } from "../../support/read-reference";
 
 function errorOf(input: SolutionInput): ChemInputError {
   try {

@@ -2,12 +2,15 @@
  * Pitzer γ± and φ of single salts at 25 °C against published tables, from 0.001 mol/kg to the
  * top of each parameter set's fitted range. Aφ = 0.3915 (kg/mol)^½ at 25 °C (Pitzer 1991,
  * Activity Coefficients in Electrolyte Solutions, Ch. 3, Table 1). Sources per row in
- * fixtures/pitzer-gamma-reference.ts: CRC Handbook 92nd ed. (Hamer & Wu 1972 for 1:1 salts),
+ * tests/fixtures/reference/pitzer-gamma-reference.ts: CRC Handbook 92nd ed. (Hamer & Wu 1972 for 1:1 salts),
  * Robinson & Stokes (1959) Appendix 8.10, Pitzer, Peiper & Busey (1984).
  */
 import { describe, expect, it } from "vitest";
 import { binaryParameters, pitzerBinarySalt } from "@/lib/chem/models/pitzer";
-import { GAMMA_REFERENCE, type GammaReferenceRow } from "./fixtures/pitzer-gamma-reference";
+import {
+  GAMMA_REFERENCE,
+  type GammaReferenceRow,
+} from "../../fixtures/reference/pitzer-gamma-reference";
 
 const A_PHI_25C = 0.3915;
 

@@ -4,7 +4,7 @@ import { debyeHuckelConstants } from "@/lib/chem";
 import { daviesModel } from "@/lib/chem/models/davies";
 import { dhExtendedModel } from "@/lib/chem/models/dh-extended";
 import type { ActivityModel } from "@/lib/chem/models/types";
-import { readFixture, shortSource } from "./fixtures/read-fixture";
+import { readFixture, shortSource } from "../../support/read-reference";
 
 function gammaOf(
   model: ActivityModel,

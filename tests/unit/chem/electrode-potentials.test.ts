@@ -9,7 +9,7 @@ import {
   nernstPotentialDetailed,
   nernstSlopeV,
 } from "@/lib/chem";
-import { readFixture } from "./fixtures/read-fixture";
+import { readFixture } from "../../support/read-reference";
 
 const potentials = readFixture("electrode-potentials.csv");
 

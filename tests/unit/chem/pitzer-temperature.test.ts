@@ -7,7 +7,7 @@
 import { describe, expect, it } from "vitest";
 import { debyeHuckelConstants } from "@/lib/chem/debye-huckel-constants";
 import { computePitzer, pitzerBinarySalt } from "@/lib/chem/models/pitzer";
-import { GAMMA_REFERENCE } from "./fixtures/pitzer-gamma-reference";
+import { GAMMA_REFERENCE } from "../../fixtures/reference/pitzer-gamma-reference";
 
 describe("Pitzer NaCl at 0–40 °C", () => {
   const rows = GAMMA_REFERENCE.filter(

@@ -7,7 +7,7 @@ import { sanitizePastedHtml } from "@/editor/paste-sanitizer";
 import { describeDocumentErrors, entryDocumentSchema } from "@/lib/entries/document-schema";
 import { extractCellBlocks, extractSolutionBlocks } from "@/lib/entries/extract-blocks";
 import { findTemplate } from "@/lib/entries/templates";
-import { preloadBlockPanels } from "./preload-blocks";
+import { preloadBlockPanels } from "../../support/preload-blocks";
 
 afterEach(cleanup);
 beforeAll(preloadBlockPanels, 60000);

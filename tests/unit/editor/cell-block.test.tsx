@@ -3,7 +3,7 @@ import userEvent from "@testing-library/user-event";
 import { afterEach, beforeAll, describe, expect, it } from "vitest";
 import { NotebookEditor } from "@/editor/notebook-editor";
 import { findTemplate } from "@/lib/entries/templates";
-import { preloadBlockPanels } from "./preload-blocks";
+import { preloadBlockPanels } from "../../support/preload-blocks";
 import { parseShownNumber } from "@/lib/ui/format-number";
 
 afterEach(cleanup);

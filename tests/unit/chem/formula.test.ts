@@ -3,7 +3,7 @@
 import { describe, expect, it } from "vitest";
 import { ChemInputError, molarMass, parseFormula } from "@/lib/chem";
 import { ELEMENTS } from "@/lib/chem/data/atomic-weights";
-import { readFixture } from "./fixtures/read-fixture";
+import { readFixture } from "../../support/read-reference";
 
 describe("parseFormula: notations chemists type", () => {
   it.each([

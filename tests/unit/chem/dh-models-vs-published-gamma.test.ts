@@ -11,7 +11,7 @@ import { describe, expect, it } from "vitest";
 import { computeSolution, type ActivityModelId } from "@/lib/chem";
 import { ION_ASSOCIATION_ONSET_MOLAL } from "@/lib/chem/models/dh-common";
 import { limitingLawSqrtIMax } from "@/lib/chem/models/dh-limiting";
-import { readFixture, shortSource } from "./fixtures/read-fixture";
+import { readFixture, shortSource } from "../../support/read-reference";
 
 const rows = readFixture("gamma-binary.csv").map((r) => ({
   salt: r.salt,
