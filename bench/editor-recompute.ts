@@ -6,12 +6,12 @@
  * Run alone with `npx tsx bench/editor-recompute.ts`, or through `npm run bench`.
  */
 import { pathToFileURL } from "node:url";
-import { defaultSolutionBlockInput } from "@/lib/entries/block-defaults";
-import type { SolutionBlockInput, SolutionComponentInput } from "@/lib/entries/block-schemas";
+import { defaultSolutionBlockInput } from "@/lib/document/block-defaults";
+import type { SolutionBlockInput, SolutionComponentInput } from "@/lib/document/block-schemas";
 import {
   evaluateSolutionBlock,
   evaluateSolutionBlockCached,
-} from "@/lib/entries/evaluate-solution-block";
+} from "@/lib/document/evaluate-solution-block";
 
 // Typical electrochemistry electrolytes: supporting electrolytes, redox probes, buffers,
 // weighed stocks, a non-aqueous one. Amounts are what a lab would write.

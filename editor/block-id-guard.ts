@@ -1,6 +1,6 @@
 import { Extension } from "@tiptap/core";
 import { Plugin, PluginKey } from "@tiptap/pm/state";
-import { newBlockId } from "@/lib/entries/block-id";
+import { newBlockId } from "@/lib/document/block-id";
 
 const BLOCK_TYPES = new Set(["solutionBlock", "cellBlock"]);
 

@@ -1,4 +1,4 @@
-import { isSafeHref } from "@/lib/entries/safe-href";
+import { isSafeHref } from "@/lib/document/safe-href";
 
 /**
  * Link options for the editor: only http, https, mailto and in-app links are ever created,

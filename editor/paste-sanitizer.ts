@@ -1,5 +1,5 @@
 import { Extension } from "@tiptap/core";
-import { isSafeHref } from "@/lib/entries/safe-href";
+import { isSafeHref } from "@/lib/document/safe-href";
 
 /**
  * Pasted HTML is cleaned before ProseMirror parses it. The editor schema already drops

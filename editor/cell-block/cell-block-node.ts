@@ -1,8 +1,8 @@
 import { Node, mergeAttributes } from "@tiptap/core";
 import { ReactNodeViewRenderer } from "@tiptap/react";
-import { defaultCellBlockInput } from "@/lib/entries/block-defaults";
-import { newBlockId } from "@/lib/entries/block-id";
-import { cellBlockInputSchema, type CellBlockInput } from "@/lib/entries/block-schemas";
+import { defaultCellBlockInput } from "@/lib/document/block-defaults";
+import { newBlockId } from "@/lib/document/block-id";
+import { cellBlockInputSchema, type CellBlockInput } from "@/lib/document/block-schemas";
 import { blockAttributes } from "../block-node-html";
 import { insertBlockContent } from "../insert-block";
 import { CellBlockView } from "./cell-block-view";

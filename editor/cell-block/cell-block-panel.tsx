@@ -4,8 +4,8 @@ import type {
   CellBlockInput,
   ElectrodeInput,
   SolutionBlockInput,
-} from "@/lib/entries/block-schemas";
-import { REFERENCE_ELECTRODE_IDS } from "@/lib/entries/block-schemas";
+} from "@/lib/document/block-schemas";
+import { REFERENCE_ELECTRODE_IDS } from "@/lib/document/block-schemas";
 import { referenceElectrodeLabel } from "../chem-catalogue";
 import { NumberField } from "../ui/number-field";
 import { SelectField } from "../ui/select-field";

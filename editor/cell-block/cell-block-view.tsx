@@ -2,7 +2,7 @@
 
 import { NodeViewWrapper, useEditorState, type ReactNodeViewProps } from "@tiptap/react";
 import { lazy, Suspense } from "react";
-import type { CellBlockInput } from "@/lib/entries/block-schemas";
+import type { CellBlockInput } from "@/lib/document/block-schemas";
 import { BlockLoading } from "../block-loading";
 import { useEntrySolutionBlocks } from "./use-entry-solution-blocks";
 

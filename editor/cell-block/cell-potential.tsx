@@ -1,13 +1,13 @@
 "use client";
 
 import { useMemo } from "react";
-import type { CellBlockInput, SolutionBlockInput } from "@/lib/entries/block-schemas";
+import type { CellBlockInput, SolutionBlockInput } from "@/lib/document/block-schemas";
 import { formatPotentialV } from "@/lib/ui/format-number";
 import { coupleOptions, referenceElectrodeLabel } from "../chem-catalogue";
 import { NumberField } from "../ui/number-field";
 import { SafetyCaution } from "../ui/safety-caution";
 import { SelectField } from "../ui/select-field";
-import { computeCellPotential } from "./compute-cell-potential";
+import { computeCellPotential } from "@/lib/document/evaluate-cell-block";
 
 interface CellPotentialProps {
   cell: CellBlockInput;

@@ -1,7 +1,7 @@
 "use client";
 
 import { useId } from "react";
-import type { ElectrodeInput } from "@/lib/entries/block-schemas";
+import type { ElectrodeInput } from "@/lib/document/block-schemas";
 import { inputClass, labelClass } from "../ui/field-styles";
 import { NumberField } from "../ui/number-field";
 import { TextField } from "../ui/text-field";

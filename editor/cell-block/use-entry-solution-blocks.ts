@@ -2,7 +2,7 @@
 
 import type { Editor } from "@tiptap/core";
 import { useEditorState } from "@tiptap/react";
-import type { SolutionBlockInput } from "@/lib/entries/block-schemas";
+import type { SolutionBlockInput } from "@/lib/document/block-schemas";
 
 /**
  * The solution blocks of the entry the editor holds, in document order. Re-renders the

@@ -1,6 +1,6 @@
 import { ChemFormula } from "@/lib/ui/chem-formula";
 import { formatSignificant } from "@/lib/ui/format-number";
-import type { SolutionResult } from "@/lib/entries/evaluate-solution-block";
+import type { SolutionResult } from "@/lib/document/evaluate-solution-block";
 
 /**
  * What each weighed or measured component amounts to: its molar mass as weighed (hydrate

@@ -6,7 +6,7 @@ import {
   PER_UNITS,
   UNITS_NEEDING_PER,
   type SolutionComponentInput,
-} from "@/lib/entries/block-schemas";
+} from "@/lib/document/block-schemas";
 import { NumberField } from "../ui/number-field";
 import { SelectField } from "../ui/select-field";
 import { quietButtonClass } from "../ui/field-styles";

@@ -1,7 +1,7 @@
 "use client";
 
 import { useEffect, useRef, useState, type KeyboardEvent } from "react";
-import { UNITS_NEEDING_PER, type SolutionComponentInput } from "@/lib/entries/block-schemas";
+import { UNITS_NEEDING_PER, type SolutionComponentInput } from "@/lib/document/block-schemas";
 import { actionButtonClass } from "../ui/field-styles";
 import { ComponentRow } from "./component-row";
 import type { FieldMessages } from "./field-messages";

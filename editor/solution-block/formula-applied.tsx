@@ -2,7 +2,7 @@
 
 import { formatSignificant } from "@/lib/ui/format-number";
 import { Tex } from "../ui/tex";
-import type { SolutionResult } from "@/lib/entries/evaluate-solution-block";
+import type { SolutionResult } from "@/lib/document/evaluate-solution-block";
 
 /**
  * The model's equation as lib/chem states it, then the same equation with this solution's

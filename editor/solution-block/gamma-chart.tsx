@@ -15,8 +15,8 @@ import {
 import { formatSignificant } from "@/lib/ui/format-number";
 import { modelLabel } from "../chem-catalogue";
 import { SelectField } from "../ui/select-field";
-import type { ChemInput, SolutionResult } from "@/lib/entries/evaluate-solution-block";
-import { computeGammaCurves } from "./gamma-curves";
+import type { ChemInput, SolutionResult } from "@/lib/document/evaluate-solution-block";
+import { computeGammaCurves } from "@/lib/document/gamma-curves";
 
 // One hue per model, from the palette's family of inks, lagoons and coppers, so lines stay
 // distinguishable without a rainbow.

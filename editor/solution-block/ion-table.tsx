@@ -1,6 +1,6 @@
 import { ChemFormula } from "@/lib/ui/chem-formula";
 import { formatSignificant } from "@/lib/ui/format-number";
-import type { SolutionResult } from "@/lib/entries/evaluate-solution-block";
+import type { SolutionResult } from "@/lib/document/evaluate-solution-block";
 
 function chargeLabel(charge: number): string {
   if (charge === 0) return "0";

@@ -1,5 +1,5 @@
 import { formatSignificant } from "@/lib/ui/format-number";
-import type { SolutionResult } from "@/lib/entries/evaluate-solution-block";
+import type { SolutionResult } from "@/lib/document/evaluate-solution-block";
 
 /** The headline numbers: ionic strength on both scales and the Debye length. */
 export function ResultsSummary({ result }: { result: SolutionResult }) {

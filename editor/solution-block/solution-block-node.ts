@@ -1,8 +1,8 @@
 import { Node, mergeAttributes } from "@tiptap/core";
 import { ReactNodeViewRenderer } from "@tiptap/react";
-import { defaultSolutionBlockInput } from "@/lib/entries/block-defaults";
-import { newBlockId } from "@/lib/entries/block-id";
-import { solutionBlockInputSchema, type SolutionBlockInput } from "@/lib/entries/block-schemas";
+import { defaultSolutionBlockInput } from "@/lib/document/block-defaults";
+import { newBlockId } from "@/lib/document/block-id";
+import { solutionBlockInputSchema, type SolutionBlockInput } from "@/lib/document/block-schemas";
 import { blockAttributes } from "../block-node-html";
 import { insertBlockContent } from "../insert-block";
 import { SolutionBlockView } from "./solution-block-view";

@@ -1,10 +1,10 @@
 "use client";
 
 import { useMemo } from "react";
-import type { SolutionBlockInput } from "@/lib/entries/block-schemas";
+import type { SolutionBlockInput } from "@/lib/document/block-schemas";
 import { TextField } from "../ui/text-field";
 import { ComponentsTable } from "./components-table";
-import { evaluateSolutionBlockCached } from "@/lib/entries/evaluate-solution-block";
+import { evaluateSolutionBlockCached } from "@/lib/document/evaluate-solution-block";
 import { NO_MESSAGES, type FieldMessages } from "./field-messages";
 import { SolutionResults } from "./solution-results";
 import { SolutionSettings } from "./solution-settings";

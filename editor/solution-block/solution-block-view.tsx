@@ -2,7 +2,7 @@
 
 import { NodeViewWrapper, useEditorState, type ReactNodeViewProps } from "@tiptap/react";
 import { lazy, Suspense } from "react";
-import type { SolutionBlockInput } from "@/lib/entries/block-schemas";
+import type { SolutionBlockInput } from "@/lib/document/block-schemas";
 import { BlockLoading } from "../block-loading";
 
 // The panel brings lib/chem (about 110 kB gzip with its unit parser): fetched with the first

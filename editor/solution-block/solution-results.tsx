@@ -4,7 +4,7 @@ import { lazy, Suspense, useState } from "react";
 import { actionButtonClass } from "../ui/field-styles";
 import { SafetyCaution } from "../ui/safety-caution";
 import { hazardNotesFor } from "../chem-catalogue";
-import type { SolutionEvaluation } from "@/lib/entries/evaluate-solution-block";
+import type { SolutionEvaluation } from "@/lib/document/evaluate-solution-block";
 import { ComponentResults } from "./component-results";
 import { describeField } from "./describe-field";
 import { FormulaApplied } from "./formula-applied";

@@ -1,6 +1,6 @@
 "use client";
 
-import type { SolutionBlockInput } from "@/lib/entries/block-schemas";
+import type { SolutionBlockInput } from "@/lib/document/block-schemas";
 import { modelOptions, solventOptions } from "../chem-catalogue";
 import { NumberField } from "../ui/number-field";
 import { SelectField } from "../ui/select-field";

@@ -1,7 +1,7 @@
 "use client";
 
 import type { Editor } from "@tiptap/core";
-import { isSafeHref } from "@/lib/entries/safe-href";
+import { isSafeHref } from "@/lib/document/safe-href";
 import { Tex } from "../ui/tex";
 import type { ToolbarPrompt } from "./editor-toolbar";
 import { PromptPopover } from "./prompt-popover";

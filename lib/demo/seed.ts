@@ -43,14 +43,12 @@ export async function seedDemo(
           demo.members.find((m) => m.role === "supervisor")?.email ?? demo.members[0].email
         ];
       for (const p of demo.projects) {
-        await tx
-          .insert(projects)
-          .values({
-            labId: lab.id,
-            name: p.name,
-            description: p.description,
-            createdById: creator,
-          });
+        await tx.insert(projects).values({
+          labId: lab.id,
+          name: p.name,
+          description: p.description,
+          createdById: creator,
+        });
       }
       await insertAuditEvent(tx, {
         labId: lab.id,

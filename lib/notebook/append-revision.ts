@@ -2,23 +2,14 @@ import "server-only";
 import type { Executor } from "@/db/client";
 import { insertRevision, updateEntry } from "@/db/queries/entries";
 import { insertSolutionWithComponents } from "@/db/queries/solutions";
-import { canonicalHash } from "@/lib/entries/canonical-hash";
-import { extractSolutionBlocks } from "@/lib/entries/extract-blocks";
-import { documentPlainText } from "./plain-text";
-import { solutionRecordFor } from "./solution-records";
-
-/** The content hash a revision (and later a signature) records: SHA-256 of canonical { title, content }. */
-export function revisionHash(title: string, content: unknown): string {
-  return canonicalHash({ title, content });
-}
+import type { PreparedRevision } from "@/lib/document/prepare-revision";
 
 export interface NewRevision {
   labId: string;
   entryId: string;
   number: number;
-  title: string;
-  content: unknown;
   authorId: string;
+  prepared: PreparedRevision;
 }
 
 /**
@@ -30,19 +21,17 @@ export async function appendRevision(
   tx: Executor,
   r: NewRevision,
 ): Promise<{ contentHash: string; solutions: number }> {
-  const contentHash = revisionHash(r.title, r.content);
+  const { prepared } = r;
   const revision = await insertRevision(tx, {
     entryId: r.entryId,
     number: r.number,
-    title: r.title,
-    content: r.content as Record<string, unknown>,
-    contentText: documentPlainText(r.content),
-    contentHash,
+    title: prepared.title,
+    content: prepared.content as unknown as Record<string, unknown>,
+    contentText: prepared.contentText,
+    contentHash: prepared.contentHash,
     authorId: r.authorId,
   });
-  const blocks = extractSolutionBlocks(r.content);
-  for (const block of blocks) {
-    const { components, ...record } = solutionRecordFor(block);
+  for (const { components, ...record } of prepared.solutions) {
     await insertSolutionWithComponents(
       tx,
       { labId: r.labId, entryId: r.entryId, revisionId: revision.id, ...record },
@@ -51,8 +40,8 @@ export async function appendRevision(
   }
   await updateEntry(tx, r.labId, r.entryId, {
     currentRevisionNumber: r.number,
-    title: r.title,
+    title: prepared.title,
     updatedAt: new Date(),
   });
-  return { contentHash, solutions: blocks.length };
+  return { contentHash: prepared.contentHash, solutions: prepared.solutions.length };
 }

@@ -11,12 +11,13 @@ import {
 import { findLabProject } from "@/db/queries/projects";
 import type { EntryStatus } from "@/db/schema/enums";
 import { assertCan, type Actor } from "@/lib/access/authorize";
-import { findTemplate } from "@/lib/entries/templates";
+import { findTemplate } from "@/lib/document/templates";
 import { AppError } from "@/lib/errors";
 import { getDb } from "@/lib/server/database";
 import { createEntrySchema, entryListQuerySchema } from "@/lib/validation/entries";
 import { parseInput, parseRecordId } from "@/lib/validation/parse";
 import { appendRevision } from "./append-revision";
+import { prepareRevision } from "@/lib/document/prepare-revision";
 
 export const EMPTY_DOCUMENT = { type: "doc", content: [{ type: "paragraph" }] };
 
@@ -95,9 +96,8 @@ export async function createEntry(actor: Actor, raw: unknown): Promise<{ id: str
         labId: actor.labId,
         entryId: entry.id,
         number: 1,
-        title: input.title,
-        content: template.build(),
         authorId: actor.userId,
+        prepared: prepareRevision(input.title, template.build()),
       });
     }
     await insertAuditEvent(tx, {

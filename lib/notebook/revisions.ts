@@ -6,7 +6,7 @@ import { AppError } from "@/lib/errors";
 import { getDb } from "@/lib/server/database";
 import { parseRecordId } from "@/lib/validation/parse";
 import { EMPTY_DOCUMENT, getEntryHeader } from "./entries";
-import { summariseChange } from "./revision-changes";
+import { summariseChange } from "@/lib/document/revision-diff";
 
 export interface RevisionDto {
   number: number;

@@ -2,12 +2,12 @@ import "server-only";
 import { insertAuditEvent } from "@/db/queries/audit";
 import { findLabEntry, findRevision } from "@/db/queries/entries";
 import { assertCan, type Actor } from "@/lib/access/authorize";
-import { describeDocumentErrors, entryDocumentSchema } from "@/lib/entries/document-schema";
+import { prepareRevision } from "@/lib/document/prepare-revision";
 import { AppError } from "@/lib/errors";
 import { getDb } from "@/lib/server/database";
 import { saveEntrySchema } from "@/lib/validation/entries";
 import { parseInput, parseRecordId } from "@/lib/validation/parse";
-import { appendRevision, revisionHash } from "./append-revision";
+import { appendRevision } from "./append-revision";
 
 export interface SaveResult {
   revision: number;
@@ -32,18 +32,8 @@ export async function saveEntryContent(
 ): Promise<SaveResult> {
   assertCan(actor, "entry.write");
   const input = parseInput(saveEntrySchema, raw);
-  const parsedDoc = entryDocumentSchema.safeParse(input.content);
-  if (!parsedDoc.success) {
-    throw new AppError(
-      "invalid_input",
-      "The document was refused; the previous revision is unchanged.",
-      {
-        details: { problems: describeDocumentErrors(parsedDoc.error).slice(0, 20) },
-      },
-    );
-  }
-  const content = parsedDoc.data;
-  const contentHash = revisionHash(input.title, content);
+  const prepared = prepareRevision(input.title, input.content);
+  const { contentHash } = prepared;
 
   return getDb().transaction(async (tx) => {
     const entry = await findLabEntry(tx, actor.labId, parseRecordId(entryId, "Entry"), true);
@@ -70,9 +60,8 @@ export async function saveEntryContent(
       labId: actor.labId,
       entryId: entry.id,
       number,
-      title: input.title,
-      content,
       authorId: actor.userId,
+      prepared,
     });
     if (number === 1)
       await insertAuditEvent(tx, {

@@ -1,12 +1,12 @@
 // @vitest-environment node
 import { createHash } from "node:crypto";
 import { describe, expect, it } from "vitest";
-import { canonicalHash, canonicalJson } from "@/lib/entries/canonical-hash";
-import { sha256Hex } from "@/lib/entries/sha256";
+import { canonicalHash, canonicalJson, sha256Hex } from "@/lib/document/canonical-hash";
 
 describe("sha256Hex", () => {
-  it("matches the FIPS 180-2 example digests", () => {
-    // FIPS 180-2, Appendix B.1 and B.2.
+  it("matches the FIPS 180-4 example digests", () => {
+    // NIST FIPS 180-4 examples (SHA256.pdf, "one-block" and "two-block" messages) and the
+    // well-known digest of the empty string.
     expect(sha256Hex("abc")).toBe(
       "ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad",
     );
@@ -14,6 +14,10 @@ describe("sha256Hex", () => {
       "248d6a61d20638b8e5c026930c3e6039a33ce45964ff2167f6ecedd419db06c1",
     );
     expect(sha256Hex("")).toBe("e3b0c44298fc1c149afbf4c8996fb92427ae41e4649b934ca495991b7852b855");
+    // NIST's long-message vector: one million repetitions of "a".
+    expect(sha256Hex("a".repeat(1_000_000))).toBe(
+      "cdc76e5c9914fb9281a1c7e284d73e67f1809a48a497200e046d39ccc7112cd0",
+    );
   });
 
   it("agrees with Node's crypto on block-boundary lengths and non-ASCII text", () => {

@@ -1,9 +1,9 @@
 // @vitest-environment node
 import { describe, expect, it } from "vitest";
-import { entryDocumentSchema, describeDocumentErrors } from "@/lib/entries/document-schema";
-import { entryTemplates } from "@/lib/entries/templates";
-import { extractCellBlocks, extractSolutionBlocks } from "@/lib/entries/extract-blocks";
-import { isSafeHref } from "@/lib/entries/safe-href";
+import { entryDocumentSchema, describeDocumentErrors } from "@/lib/document/document-schema";
+import { entryTemplates } from "@/lib/document/templates";
+import { extractCellBlocks, extractSolutionBlocks } from "@/lib/document/extract-blocks";
+import { isSafeHref } from "@/lib/document/safe-href";
 
 const para = (text: string, marks?: unknown[]) => ({
   type: "paragraph",

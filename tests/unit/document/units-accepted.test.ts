@@ -1,8 +1,8 @@
 // @vitest-environment node
 import { describe, expect, it } from "vitest";
-import { defaultSolutionBlockInput } from "@/lib/entries/block-defaults";
-import { AMOUNT_UNITS, PER_UNITS, UNITS_NEEDING_PER } from "@/lib/entries/block-schemas";
-import { evaluateSolutionBlock } from "@/lib/entries/evaluate-solution-block";
+import { defaultSolutionBlockInput } from "@/lib/document/block-defaults";
+import { AMOUNT_UNITS, PER_UNITS, UNITS_NEEDING_PER } from "@/lib/document/block-schemas";
+import { evaluateSolutionBlock } from "@/lib/document/evaluate-solution-block";
 
 // Every unit the block offers must be one lib/chem reads, or the menu would offer a refusal.
 describe("units offered by the solution block", () => {

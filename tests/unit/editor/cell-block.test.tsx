@@ -2,7 +2,7 @@ import { cleanup, render, screen, waitFor, within } from "@testing-library/react
 import userEvent from "@testing-library/user-event";
 import { afterEach, beforeAll, describe, expect, it } from "vitest";
 import { NotebookEditor } from "@/editor/notebook-editor";
-import { findTemplate } from "@/lib/entries/templates";
+import { findTemplate } from "@/lib/document/templates";
 import { preloadBlockPanels } from "../../support/preload-blocks";
 import { parseShownNumber } from "@/lib/ui/format-number";
 

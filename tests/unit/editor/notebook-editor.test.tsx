@@ -4,9 +4,9 @@ import type { Editor, JSONContent } from "@tiptap/core";
 import { afterEach, beforeAll, describe, expect, it, vi } from "vitest";
 import { NotebookEditor } from "@/editor/notebook-editor";
 import { sanitizePastedHtml } from "@/editor/paste-sanitizer";
-import { describeDocumentErrors, entryDocumentSchema } from "@/lib/entries/document-schema";
-import { extractCellBlocks, extractSolutionBlocks } from "@/lib/entries/extract-blocks";
-import { findTemplate } from "@/lib/entries/templates";
+import { describeDocumentErrors, entryDocumentSchema } from "@/lib/document/document-schema";
+import { extractCellBlocks, extractSolutionBlocks } from "@/lib/document/extract-blocks";
+import { findTemplate } from "@/lib/document/templates";
 import { preloadBlockPanels } from "../../support/preload-blocks";
 
 afterEach(cleanup);

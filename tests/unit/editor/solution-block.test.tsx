@@ -3,8 +3,8 @@ import userEvent from "@testing-library/user-event";
 import type { Editor, JSONContent } from "@tiptap/core";
 import { afterEach, beforeAll, describe, expect, it, vi } from "vitest";
 import { NotebookEditor } from "@/editor/notebook-editor";
-import { defaultSolutionBlockInput } from "@/lib/entries/block-defaults";
-import { extractSolutionBlocks } from "@/lib/entries/extract-blocks";
+import { defaultSolutionBlockInput } from "@/lib/document/block-defaults";
+import { extractSolutionBlocks } from "@/lib/document/extract-blocks";
 import { parseShownNumber } from "@/lib/ui/format-number";
 import { preloadBlockPanels } from "../../support/preload-blocks";
 

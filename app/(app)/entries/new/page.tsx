@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { requireActor } from "@/lib/access/actor";
-import { entryTemplates } from "@/lib/entries/templates";
+import { entryTemplates } from "@/lib/document/templates";
 import { listProjects } from "@/lib/projects/service";
 import { NewEntryForm } from "./new-entry-form";
 

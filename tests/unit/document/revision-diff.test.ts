@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { summariseChange } from "@/lib/notebook/revision-changes";
+import { summariseChange } from "@/lib/document/revision-diff";
 
 const p = (text: string) => ({ type: "paragraph", content: [{ type: "text", text }] });
 const block = (blockId: string, name: string, amount: number) => ({

@@ -1,7 +1,7 @@
 // @vitest-environment node
 import { describe, expect, it } from "vitest";
-import { computeCellPotential } from "@/editor/cell-block/compute-cell-potential";
-import { defaultCellBlockInput, defaultSolutionBlockInput } from "@/lib/entries/block-defaults";
+import { computeCellPotential } from "@/lib/document/evaluate-cell-block";
+import { defaultCellBlockInput, defaultSolutionBlockInput } from "@/lib/document/block-defaults";
 
 const acid = defaultSolutionBlockInput({
   name: "0.5 M H2SO4",

@@ -1,5 +1,5 @@
-import { canonicalJson } from "@/lib/entries/canonical-hash";
-import { documentPlainText } from "./plain-text";
+import { canonicalJson } from "@/lib/document/canonical-hash";
+import { documentPlainText } from "@/lib/document/plain-text";
 
 /**
  * "What changed" between two revisions, in words a reader scans: the title, text added or

@@ -1,5 +1,5 @@
 import { ACTIVITY_MODELS, computeSolution, isChemInputError } from "@/lib/chem";
-import type { ChemInput, SolutionResult } from "@/lib/entries/evaluate-solution-block";
+import type { ChemInput, SolutionResult } from "@/lib/document/evaluate-solution-block";
 
 /** Every model lib/chem offers (not "auto"), in its own order: newly registered ones appear too. */
 export const CHART_MODELS: readonly string[] = ACTIVITY_MODELS.map((model) => model.id).filter(

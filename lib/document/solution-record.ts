@@ -1,5 +1,5 @@
-import type { SolutionBlockInput } from "@/lib/entries/block-schemas";
-import { evaluateSolutionBlock } from "@/lib/entries/evaluate-solution-block";
+import type { SolutionBlockInput } from "@/lib/document/block-schemas";
+import { evaluateSolutionBlock } from "@/lib/document/evaluate-solution-block";
 
 /**
  * What the server stores for one solution block of a revision: recomputed here with the

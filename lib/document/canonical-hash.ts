@@ -1,4 +1,5 @@
-import { sha256Hex } from "./sha256";
+import { sha256 } from "@noble/hashes/sha2.js";
+import { bytesToHex, utf8ToBytes } from "@noble/hashes/utils.js";
 
 /**
  * The content hash of an entry revision: SHA-256 (hex) of the document's canonical JSON.
@@ -8,12 +9,17 @@ import { sha256Hex } from "./sha256";
  * Two documents that differ only in key order hash the same; a signature records this hash,
  * so it must not depend on how a client happened to serialise the tree.
  *
- * The hash is computed with a small pure SHA-256 (./sha256.ts), synchronous and identical in
- * the browser and in Node, rather than Web Crypto, whose `crypto.subtle` is async and is
- * missing on plain-http origins other than localhost.
+ * SHA-256 comes from @noble/hashes (audited, synchronous, identical in the browser and in
+ * Node) rather than Web Crypto, whose `crypto.subtle` is async and is missing on plain-http
+ * origins other than localhost.
  */
 export function canonicalJson(value: unknown): string {
   return serialise(value, new Set());
+}
+
+/** Hex SHA-256 of a string's UTF-8 bytes. */
+export function sha256Hex(text: string): string {
+  return bytesToHex(sha256(utf8ToBytes(text)));
 }
 
 export function canonicalHash(doc: unknown): string {

@@ -1,7 +1,7 @@
 // @vitest-environment node
 import { describe, expect, it } from "vitest";
 import { computeSolution } from "@/lib/chem";
-import { computeGammaCurves } from "@/editor/solution-block/gamma-curves";
+import { computeGammaCurves } from "@/lib/document/gamma-curves";
 
 const input = (molality: number, model = "davies") =>
   ({

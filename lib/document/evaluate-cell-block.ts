@@ -1,6 +1,6 @@
 import { convertPotentialDetailed, isChemInputError, nernstPotentialDetailed } from "@/lib/chem";
-import type { CellBlockInput, SolutionBlockInput } from "@/lib/entries/block-schemas";
-import { evaluateSolutionBlockCached } from "@/lib/entries/evaluate-solution-block";
+import type { CellBlockInput, SolutionBlockInput } from "@/lib/document/block-schemas";
+import { evaluateSolutionBlockCached } from "@/lib/document/evaluate-solution-block";
 
 export type CellPotentialResult =
   | { status: "idle"; message: string }

@@ -1,0 +1,47 @@
+import { AppError } from "@/lib/errors";
+import { canonicalHash } from "./canonical-hash";
+import { describeDocumentErrors, entryDocumentSchema, type EntryDocument } from "./document-schema";
+import { extractSolutionBlocks } from "./extract-blocks";
+import { documentPlainText } from "./plain-text";
+import { solutionRecordFor, type SolutionRecord } from "./solution-record";
+
+/** Everything a save stores for one document, computed once from the validated tree. */
+export interface PreparedRevision {
+  title: string;
+  content: EntryDocument;
+  /** Hex SHA-256 of the canonical { title, content }: what a revision and a signature record. */
+  contentHash: string;
+  /** Plain text for full-text search. */
+  contentText: string;
+  /** The server's own computation of every solution block, in document order. */
+  solutions: SolutionRecord[];
+}
+
+/** The content hash a revision (and a signature) records: SHA-256 of canonical { title, content }. */
+export function revisionHash(title: string, content: unknown): string {
+  return canonicalHash({ title, content });
+}
+
+/**
+ * Validates a document as the server accepts it and derives, once, what a revision stores.
+ * A document the schema refuses raises `invalid_input` with the first problems listed; the
+ * previous revision is untouched because nothing has been written yet.
+ */
+export function prepareRevision(title: string, rawContent: unknown): PreparedRevision {
+  const parsed = entryDocumentSchema.safeParse(rawContent);
+  if (!parsed.success) {
+    throw new AppError(
+      "invalid_input",
+      "The document was refused; the previous revision is unchanged.",
+      { details: { problems: describeDocumentErrors(parsed.error).slice(0, 20) } },
+    );
+  }
+  const content = parsed.data;
+  return {
+    title,
+    content,
+    contentHash: revisionHash(title, content),
+    contentText: documentPlainText(content),
+    solutions: extractSolutionBlocks(content).map(solutionRecordFor),
+  };
+}
