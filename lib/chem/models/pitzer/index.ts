@@ -8,3 +8,5 @@ export { binaryParameters, thetaParameter, psiParameter } from "./parameter-tabl
 export { assemblePitzerSystem } from "./assemble";
 export { pitzerCoverage } from "./coverage";
 export type { PitzerCoverage } from "./coverage";
+export { pairAtTemperature } from "./temperature/pair-at-temperature";
+export type { PairAtTemperature } from "./temperature/pair-at-temperature";
