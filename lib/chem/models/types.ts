@@ -3,6 +3,8 @@
  * to the Debye–Hückel family (part 1) and to Pitzer and SIT (part 2) the same way.
  */
 
+import type { ModelRange } from "./range";
+
 export type ActivityModelId =
   "dh-limiting" | "dh-extended" | "guntelberg" | "davies" | "truesdell-jones" | "pitzer" | "sit";
 
@@ -12,6 +14,8 @@ export interface ModelIon {
   formula: string;
   charge: number;
   molality: number;
+  /** True for an ion pair formed by the speciation (not one of the solution's own ions). */
+  pair?: boolean;
 }
 
 /** Solvent-dependent Debye–Hückel constants at the solution's temperature (molal scale). */
@@ -29,11 +33,19 @@ export interface DebyeHuckelConstants {
 export interface ActivityModelOptions {
   /** Coefficient of the linear term in the Davies equation: 0.3 (Davies 1962) or 0.2 (earlier form). */
   daviesCoefficient?: 0.2 | 0.3;
+  /** Set by computeSolution when ion pairs are speciated: the model need not warn about them. */
+  ionPairsSpeciated?: boolean;
 }
 
 export interface ActivityModelInput {
   ions: ModelIon[];
   ionicStrengthMolal: number;
+  /**
+   * Ionic strength the range check uses, when it differs from the one the equations use: the
+   * stoichiometric I of the solution as entered, while the equations see the true I of free
+   * ions and charged pairs (ion association lowers it). Ranges are stated on the former.
+   */
+  rangeIonicStrengthMolal?: number;
   temperatureC: number;
   solvent: string;
   constants: DebyeHuckelConstants;
@@ -52,6 +64,8 @@ export interface ActivityModelOutput {
 }
 
 export interface ActivityModel {
+  /** Range of validity in temperature, ionic strength and charge type (models/range.ts). */
+  range?: ModelRange;
   id: ActivityModelId;
   label: string;
   /** LaTeX of the equation applied, for the solution block (KaTeX). */
@@ -61,6 +75,8 @@ export interface ActivityModel {
   validityNote?: string;
   /** Upper ionic strength (mol/kg) of the model's documented range (added by part 1). */
   maxIonicStrengthMolal?: number;
+  /** True for free-ion models (the Debye–Hückel family): ion association applies to them. */
+  freeIon?: boolean;
   /** The equation with this solution's A, B, I (and options) substituted, for KaTeX (added by part 1). */
   substitutedTex?(input: ActivityModelInput): string;
 }

@@ -43,8 +43,7 @@ describe("Pitzer NaCl at 0–100 °C (Pitzer, Peiper & Busey 1984 tables)", () =
       expect(Math.abs(g), `γ± ${m} mol/kg at ${T} °C`).toBeLessThan(1);
       // φ at 0 °C and 4 mol/kg (1.016) is a transcription error in the table (reference README item 8).
       const phiTable = Number(row.osmotic_coeff);
-      const p =
-        T === 0 && m === 4 ? 0 : (100 * (r.osmoticCoefficient! - phiTable)) / phiTable;
+      const p = T === 0 && m === 4 ? 0 : (100 * (r.osmoticCoefficient! - phiTable)) / phiTable;
       expect(Math.abs(p), `φ ${m} mol/kg at ${T} °C`).toBeLessThan(1);
       expect(r.validityMessages).toEqual([]);
       const w = (worst[`${T} °C`] ??= { gammaPercent: 0, phiPercent: 0 });
