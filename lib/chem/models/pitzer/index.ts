@@ -4,7 +4,12 @@ export type { BinarySaltInput, BinarySaltResult } from "./binary-salt";
 export { pitzerMixture } from "./equations";
 export { eTheta } from "./e-theta";
 export { jFunction } from "./j-function";
-export { binaryParameters, thetaParameter, psiParameter } from "./parameter-tables";
+export {
+  BINARY_SETS_IN_PRIORITY,
+  binaryParameters,
+  thetaParameter,
+  psiParameter,
+} from "./parameter-tables";
 export { assemblePitzerSystem } from "./assemble";
 export { pitzerCoverage } from "./coverage";
 export type { PitzerCoverage } from "./coverage";
