@@ -3,7 +3,7 @@
  * (with ion association for free-ion models) → ion and mean-salt activities, osmotic
  * coefficient, sanity and range checks, charge balance, warnings, hazards.
  */
-import { solveAmounts } from "../amounts/solve";
+import { amountsWithDensity } from "../density/solution-density";
 import { componentField } from "../component-field";
 import { debyeHuckelConstantsFrom } from "../debye-huckel-constants";
 import { chooseModel } from "../models/auto";
@@ -31,7 +31,13 @@ export function computeSolution(input: SolutionInput): SolutionResult {
   const species = input.components.map((c, i) =>
     resolveSpecies(c.formula, componentField(i, "formula")),
   );
-  const amounts = solveAmounts(input.components, species, density, state.densityGPerMl);
+  const { amounts, density: densityUsed } = amountsWithDensity(
+    input.components,
+    species,
+    density,
+    { id: state.solvent.id, densityGPerMl: state.densityGPerMl },
+    temperatureC,
+  );
   const V = amounts.litresPerKgSolvent;
   const { ions, neutralMolality } = solutionIons(species, amounts.components, V);
   const I = ionicStrength(ions);
@@ -126,6 +132,7 @@ export function computeSolution(input: SolutionInput): SolutionResult {
   ];
   const { warnings, notes } = solutionWarnings(species, state, amounts.warnings, output.notes);
   if (balance.message) warnings.push(balance.message);
+  if (densityUsed.note) warnings.push(densityUsed.note);
   const speciation = freeIndex ? speciationResult(ions, V, freeIndex) : undefined;
   if (speciation) notes.push(speciation.note);
 
@@ -138,6 +145,7 @@ export function computeSolution(input: SolutionInput): SolutionResult {
       densityGPerMl: state.densityGPerMl,
     },
     ionicStrength: I,
+    density: densityUsed,
     debyeLengthNm: kappa > 0 ? 1 / kappa : null,
     kappaPerNm: kappa,
     ions: ionResults,

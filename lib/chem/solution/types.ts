@@ -1,6 +1,7 @@
 /** Input and result of `computeSolution` (docs/architecture.md, "The computation contract"). */
 import type { ActivityModelId, ActivityModelOptions, DebyeHuckelConstants } from "../models/types";
 import type { SpeciesKind } from "../species/salts";
+import type { DensityUsed } from "../density/solution-density";
 import type { CounterIonOffer } from "./charge-balance";
 import type { SpeciationResult } from "./speciation-result";
 
@@ -67,6 +68,8 @@ export interface SolutionResult {
   temperatureC: number;
   solvent: { id: string; name: string; relativePermittivity: number; densityGPerMl: number };
   ionicStrength: { molal: number; molar: number };
+  /** The density used for molar ↔ molal conversion, and where it came from. */
+  density: DensityUsed;
   /** null when no ions are present (the screening length is unbounded). */
   debyeLengthNm: number | null;
   kappaPerNm: number;
