@@ -32,6 +32,19 @@ export interface NernstResult {
 
 /** RT ln10 / nF in volts per decade. */
 export function nernstSlopeV(temperatureC: number, n = 1): number {
+  if (!(temperatureC > -273.15 && temperatureC <= 1000))
+    throw new ChemInputError(
+      "The temperature must be a number above absolute zero and at most 1000 °C.",
+      {
+        field: "temperatureC",
+        code: "bad_temperature",
+      },
+    );
+  if (!(Number.isInteger(n) && n > 0 && n <= 20))
+    throw new ChemInputError("The number of electrons n must be a whole number from 1 to 20.", {
+      field: "n",
+      code: "bad_electrons",
+    });
   return (GAS_CONSTANT_J_PER_MOL_K * kelvin(temperatureC) * LN10) / (n * FARADAY_C_PER_MOL);
 }
 
@@ -128,8 +141,11 @@ function activityLookup(
     const given = byKey.get(parsed.anhydrousKey);
     if (given !== undefined) return given;
     if (input.pH !== undefined && (species === "H+" || species === "OH-")) {
-      if (!Number.isFinite(input.pH))
-        throw new ChemInputError("pH must be a number.", { field: "pH", code: "bad_ph" });
+      if (!(input.pH >= -2 && input.pH <= 16))
+        throw new ChemInputError("pH must be a number from −2 to 16.", {
+          field: "pH",
+          code: "bad_ph",
+        });
       if (species === "H+") return 10 ** -input.pH;
       const pKw = pKwAt(temperatureC);
       notes.push(

@@ -10,6 +10,7 @@
  * where the Debye–Hückel family is off by tens of per cent) and the choice says so.
  * A composition whose charges do not balance is never handed to an ion-interaction model.
  */
+import { ChemInputError } from "../errors";
 import { PITZER_AUTO_CANDIDATE } from "./pitzer/auto-candidate";
 import { SIT_AUTO_CANDIDATE } from "./sit/auto-candidate";
 import { DH_FAMILY_CANDIDATES } from "./dh-candidates";
@@ -70,10 +71,31 @@ export interface AutoChoice {
   change?: string;
 }
 
+/** The context comes from computeSolution, but the function is public: bad input is a typed error. */
+function checkContext(c: AutoContext): void {
+  const bad = (field: string, message: string) =>
+    new ChemInputError(message, { field, code: "invalid_input" });
+  if (!c || !Array.isArray(c.ions)) throw bad("ions", "The ions must be a list.");
+  c.ions.forEach((ion, i) => {
+    if (!ion || typeof ion.formula !== "string")
+      throw bad(`ions[${i}].formula`, "Each ion needs a formula.");
+    if (!(Number.isInteger(ion.charge) && Math.abs(ion.charge) <= 12))
+      throw bad(`ions[${i}].charge`, "An ion's charge must be a whole number from −12 to 12.");
+    if (!(Number.isFinite(ion.molality) && ion.molality >= 0))
+      throw bad(`ions[${i}].molality`, "A molality must be a finite, non-negative number.");
+  });
+  if (!(Number.isFinite(c.ionicStrengthMolal) && c.ionicStrengthMolal >= 0))
+    throw bad("ionicStrengthMolal", "The ionic strength must be a finite, non-negative number.");
+  if (!Number.isFinite(c.temperatureC))
+    throw bad("temperatureC", "The temperature must be a number in °C.");
+  if (typeof c.solvent !== "string") throw bad("solvent", "The solvent must be named.");
+}
+
 export function chooseModel(
   context: AutoContext,
   candidates: readonly AutoCandidate[] = AUTO_CANDIDATES,
 ): AutoChoice {
+  checkContext(context);
   // Outside water only the limiting law has no water parameters: it goes first there.
   const ordered =
     context.solvent === "water"
