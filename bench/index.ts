@@ -7,6 +7,8 @@ import { printDhBench } from "./chem-dh";
 import { printPitzerBench } from "./chem-pitzer";
 import { printBufferBench } from "./chem-buffer";
 import { printEditorRecomputeBench } from "./editor-recompute";
+import { printSeawaterBench } from "./chem-seawater";
+import { printSweepBench } from "./chem-sweep";
 
 console.log(
   `Node ${process.version}, ${os.cpus().length} CPU(s), load average ${os
@@ -20,6 +22,8 @@ const reports = [
   printPitzerBench(),
   printBufferBench(),
   printEditorRecomputeBench(),
+  printSeawaterBench(),
+  printSweepBench(),
 ];
 
 const failed = reports.filter((r) => !r.pass).length;

@@ -73,10 +73,10 @@ export function amountsWithDensity(
       (c, i) => (c.molality * species[i].anhydrousMolarMassGPerMol) / 1000 / total,
     );
     const next = laliberteDensityGPerMl(used, fractions, temperatureC);
-    const converged = Math.abs(next - rho) <= TOLERANCE * rho;
+    // The amounts in hand were solved with this density already.
+    if (Math.abs(next - rho) <= TOLERANCE * rho) break;
     rho = next;
     amounts = solveAmounts(inputs, species, rho, solvent.densityGPerMl);
-    if (converged) break;
   }
   const soluteFraction = 1 - 1 / amounts.kgSolutionPerKgSolvent;
   const outside = used.filter(

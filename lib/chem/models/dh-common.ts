@@ -81,6 +81,21 @@ function lnGammaExtendedForm(az2: number, beta: number, b: number, x: number): n
 
 const LN10_LOCAL = Math.LN10;
 
+/** ln γ of every ion from the common form's coefficients at ionic strength I, into `out`. */
+export function commonFormLnGamma(
+  aLog10: number,
+  ions: readonly ModelIon[],
+  form: { beta: ArrayLike<number>; b: ArrayLike<number> },
+  I: number,
+  out: number[],
+): number[] {
+  for (let i = 0; i < ions.length; i++) {
+    const z = ions[i].charge;
+    out[i] = lnGammaExtendedForm(aLog10 * z * z, form.beta[i], form.b[i], I);
+  }
+  return out;
+}
+
 export function evaluateExtendedForm(
   input: ActivityModelInput,
   beta: ArrayLike<number>,

@@ -40,6 +40,10 @@ export const dhLimitingModel: ActivityModel = {
   validityNote:
     "Dilute solutions only: √I ≤ 0.1 for 1:1 electrolytes, √I ≤ 0.1/|z₊z₋| for higher charges (common practice).",
   range: DH_LIMITING_RANGE,
+  commonForm: (input) => {
+    const zeros = new Array<number>(input.ions.length).fill(0);
+    return { beta: zeros, b: zeros };
+  },
   compute(input: ActivityModelInput) {
     const sqrtI = Math.sqrt(input.rangeIonicStrengthMolal ?? input.ionicStrengthMolal);
     const product = chargeProductMagnitude(input.ions.filter((i) => !i.pair));

@@ -4,7 +4,7 @@
  * The extended equation with B å = 1 (kg/mol)^½ (å ≈ 3 Å in water at 25 °C), used for
  * mixtures where no single ion size fits. Ions up to |z| = 2; ranges in dh-ranges.ts.
  */
-import type { ActivityModel, ActivityModelInput } from "./types";
+import type { ActivityModel, ActivityModelInput, CommonFormCoefficients } from "./types";
 import { dhFamilyOutput, substitutedCore } from "./dh-common";
 import { GUNTELBERG_RANGE } from "./dh-ranges";
 
@@ -14,6 +14,12 @@ const RANGE = {
   waterParameters: "the product B·å = 1",
 };
 
+/** β = 1 (B å = 1), b = 0. */
+function guntelbergForm(input: ActivityModelInput): CommonFormCoefficients {
+  const n = input.ions.length;
+  return { beta: new Array<number>(n).fill(1), b: new Array<number>(n).fill(0) };
+}
+
 export const guntelbergModel: ActivityModel = {
   id: "guntelberg",
   freeIon: true,
@@ -22,9 +28,10 @@ export const guntelbergModel: ActivityModel = {
   validityNote:
     "Water, 0–100 °C; I ≤ 0.02 mol/kg for 1:1, 0.01 for 2:1 and 1:2 salts (within 2 % of the CRC tables); B·å = 1 is a water value.",
   range: GUNTELBERG_RANGE,
+  commonForm: guntelbergForm,
   compute(input: ActivityModelInput) {
-    const n = input.ions.length;
-    return dhFamilyOutput(RANGE, input, new Array<number>(n).fill(1), new Array<number>(n).fill(0));
+    const { beta, b } = guntelbergForm(input);
+    return dhFamilyOutput(RANGE, input, beta, b);
   },
   substitutedTex(input) {
     const { A, sqrtI } = substitutedCore(input);

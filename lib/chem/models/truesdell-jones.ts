@@ -7,7 +7,7 @@
  * with b-dot ions, 0.1 (measured against CRC γ± and Pitzer, Peiper & Busey 1984 NaCl).
  */
 import { bDot } from "../data/ion-size-bdot";
-import type { ActivityModel, ActivityModelInput } from "./types";
+import type { ActivityModel, ActivityModelInput, CommonFormCoefficients } from "./types";
 import { dhFamilyOutput, substitutedCore, texNumber } from "./dh-common";
 import { TRUESDELL_JONES_BDOT_RANGE, TRUESDELL_JONES_FITTED_RANGE } from "./dh-ranges";
 import {
@@ -56,6 +56,40 @@ export function truesdellJonesIon(
   return p.source === "WATEQ4F" ? p : { ...p, b: bDot(temperatureC) };
 }
 
+interface TruesdellJonesForm extends CommonFormCoefficients {
+  bDotIons: string[];
+  assumed: string[];
+  /** True when every ion of the solution (not the pairs) has a WATEQ4F-fitted b. */
+  allFitted: boolean;
+  bDotHere: number;
+}
+
+/** β = B å, b fitted (WATEQ4F) or Ḃ(T) (b-dot ions). */
+function truesdellJonesForm(input: ActivityModelInput): TruesdellJonesForm {
+  const B = input.constants.bPerAngstrom;
+  const bDotIons: string[] = [];
+  const assumed: string[] = [];
+  let allFitted = true;
+  const n = input.ions.length;
+  const beta = new Array<number>(n);
+  const b = new Array<number>(n);
+  const bDotHere = bDot(input.temperatureC);
+  for (let i = 0; i < n; i++) {
+    const ion = input.ions[i];
+    const p = truesdellJonesIonStatic(ion.formula, ion.charge);
+    // Ion pairs of the speciation take the b-dot form and an assumed size (its note says so);
+    // they do not decide the range either: the solution's own ions do.
+    if (p.source !== "WATEQ4F" && !ion.pair) {
+      bDotIons.push(ion.formula);
+      if (ion.charge !== 0 && ion.molality > 0) allFitted = false;
+    }
+    if (p.source === "assumed" && !ion.pair) assumed.push(`${ion.formula} (å = ${p.aAngstrom} Å)`);
+    beta[i] = B * p.aAngstrom;
+    b[i] = p.source === "WATEQ4F" ? p.b : bDotHere;
+  }
+  return { beta, b, bDotIons, assumed, allFitted, bDotHere };
+}
+
 export const truesdellJonesModel: ActivityModel = {
   id: "truesdell-jones",
   freeIon: true,
@@ -64,27 +98,9 @@ export const truesdellJonesModel: ActivityModel = {
   validityNote:
     "Water. Every ion with a WATEQ4F-fitted b: I ≤ 2 mol/kg at 20–30 °C (1:2 salts 0.3), I ≤ 0.3 at 0–100 °C; an ion in b-dot form (Helgeson 1969): I ≤ 0.1 (within 2 % of the CRC and PPB84 tables).",
   range: TRUESDELL_JONES_FITTED_RANGE,
+  commonForm: truesdellJonesForm,
   compute(input: ActivityModelInput) {
-    const B = input.constants.bPerAngstrom;
-    const bDotIons: string[] = [];
-    let allFitted = true;
-    const assumed: string[] = [];
-    const n = input.ions.length;
-    const beta = new Array<number>(n);
-    const b = new Array<number>(n);
-    const bDotHere = bDot(input.temperatureC);
-    for (let i = 0; i < n; i++) {
-      const ion = input.ions[i];
-      const p = truesdellJonesIonStatic(ion.formula, ion.charge);
-      if (p.source !== "WATEQ4F") {
-        bDotIons.push(ion.formula);
-        // Ion pairs from the speciation do not decide the range; the solution's own ions do.
-        if (!ion.pair && ion.charge !== 0 && ion.molality > 0) allFitted = false;
-      }
-      if (p.source === "assumed") assumed.push(`${ion.formula} (å = ${p.aAngstrom} Å)`);
-      beta[i] = B * p.aAngstrom;
-      b[i] = p.source === "WATEQ4F" ? p.b : bDotHere;
-    }
+    const { beta, b, bDotIons, assumed, allFitted, bDotHere } = truesdellJonesForm(input);
     const notes: string[] = [];
     if (bDotIons.length)
       notes.push(

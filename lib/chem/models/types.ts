@@ -63,6 +63,11 @@ export interface ActivityModelOutput {
   notes: string[];
 }
 
+export interface CommonFormCoefficients {
+  beta: ArrayLike<number>;
+  b: ArrayLike<number>;
+}
+
 export interface ActivityModel {
   /** Range of validity in temperature, ionic strength and charge type (models/range.ts). */
   range?: ModelRange;
@@ -77,6 +82,13 @@ export interface ActivityModel {
   maxIonicStrengthMolal?: number;
   /** True for free-ion models (the Debye–Hückel family): ion association applies to them. */
   freeIon?: boolean;
+  /**
+   * The Debye–Hückel family's per-ion coefficients of the common form
+   *   log10 γi = −A zi² √I / (1 + βi √I) + bi I
+   * for these ions at this temperature (they do not depend on the molalities), so that the
+   * ion-association iteration can evaluate γ without building messages each step.
+   */
+  commonForm?(input: ActivityModelInput): CommonFormCoefficients;
   /** The equation with this solution's A, B, I (and options) substituted, for KaTeX (added by part 1). */
   substitutedTex?(input: ActivityModelInput): string;
 }

@@ -66,6 +66,6 @@ export function speciationResult(
         source: p.source,
       };
     }),
-    note: `Ion pairs speciated (association constants: ${sources}); γ± of each salt is the stoichiometric value, and each ion's activity is that of its free form.`,
+    note: `Ion pairs speciated (association constants: ${sources}); γ± of each salt is the stoichiometric value, and each ion's activity is that of its free form.${s.pairs.some((p) => p.charge !== 0) ? " Charged pairs take the ion size the model assumes for an untabulated ion of their charge." : ""}`,
   };
 }

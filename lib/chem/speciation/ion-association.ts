@@ -14,11 +14,19 @@ import type {
   ActivityModel,
   ActivityModelInput,
   ActivityModelOutput,
+  CommonFormCoefficients,
   ModelIon,
 } from "../models/types";
 import { ionKey, ionPair, log10AssociationConstant } from "./association-constants";
 import type { IonPairRow } from "./data/ion-pairs-wateq4f";
-import { solveMassBalance, type PairLink } from "./mass-balance";
+import { commonFormLnGamma } from "../models/dh-common";
+import {
+  initialFreeEstimate,
+  massBalanceSystem,
+  solveMassBalance,
+  type MassBalanceSystem,
+  type PairLink,
+} from "./mass-balance";
 
 export interface PairSpecies {
   formula: string;
@@ -48,11 +56,25 @@ export interface AssociationResult {
 }
 
 const MAX_ITERATIONS = 100;
-const I_TOLERANCE = 1e-11;
+const I_TOLERANCE = 1e-9;
 
+/** What depends only on the ions present (cached): the pairs, their charges, the species list. */
 interface PairPlan {
   rows: IonPairRow[];
   links: PairLink[];
+  pairCharge: number[];
+  /** Index of each pair among the species passed to the model (−1: neutral, γ = 1). */
+  speciesIndex: number[];
+  /** Formula and charge of every species passed to the model: the ions, then charged pairs. */
+  speciesTemplate: { formula: string; charge: number; pair?: boolean }[];
+  /** log10 K and K at the temperature of the last call. */
+  temperatureC: number;
+  log10K: number[];
+  K: number[];
+  /** Mass-balance systems by the pattern of ions present (usually one). */
+  systems: Map<string, MassBalanceSystem>;
+  /** The model's common-form coefficients for these species, with what they depend on. */
+  form?: { key: string; coefficients: CommonFormCoefficients };
 }
 
 const planCache = new Map<string, PairPlan>();
@@ -62,7 +84,8 @@ function planFor(ions: readonly ModelIon[]): PairPlan {
   for (const ion of ions) cacheKey += ion.formula + "|" + ion.charge + ";";
   let plan = planCache.get(cacheKey);
   if (plan) return plan;
-  plan = { rows: [], links: [] };
+  const rows: IonPairRow[] = [];
+  const links: PairLink[] = [];
   const keys = ions.map((i) => ionKey(i.formula, i.charge));
   for (let c = 0; c < ions.length; c++) {
     if (ions[c].charge <= 0) continue;
@@ -70,20 +93,100 @@ function planFor(ions: readonly ModelIon[]): PairPlan {
       if (ions[a].charge >= 0) continue;
       const row = ionPair(keys[c], keys[a]);
       if (row) {
-        plan.rows.push(row);
-        plan.links.push({ cation: c, anion: a });
+        rows.push(row);
+        links.push({ cation: c, anion: a });
       }
     }
   }
+  const speciesTemplate: PairPlan["speciesTemplate"] = ions.map((i) => ({
+    formula: i.formula,
+    charge: i.charge,
+  }));
+  const pairCharge = links.map((l) => ions[l.cation].charge + ions[l.anion].charge);
+  const speciesIndex = pairCharge.map((z, p) => {
+    if (z === 0) return -1;
+    speciesTemplate.push({ formula: rows[p].pair, charge: z, pair: true });
+    return speciesTemplate.length - 1;
+  });
+  plan = {
+    rows,
+    links,
+    pairCharge,
+    speciesIndex,
+    speciesTemplate,
+    temperatureC: Number.NaN,
+    log10K: [],
+    K: [],
+    systems: new Map(),
+  };
   if (planCache.size > 256) planCache.clear();
   planCache.set(cacheKey, plan);
   return plan;
+}
+
+function constantsAt(plan: PairPlan, temperatureC: number): { log10K: number[]; K: number[] } {
+  if (plan.temperatureC !== temperatureC) {
+    plan.log10K = plan.rows.map((row) => log10AssociationConstant(row, temperatureC));
+    plan.K = plan.log10K.map((x) => 10 ** x);
+    plan.temperatureC = temperatureC;
+  }
+  return plan;
+}
+
+/** The Debye–Hückel family's coefficients (models/types.ts, commonForm), cached per plan. */
+function commonFormFor(
+  plan: PairPlan,
+  model: ActivityModel,
+  input: ActivityModelInput,
+): CommonFormCoefficients | undefined {
+  if (!model.commonForm) return undefined;
+  const { constants, temperatureC, options } = input;
+  // Everything the coefficients depend on besides the species: model, T, A, B, options.
+  const key = `${model.id};${temperatureC};${constants.aLog10};${constants.bPerAngstrom};${options?.daviesCoefficient ?? ""}`;
+  if (plan.form?.key !== key) plan.form = { key, coefficients: model.commonForm(input) };
+  return plan.form.coefficients;
+}
+
+function systemFor(plan: PairPlan, totals: readonly number[]): MassBalanceSystem {
+  let presence = "";
+  for (const t of totals) presence += t > 0 ? "1" : "0";
+  let system = plan.systems.get(presence);
+  if (!system) {
+    system = massBalanceSystem(totals, plan.links);
+    if (plan.systems.size > 16) plan.systems.clear();
+    plan.systems.set(presence, system);
+  }
+  return system;
 }
 
 /** True when some tabulated pair can form among the ions present. */
 export function hasIonPairs(ions: readonly ModelIon[]): boolean {
   const plan = planFor(ions);
   return plan.links.some((l) => ions[l.cation].molality > 0 && ions[l.anion].molality > 0);
+}
+
+/**
+ * Writes the free and charged-pair molalities into the model's species list (ions first, then
+ * charged pairs at `speciesIndex`) and returns their ionic strength ½ Σ m z².
+ */
+function loadSpecies(
+  species: ModelIon[],
+  free: readonly number[],
+  pairMolality: readonly number[],
+  speciesIndex: readonly number[],
+): number {
+  let twiceI = 0;
+  for (let i = 0; i < free.length; i++) {
+    species[i].molality = free[i];
+    twiceI += free[i] * species[i].charge * species[i].charge;
+  }
+  for (let p = 0; p < pairMolality.length; p++) {
+    const k = speciesIndex[p];
+    if (k < 0) continue;
+    species[k].molality = pairMolality[p];
+    twiceI += pairMolality[p] * species[k].charge * species[k].charge;
+  }
+  return twiceI / 2;
 }
 
 export function associate(
@@ -93,102 +196,110 @@ export function associate(
 ): AssociationResult {
   const plan = planFor(ions);
   const n = ions.length;
+  const np = plan.rows.length;
   let stoichiometricI = 0;
   for (const ion of ions) stoichiometricI += Math.max(ion.molality, 0) * ion.charge * ion.charge;
   stoichiometricI /= 2;
-  const np = plan.rows.length;
-  const totals = ions.map((i) => Math.max(i.molality, 0));
-  const free = Float64Array.from(totals);
-  const log10K = plan.rows.map((r) => log10AssociationConstant(r, conditions.temperatureC));
-  const K = log10K.map((x) => 10 ** x);
-  const pairCharge = plan.links.map((l) => ions[l.cation].charge + ions[l.anion].charge);
-  const kPrime = new Float64Array(np);
-  const pairMolality = new Float64Array(np);
-  // Species passed to the model: every ion, then the charged pairs.
-  const charged = plan.links.flatMap((_, p) => (pairCharge[p] !== 0 ? [p] : []));
-  const species: ModelIon[] = [
-    ...ions.map((i) => ({ ...i })),
-    ...charged.map((p) => ({
-      formula: plan.rows[p].pair,
-      charge: pairCharge[p],
-      molality: 0,
-      pair: true,
-    })),
-  ];
-  let I = Number.NaN;
-  let output: ActivityModelOutput | null = null;
-  let lnGamma: number[] = [];
+  const totals: number[] = [];
+  for (let i = 0; i < n; i++) totals.push(Math.max(ions[i].molality, 0));
+  const free = totals.slice();
+  const { pairCharge, speciesIndex } = plan;
+  const { log10K, K } = constantsAt(plan, conditions.temperatureC);
+  // One object shape for every species (the loops below read and write them each step).
+  const species: ModelIon[] = plan.speciesTemplate.map((t) => ({
+    formula: t.formula,
+    charge: t.charge,
+    molality: 0,
+    pair: t.pair === true,
+  }));
+  const ns = species.length;
+  const kPrime = new Array<number>(np).fill(0);
+  const pairMolality = new Array<number>(np).fill(0);
+  const system = systemFor(plan, totals);
+  // The Debye–Hückel family gives its coefficients once; any other model is called each step.
+  const input: ActivityModelInput = {
+    ions: species,
+    ionicStrengthMolal: 0,
+    temperatureC: conditions.temperatureC,
+    solvent: conditions.solvent,
+    constants: conditions.constants,
+    options: conditions.options,
+  };
+  const form = commonFormFor(plan, model, input);
+  const formLnGamma = new Array<number>(ns).fill(0);
+  // Fixed point in I: γ(I) → K′ → mass balance → true I; secant steps on g(I) − I once two
+  // points are known (plain substitution takes about twice as many model evaluations).
+  let I = loadSpecies(species, free, pairMolality, speciesIndex);
+  let previousI = Number.NaN;
+  let previousResidual = Number.NaN;
   let iterations = 0;
-  let failed = false;
+  let converged = false;
   for (; iterations < MAX_ITERATIONS; iterations++) {
-    let nextI = 0;
-    for (let i = 0; i < n; i++) {
-      species[i].molality = free[i];
-      nextI += free[i] * ions[i].charge * ions[i].charge;
-    }
-    charged.forEach((p, k) => {
-      species[n + k].molality = pairMolality[p];
-      nextI += pairMolality[p] * pairCharge[p] * pairCharge[p];
-    });
-    nextI /= 2;
-    if (Math.abs(nextI - I) <= I_TOLERANCE * Math.max(nextI, 1e-12) && output) break;
-    I = nextI;
-    output = model.compute({
-      ...conditions,
-      ions: species,
-      ionicStrengthMolal: I,
-      rangeIonicStrengthMolal: stoichiometricI,
-    });
-    lnGamma = output.lnGamma;
+    const lnGamma = form
+      ? commonFormLnGamma(conditions.constants.aLog10, species, form, I, formLnGamma)
+      : model.compute({ ...input, ionicStrengthMolal: I }).lnGamma;
     for (let p = 0; p < np; p++) {
       const { cation, anion } = plan.links[p];
-      const k = charged.indexOf(p);
-      const lnGammaPair = k >= 0 ? lnGamma[n + k] : 0;
+      const lnGammaPair = speciesIndex[p] >= 0 ? lnGamma[speciesIndex[p]] : 0;
       kPrime[p] = K[p] * Math.exp(lnGamma[cation] + lnGamma[anion] - lnGammaPair);
     }
-    if (!solveMassBalance(totals, free, plan.links, kPrime)) {
-      failed = true;
-      break;
-    }
+    if (iterations === 0) initialFreeEstimate(system, totals, free, kPrime);
+    if (!solveMassBalance(system, totals, free, kPrime)) break;
     for (let p = 0; p < np; p++) {
       const { cation, anion } = plan.links[p];
       pairMolality[p] = kPrime[p] * free[cation] * free[anion];
     }
+    const trueI = loadSpecies(species, free, pairMolality, speciesIndex);
+    const residual = trueI - I;
+    if (Math.abs(residual) <= I_TOLERANCE * Math.max(trueI, 1e-12)) {
+      converged = true;
+      break;
+    }
+    let nextI = trueI;
+    if (Number.isFinite(previousResidual) && residual !== previousResidual) {
+      const secant = I - (residual * (I - previousI)) / (residual - previousResidual);
+      if (secant > 0 && Number.isFinite(secant)) nextI = secant;
+    }
+    previousI = I;
+    previousResidual = residual;
+    I = nextI;
   }
-  if (failed || !output || iterations >= MAX_ITERATIONS || !Number.isFinite(I)) {
+  if (!converged || !Number.isFinite(I)) {
     throw new ChemInputError(
       "The ion-pair speciation did not converge for this composition; switch ion association off or check the amounts.",
       { field: "components", code: "speciation_failed" },
     );
   }
-  const freeLnGamma = Array.from({ length: n }, (_, i) => lnGamma[i]);
+  // The model once more at the converged composition: its γ, φ, range and notes.
+  input.ionicStrengthMolal = I;
+  input.rangeIonicStrengthMolal = stoichiometricI;
+  const output = model.compute(input);
+  const lnGamma = output.lnGamma;
+  const freeLnGamma = lnGamma.slice(0, n);
   const lnGammaStoichiometric = freeLnGamma.map((lg, i) =>
     totals[i] > 0 && free[i] > 0 ? lg + Math.log(free[i] / totals[i]) : lg,
   );
-  const pairs: PairSpecies[] = plan.rows.map((row, p) => {
-    const k = charged.indexOf(p);
-    return {
-      formula: row.pair,
-      charge: pairCharge[p],
-      molality: pairMolality[p],
-      lnGamma: k >= 0 ? lnGamma[n + k] : 0,
-      log10K: log10K[p],
-      source: row.source,
-      cation: plan.links[p].cation,
-      anion: plan.links[p].anion,
-    };
-  });
+  const pairs: PairSpecies[] = plan.rows.map((row, p) => ({
+    formula: row.pair,
+    charge: pairCharge[p],
+    molality: pairMolality[p],
+    lnGamma: speciesIndex[p] >= 0 ? lnGamma[speciesIndex[p]] : 0,
+    log10K: log10K[p],
+    source: row.source,
+    cation: plan.links[p].cation,
+    anion: plan.links[p].anion,
+  }));
   // φ of the model covers the charged species passed to it; neutral pairs count as ideal.
   let chargedSum = 0;
   for (const s of species) chargedSum += s.molality;
   let neutralSum = 0;
-  for (const pair of pairs) if (pair.charge === 0) neutralSum += pair.molality;
   let stoichSum = 0;
-  for (const t of totals) stoichSum += t;
+  for (let p = 0; p < np; p++) if (speciesIndex[p] < 0) neutralSum += pairMolality[p];
+  for (let i = 0; i < n; i++) stoichSum += totals[i];
   const phiTrue = output.osmoticCoefficient ?? 1;
   const osmoticCoefficient = stoichSum > 0 ? (chargedSum * phiTrue + neutralSum) / stoichSum : 1;
   return {
-    freeMolality: Array.from(free),
+    freeMolality: free,
     freeLnGamma,
     lnGammaStoichiometric,
     pairs,
@@ -208,9 +319,10 @@ export function pairedFractionEstimate(
   temperatureC: number,
 ): { fraction: number; pair: string } {
   const plan = planFor(ions);
+  const { K: constants } = constantsAt(plan, temperatureC);
   let best = { fraction: 0, pair: "" };
   plan.links.forEach((l, p) => {
-    const K = 10 ** log10AssociationConstant(plan.rows[p], temperatureC);
+    const K = constants[p];
     const mc = Math.max(ions[l.cation].molality, 0);
     const ma = Math.max(ions[l.anion].molality, 0);
     const paired = K * mc * ma;

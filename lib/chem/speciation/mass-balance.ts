@@ -1,8 +1,14 @@
 /**
  * Free-ion molalities from totals at fixed conditional constants K′ = K γM γL / γML:
  *   T_i = m_i + Σ_{pairs p ∋ i} K′_p m_M m_L
- * solved by Newton's method in x_i = ln m_i (each pair joins exactly two ions), with the step
- * limited to one unit of ln m so that strong pairs (log K ≈ 3–6) converge from the totals.
+ * solved by Newton's method in x_i = ln m_i, with the step limited to one unit of ln m so that
+ * strong pairs (log K ≈ 3–6) converge from the totals.
+ *
+ * Each pair joins one cation and one anion, so the Jacobian J (J_ii = m_i + Σ_{p∋i} m_p,
+ * J_ij = m_p of the pair of i and j) has a diagonal cation block and a diagonal anion block.
+ * Only ions that can pair are unknowns (the others stay at their totals); the larger side is
+ * eliminated and the dense system solved on the smaller side only (Schur complement):
+ *   (D_S − C_LSᵀ D_L⁻¹ C_LS) dx_S = r_S − C_LSᵀ D_L⁻¹ r_L,   dx_L = D_L⁻¹ (r_L − C_LS dx_S).
  */
 export interface PairLink {
   /** Index of the cation and of the anion in the ion list. */
@@ -12,6 +18,68 @@ export interface PairLink {
 
 const MAX_NEWTON_STEPS = 60;
 const TOLERANCE = 1e-13;
+/** Newton step in ln m below which the solve stops: the error after it is of order its square. */
+const STEP_TOLERANCE = 1e-6;
+
+/**
+ * The unknowns for a pattern of ions present and the buffers Newton's method reuses (the
+ * caller may keep it for later compositions with the same ions present).
+ */
+export interface MassBalanceSystem {
+  /** The pairs that can form (both ions present), and their index in the caller's list. */
+  links: readonly PairLink[];
+  linkIndex: number[];
+  /** Ion indices on the side solved densely (S) and on the side eliminated (L). */
+  small: number[];
+  large: number[];
+  /** Position of each ion in `small` or `large` (−1 when it does not pair). */
+  position: number[];
+  /** True when the cations are the side solved densely. */
+  cationsSmall: boolean;
+  diagonal: Float64Array;
+  residual: Float64Array;
+  coupling: Float64Array;
+  matrix: Float64Array;
+  rhs: Float64Array;
+}
+
+/** Sets up the unknowns: ions present in some pair whose partner is present too. */
+export function massBalanceSystem(
+  totals: readonly number[],
+  links: readonly PairLink[],
+): MassBalanceSystem {
+  const n = totals.length;
+  const active = new Array<boolean>(n).fill(false);
+  const linkIndex = links.flatMap((l, p) =>
+    totals[l.cation] > 0 && totals[l.anion] > 0 ? [p] : [],
+  );
+  const activeLinks = linkIndex.map((p) => links[p]);
+  for (const l of activeLinks) active[l.cation] = active[l.anion] = true;
+  const cations: number[] = [];
+  const anions: number[] = [];
+  const isCation = new Array<boolean>(n).fill(false);
+  for (const l of activeLinks) isCation[l.cation] = true;
+  for (let i = 0; i < n; i++) if (active[i]) (isCation[i] ? cations : anions).push(i);
+  const cationsSmall = cations.length <= anions.length;
+  const small = cationsSmall ? cations : anions;
+  const large = cationsSmall ? anions : cations;
+  const position = new Array<number>(n).fill(-1);
+  small.forEach((i, k) => (position[i] = k));
+  large.forEach((i, k) => (position[i] = k));
+  return {
+    links: activeLinks,
+    linkIndex,
+    small,
+    large,
+    position,
+    cationsSmall,
+    diagonal: new Float64Array(n),
+    residual: new Float64Array(n),
+    coupling: new Float64Array(large.length * small.length),
+    matrix: new Float64Array(small.length * small.length),
+    rhs: new Float64Array(small.length),
+  };
+}
 
 /** Solves A x = b in place by Gaussian elimination with partial pivoting (A is n×n, row-major). */
 function solveLinear(A: Float64Array, b: Float64Array, n: number): boolean {
@@ -51,44 +119,92 @@ function solveLinear(A: Float64Array, b: Float64Array, n: number): boolean {
  * Returns false when Newton's method does not converge.
  */
 export function solveMassBalance(
-  totals: ArrayLike<number>,
-  free: Float64Array,
-  links: readonly PairLink[],
+  system: MassBalanceSystem,
+  totals: readonly number[],
+  free: number[],
   kPrime: ArrayLike<number>,
 ): boolean {
-  const n = totals.length;
-  const A = new Float64Array(n * n);
-  const f = new Float64Array(n);
+  const { links, linkIndex, small, large, position, cationsSmall } = system;
+  const { diagonal: D, residual: r } = system;
+  const { coupling: C, matrix: M, rhs } = system;
+  const nS = small.length;
+  const nL = large.length;
+  for (let i = 0; i < totals.length; i++) if (position[i] < 0) free[i] = totals[i];
   for (let step = 0; step < MAX_NEWTON_STEPS; step++) {
-    A.fill(0);
-    for (let i = 0; i < n; i++) {
-      f[i] = free[i] - totals[i];
-      // An ion that is absent has no unknown: a unit row keeps the system regular.
-      A[i * n + i] = totals[i] > 0 ? free[i] : 1;
-    }
+    // Residual f_i = m_i + Σ m_p − T_i and the Jacobian's diagonal and coupling blocks.
+    for (const i of small) ((D[i] = free[i]), (r[i] = free[i] - totals[i]));
+    for (const i of large) ((D[i] = free[i]), (r[i] = free[i] - totals[i]));
+    C.fill(0);
     for (let p = 0; p < links.length; p++) {
       const { cation: c, anion: a } = links[p];
-      const mp = kPrime[p] * free[c] * free[a];
-      f[c] += mp;
-      f[a] += mp;
-      A[c * n + c] += mp;
-      A[a * n + a] += mp;
-      A[c * n + a] += mp;
-      A[a * n + c] += mp;
+      const mp = kPrime[linkIndex[p]] * free[c] * free[a];
+      D[c] += mp;
+      D[a] += mp;
+      r[c] += mp;
+      r[a] += mp;
+      const s = cationsSmall ? c : a;
+      const l = cationsSmall ? a : c;
+      C[position[l] * nS + position[s]] += mp;
     }
     let worst = 0;
-    for (let i = 0; i < n; i++) {
-      const scale = totals[i] > 0 ? totals[i] : 1;
-      worst = Math.max(worst, Math.abs(f[i]) / scale);
-      f[i] = -f[i];
-    }
+    for (const i of small) worst = Math.max(worst, Math.abs(r[i]) / totals[i]);
+    for (const i of large) worst = Math.max(worst, Math.abs(r[i]) / totals[i]);
     if (worst < TOLERANCE) return true;
-    if (!solveLinear(A, f, n)) return false;
-    for (let i = 0; i < n; i++) {
-      if (!(totals[i] > 0)) continue;
-      const dx = Math.max(-1, Math.min(1, f[i]));
-      free[i] *= Math.exp(dx);
+    // Schur complement on the small side (right-hand side −f).
+    for (let s = 0; s < nS; s++) {
+      rhs[s] = -r[small[s]];
+      for (let t = 0; t < nS; t++) M[s * nS + t] = s === t ? D[small[s]] : 0;
     }
+    for (let l = 0; l < nL; l++) {
+      const inv = 1 / D[large[l]];
+      const rl = -r[large[l]];
+      for (let s = 0; s < nS; s++) {
+        const cls = C[l * nS + s];
+        if (cls === 0) continue;
+        rhs[s] -= cls * inv * rl;
+        for (let t = 0; t < nS; t++) M[s * nS + t] -= cls * inv * C[l * nS + t];
+      }
+    }
+    if (!solveLinear(M, rhs, nS)) return false;
+    let largestStep = 0;
+    for (let s = 0; s < nS; s++) {
+      const dx = Math.max(-1, Math.min(1, rhs[s]));
+      if (!Number.isFinite(dx)) return false;
+      free[small[s]] *= Math.exp(dx);
+      largestStep = Math.max(largestStep, Math.abs(dx));
+    }
+    for (let l = 0; l < nL; l++) {
+      let v = -r[large[l]];
+      for (let s = 0; s < nS; s++) v -= C[l * nS + s] * rhs[s];
+      const dx = Math.max(-1, Math.min(1, v / D[large[l]]));
+      if (!Number.isFinite(dx)) return false;
+      free[large[l]] *= Math.exp(dx);
+      largestStep = Math.max(largestStep, Math.abs(dx));
+    }
+    // Newton converges quadratically: after a step this small the residual is below TOLERANCE.
+    if (largestStep < STEP_TOLERANCE) return true;
   }
   return false;
+}
+
+/**
+ * A starting point for the first solve: each ion as if its partners were not depleted,
+ *   m_i ≈ T_i / (1 + Σ_{p∋i} K′_p T_partner),
+ * which is close when one side is in excess and saves Newton steps from the totals.
+ */
+export function initialFreeEstimate(
+  system: MassBalanceSystem,
+  totals: readonly number[],
+  free: number[],
+  kPrime: ArrayLike<number>,
+): void {
+  const { links, linkIndex, diagonal: D } = system;
+  for (let i = 0; i < totals.length; i++) D[i] = 1;
+  for (let p = 0; p < links.length; p++) {
+    const { cation: c, anion: a } = links[p];
+    const k = kPrime[linkIndex[p]];
+    D[c] += k * totals[a];
+    D[a] += k * totals[c];
+  }
+  for (let i = 0; i < totals.length; i++) free[i] = totals[i] / D[i];
 }

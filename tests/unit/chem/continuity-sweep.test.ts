@@ -8,45 +8,22 @@
  * 3 mol/kg near 100 °C by 0.5 % per 0.5 K, so the temperature step is 0.25 K).
  */
 import { describe, expect, it } from "vitest";
-import { computeSolution } from "@/lib/chem";
-
-const SALTS = ["NaCl", "CaCl2", "MgSO4", "Cu(NO3)2", "LiPF6", "K3Fe(CN)6", "HCl"];
-
-function point(formula: string, molality: number, temperatureC: number) {
-  const r = computeSolution({
-    temperatureC,
-    model: "auto",
-    components: [{ formula, amount: molality, unit: "mol/kg" }],
-  });
-  return { gamma: r.salts[0].meanGamma, used: r.model.used, said: Boolean(r.modelChange) };
-}
-
-function sweep(values: number[], at: (v: number) => ReturnType<typeof point>) {
-  let silent = 0;
-  let said = 0;
-  let prev = at(values[0]);
-  for (const v of values.slice(1)) {
-    const cur = at(v);
-    const step = Math.abs(cur.gamma / prev.gamma - 1);
-    if (step >= 0.005 || cur.used !== prev.used) {
-      if (cur.said || prev.said) said++;
-      else silent++;
-    }
-    prev = cur;
-  }
-  return { points: values.length, silent, said };
-}
-
-const molalities: number[] = [];
-for (let m = 0.001; m <= 6; m *= m < 1 ? 1.005 : m < 3 ? 1.002 : 1.001) molalities.push(m);
-const temperatures = Array.from({ length: 401 }, (_, i) => i * 0.25);
+import {
+  SWEEP_MOLALITIES as molalities,
+  SWEEP_MOLALITY_TEMPERATURES_C,
+  SWEEP_SALTS as SALTS,
+  SWEEP_TEMPERATURE_MOLALITIES,
+  SWEEP_TEMPERATURES_C as temperatures,
+  sweep,
+  sweepPoint as point,
+} from "./continuity-grid";
 
 describe("continuity of auto over molality and temperature", () => {
   it("over molality 0.001–6 mol/kg at 0, 25 and 60 °C: every jump or model change is said", () => {
     let points = 0;
     let said = 0;
     for (const salt of SALTS)
-      for (const T of [0, 25, 60]) {
+      for (const T of SWEEP_MOLALITY_TEMPERATURES_C) {
         const s = sweep(molalities, (m) => point(salt, m, T));
         expect(s.silent, `${salt} at ${T} °C`).toBe(0);
         points += s.points;
@@ -61,7 +38,7 @@ describe("continuity of auto over molality and temperature", () => {
     let points = 0;
     let said = 0;
     for (const salt of SALTS)
-      for (const m of [0.01, 0.5, 3]) {
+      for (const m of SWEEP_TEMPERATURE_MOLALITIES) {
         const s = sweep(temperatures, (T) => point(salt, m, T));
         expect(s.silent, `${salt} at ${m} mol/kg`).toBe(0);
         points += s.points;

@@ -83,6 +83,63 @@ describe("speciation is self-consistent (mass balance and the law of mass action
   });
 });
 
+describe("mass balance with many pairs: either side of the cation–anion system eliminated", () => {
+  // Self-consistency only (no outside value): totals and mass action hold for every ion and pair.
+  const CASES = [
+    {
+      name: "ten components (5 cations, 5 pairing anions, 13 pairs)",
+      pairs: 13,
+      components: [
+        { formula: "KCl", amount: 0.1, unit: "mol/L" },
+        { formula: "K3Fe(CN)6", amount: 5, unit: "mmol/L" },
+        { formula: "K4Fe(CN)6", amount: 5, unit: "mmol/L" },
+        { formula: "NaCl", amount: 20, unit: "mmol/kg" },
+        { formula: "CaCl2", amount: 1, unit: "mmol/kg" },
+        { formula: "MgSO4", amount: 1, unit: "mmol/L" },
+        { formula: "NaH2PO4", amount: 2, unit: "mM" },
+        { formula: "Na2HPO4", amount: 3, unit: "mM" },
+        { formula: "KNO3", amount: 5, unit: "mM" },
+        { formula: "HCl", amount: 100, unit: "µmol/L" },
+      ],
+    },
+    {
+      name: "one cation, three pairing anions",
+      pairs: 3,
+      components: [
+        { formula: "Na2SO4", amount: 0.05, unit: "mol/kg" },
+        { formula: "Na2HPO4", amount: 0.02, unit: "mol/kg" },
+        { formula: "Na2CO3", amount: 0.01, unit: "mol/kg" },
+      ],
+    },
+  ];
+  for (const c of CASES)
+    it(`${c.name}: totals within 1e-10, log K within 1e-8`, () => {
+      const r = computeSolution({ model: "davies", components: c.components });
+      const sp = r.speciation!;
+      expect(sp.pairs.length).toBe(c.pairs);
+      let checked = 0;
+      for (const ion of r.ions) {
+        const free = sp.free.find((f) => f.formula === ion.formula)!.molality;
+        const paired = sp.pairs
+          .filter((p) => p.cation === ion.formula || p.anion === ion.formula)
+          .reduce((a, p) => a + p.molality, 0);
+        expect(Math.abs(free + paired - ion.molality) / ion.molality, ion.formula).toBeLessThan(
+          1e-10,
+        );
+        checked++;
+      }
+      const a = (f: string) => sp.free.find((x) => x.formula === f)!.activity;
+      for (const p of sp.pairs) {
+        expect(Math.log10(p.activity / (a(p.cation) * a(p.anion))), p.formula).toBeCloseTo(
+          p.log10K,
+          8,
+        );
+        checked++;
+      }
+      expect(checked).toBe(r.ions.length + c.pairs);
+    });
+});
+
 describe("2:2 sulfates: stoichiometric γ± at 0.001–0.1 mol/kg", () => {
   const SALTS = ["MgSO4", "CuSO4", "ZnSO4", "CdSO4", "NiSO4"];
   const MOLALITIES = [0.001, 0.005, 0.01, 0.05, 0.1];
