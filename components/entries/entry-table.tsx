@@ -2,7 +2,7 @@
 import Link from "next/link";
 import { useQuery } from "@tanstack/react-query";
 import { useMemo, useState } from "react";
-import { apiFetch } from "@/lib/ui-api";
+import { apiFetch } from "@/lib/ui/api-client";
 import { StatusChip } from "./status-chip";
 
 export interface EntryRow {
@@ -164,7 +164,7 @@ export function EntryTable({ projects }: { projects: { id: string; name: string 
             {error ? (
               <tr>
                 <td colSpan={6} role="alert" className="px-4 py-6 text-red-700">
-                  {(error as Error).message}
+                  {error.message}
                 </td>
               </tr>
             ) : null}

@@ -3,7 +3,7 @@ import { useActionState } from "react";
 import { Field } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
 import { SubmitButton } from "@/components/ui/submit-button";
-import { initialActionState, type ActionState } from "@/lib/http/action-state";
+import { initialActionState, type ActionState } from "@/lib/contract/action-state";
 
 export function InviteForm({
   action,

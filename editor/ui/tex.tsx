@@ -1,11 +1,10 @@
 "use client";
 
-import katex from "katex";
-import { useMemo } from "react";
+import { BlockMath, InlineMath } from "react-katex";
 
 /**
- * TeX rendered with KaTeX. `trust: false` and `throwOnError: false`: a typo shows in red in
- * place instead of breaking the block, and no TeX command can emit links or HTML.
+ * TeX rendered by KaTeX through react-katex. KaTeX's defaults keep `trust` off, so no TeX
+ * command can emit links or HTML; a typo shows in red in place instead of breaking the block.
  */
 export function Tex({
   tex,
@@ -16,17 +15,21 @@ export function Tex({
   display?: boolean;
   className?: string;
 }) {
-  const html = useMemo(
-    () =>
-      katex.renderToString(tex, {
-        displayMode: display,
-        throwOnError: false,
-        trust: false,
-        strict: "ignore",
-        output: "htmlAndMathml",
-      }),
-    [tex, display],
+  const renderError = (error: Error) => (
+    <span className="font-mono text-xs text-red-700" title={error.message}>
+      {tex}
+    </span>
   );
-  const Tag = display ? "div" : "span";
-  return <Tag className={className} dangerouslySetInnerHTML={{ __html: html }} />;
+  if (display) {
+    return (
+      <div className={className}>
+        <BlockMath math={tex} renderError={renderError} />
+      </div>
+    );
+  }
+  return (
+    <span className={className}>
+      <InlineMath math={tex} renderError={renderError} />
+    </span>
+  );
 }

@@ -5,9 +5,9 @@ import type { Role } from "@/db/schema/enums";
 import { auth } from "@/lib/auth";
 import { AppError } from "@/lib/errors";
 import { getDb } from "@/lib/server/database";
-import type { Actor } from "./authorize";
+import type { Actor } from "@/lib/rules/authorize";
 
-export { assertCan, type Actor } from "./authorize";
+export { assertCan, type Actor } from "@/lib/rules/authorize";
 
 /** Resolves a session user id to an Actor; null when the member is unknown or deactivated. */
 export async function actorForUserId(userId: string): Promise<Actor | null> {

@@ -2,7 +2,7 @@ import "server-only";
 import { eq } from "drizzle-orm";
 import { users } from "@/db/schema";
 import type { Role } from "@/db/schema/enums";
-import type { Actor } from "@/lib/access/authorize";
+import type { Actor } from "@/lib/rules/authorize";
 import { defaultCellBlockInput, defaultSolutionBlockInput } from "@/lib/document/block-defaults";
 import type { SolutionBlockInput } from "@/lib/document/block-schemas";
 import { createEntry, submitEntry } from "@/lib/notebook/entries";

@@ -10,7 +10,7 @@ import {
 } from "@/db/queries/users";
 import { listOpenInvitations } from "@/db/queries/invitations";
 import type { Role } from "@/db/schema/enums";
-import { assertCan, type Actor } from "@/lib/access/authorize";
+import { assertCan, type Actor } from "@/lib/rules/authorize";
 import { AppError } from "@/lib/errors";
 import { getDb } from "@/lib/server/database";
 import { changeRoleSchema, memberIdSchema } from "@/lib/validation/auth";

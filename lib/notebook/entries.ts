@@ -10,7 +10,7 @@ import {
 } from "@/db/queries/entries";
 import { findLabProject } from "@/db/queries/projects";
 import type { EntryStatus } from "@/db/schema/enums";
-import { assertCan, type Actor } from "@/lib/access/authorize";
+import { assertCan, type Actor } from "@/lib/rules/authorize";
 import { findTemplate } from "@/lib/document/templates";
 import { AppError } from "@/lib/errors";
 import { getDb } from "@/lib/server/database";

@@ -1,7 +1,7 @@
 import "server-only";
 import { findLabEntry, findRevision, listRevisions } from "@/db/queries/entries";
 import { listComponentsOf, listRevisionSolutions } from "@/db/queries/solutions";
-import { assertCan, type Actor } from "@/lib/access/authorize";
+import { assertCan, type Actor } from "@/lib/rules/authorize";
 import { AppError } from "@/lib/errors";
 import { getDb } from "@/lib/server/database";
 import { parseRecordId } from "@/lib/validation/parse";

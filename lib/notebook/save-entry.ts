@@ -1,7 +1,7 @@
 import "server-only";
 import { insertAuditEvent } from "@/db/queries/audit";
 import { findLabEntry, findRevision } from "@/db/queries/entries";
-import { assertCan, type Actor } from "@/lib/access/authorize";
+import { assertCan, type Actor } from "@/lib/rules/authorize";
 import { prepareRevision } from "@/lib/document/prepare-revision";
 import { AppError } from "@/lib/errors";
 import { getDb } from "@/lib/server/database";
