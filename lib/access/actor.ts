@@ -1,7 +1,6 @@
 import "server-only";
 import { cache } from "react";
 import { findUserById } from "@/db/queries/users";
-import type { Role } from "@/db/schema/enums";
 import { auth } from "@/lib/auth";
 import { AppError } from "@/lib/errors";
 import { getDb } from "@/lib/server/database";
@@ -16,7 +15,7 @@ export async function actorForUserId(userId: string): Promise<Actor | null> {
   return {
     userId: user.id,
     labId: user.labId,
-    role: user.role as Role,
+    role: user.role,
     name: user.name,
     email: user.email,
   };

@@ -1,7 +1,6 @@
 import "server-only";
 import { eq } from "drizzle-orm";
 import { users } from "@/db/schema";
-import type { Role } from "@/db/schema/enums";
 import type { Actor } from "@/lib/rules/authorize";
 import { defaultCellBlockInput, defaultSolutionBlockInput } from "@/lib/document/block-defaults";
 import type { SolutionBlockInput } from "@/lib/document/block-schemas";
@@ -29,7 +28,7 @@ async function actorsOf(labId: string): Promise<Record<string, Actor>> {
   return Object.fromEntries(
     rows.map((u) => [
       u.email,
-      { userId: u.id, labId: u.labId, role: u.role as Role, name: u.name, email: u.email },
+      { userId: u.id, labId: u.labId, role: u.role, name: u.name, email: u.email },
     ]),
   );
 }

@@ -1,16 +1,7 @@
 import "server-only";
 import { requireActor, type Actor } from "@/lib/access/actor";
+import type { ApiErrorBody } from "@/lib/contract/api-error";
 import { AppError, isAppError } from "@/lib/errors";
-
-/** The JSON body of every API error: a code a client can switch on and a message a person can read. */
-interface ApiErrorBody {
-  error: {
-    code: string;
-    message: string;
-    fieldErrors?: Record<string, string[]>;
-    details?: Record<string, unknown>;
-  };
-}
 
 function errorResponse(error: AppError): Response {
   const body: ApiErrorBody = {

@@ -82,7 +82,7 @@ export async function inspectInvitation(token: string): Promise<InvitationState>
   if (invitation.acceptedAt) return { kind: "used" };
   if (invitation.revokedAt) return { kind: "revoked" };
   if (invitation.expiresAt.getTime() <= Date.now()) return { kind: "expired" };
-  return { kind: "open", email: invitation.email, role: invitation.role as Role, labName };
+  return { kind: "open", email: invitation.email, role: invitation.role, labName };
 }
 
 const STATE_MESSAGES = {

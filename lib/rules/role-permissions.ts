@@ -5,6 +5,7 @@ import type { Role } from "@/db/schema/enums";
  * it too, but only to hide what would be refused anyway.
  */
 const PERMISSIONS = {
+  "lab.read": ["researcher", "supervisor", "admin"],
   "entry.read": ["researcher", "supervisor", "admin"],
   "entry.write": ["researcher", "supervisor", "admin"],
   "entry.countersign": ["supervisor"],
