@@ -9,10 +9,13 @@ import { BlockMath, InlineMath } from "react-katex";
 export function Tex({
   tex,
   display = false,
+  wrap = false,
   className,
 }: {
   tex: string;
   display?: boolean;
+  /** A block that breaks at its + and = signs when it is wider than its box. */
+  wrap?: boolean;
   className?: string;
 }) {
   const renderError = (error: Error) => (
@@ -20,6 +23,13 @@ export function Tex({
       {tex}
     </span>
   );
+  if (wrap) {
+    return (
+      <div className={`leading-loose ${className ?? ""}`}>
+        <InlineMath math={`\\displaystyle ${tex}`} renderError={renderError} />
+      </div>
+    );
+  }
   if (display) {
     return (
       <div className={className}>

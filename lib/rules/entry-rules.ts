@@ -141,11 +141,6 @@ export function entryActions(
   ) as Record<EntryAction, EntryDecision>;
 }
 
-/** The allowed actions only, e.g. for a DTO the client renders buttons from. */
-export function allowedEntryActions(member: MemberFacts, entry: EntryFacts): EntryAction[] {
-  return ENTRY_ACTIONS.filter((action) => decideEntryAction(member, entry, action).allowed);
-}
-
 /** Throws the decision's typed error (404, 403 or 409) when the action is not allowed. */
 export function assertEntryAllows(
   member: MemberFacts,

@@ -7,8 +7,9 @@ import { Fragment, type ReactNode } from "react";
  */
 export function ChemFormula({ formula, className }: { formula: string; className?: string }) {
   return (
-    <span className={className} aria-label={formula}>
+    <span className={className}>
       <span aria-hidden>{renderFormula(formula)}</span>
+      <span className="sr-only">{formula}</span>
     </span>
   );
 }

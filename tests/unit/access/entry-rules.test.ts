@@ -101,7 +101,7 @@ const cases = Object.entries(TABLE).flatMap(([status, byKind]) =>
   Object.entries(byKind).flatMap(([kind, expected]) =>
     [false, true].map((archived) => ({
       status: status as EntryStatus,
-      kind: kind as Kind,
+      kind: kind,
       archived,
       allowed: [...(archived ? expected.archived : expected.live)].map((c) => CODES[c]),
     })),
