@@ -7,6 +7,8 @@ import type { Actor } from "@/lib/access/actor";
 import { computeSolution } from "@/lib/chem";
 import { defaultSolutionBlockInput } from "@/lib/document/block-defaults";
 import { canonicalHash } from "@/lib/document/canonical-hash";
+import { extractSolutionBlocks } from "@/lib/document/extract-blocks";
+import { findTemplate } from "@/lib/document/templates";
 import { AppError } from "@/lib/errors";
 import { createEntry, listEntries, setEntryArchived, submitEntry } from "@/lib/notebook/entries";
 import { getCurrentContent, getRevisionHistory } from "@/lib/notebook/revisions";
@@ -227,6 +229,8 @@ describe("entries, revisions and server-computed solutions", () => {
     const current = await getCurrentContent(researcher, id);
     expect(current.number).toBe(1);
     const rows = await getDb().select().from(solutions).where(eq(solutions.entryId, id));
+    const template = findTemplate("cell-preparation")!;
+    expect(rows).toHaveLength(extractSolutionBlocks(template.build()).length);
     expect(rows.length).toBeGreaterThanOrEqual(1);
   });
 
