@@ -6,8 +6,8 @@ import { z } from "zod";
  *
  * The limits here are about shape and size, not chemistry: a negative amount or a
  * temperature outside a solvent's range must still save, so the block can show the
- * engine's message in place while the rest of the entry keeps saving (DESIGN.md, "Bad
- * input"). Only values no chemist could mean (non-finite numbers, 10 MB strings, a
+ * engine's message in place while the rest of the entry keeps saving (bad input is a
+ * typed error, docs/architecture.md, "The computation contract"). Only values no chemist could mean (non-finite numbers, 10 MB strings, a
  * thousand rows) are refused here.
  */
 
