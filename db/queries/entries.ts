@@ -131,6 +131,8 @@ export async function listRevisions(db: Executor, entryId: string) {
       title: revisions.title,
       content: revisions.content,
       contentHash: revisions.contentHash,
+      amendsRevisionNumber: revisions.amendsRevisionNumber,
+      amendmentReason: revisions.amendmentReason,
       createdAt: revisions.createdAt,
       authorName: users.name,
     })

@@ -8,6 +8,8 @@ import { NumberField } from "../ui/number-field";
 import { SafetyCaution } from "../ui/safety-caution";
 import { SelectField } from "../ui/select-field";
 import { computeCellPotential } from "@/lib/document/evaluate-cell-block";
+import { evaluationFromStored } from "@/lib/document/stored-evaluation";
+import { useStoredSolution } from "../stored-results";
 
 interface CellPotentialProps {
   cell: CellBlockInput;
@@ -18,7 +20,17 @@ interface CellPotentialProps {
 
 /** Couple choice and the computed equilibrium potential, against the reference and against SHE. */
 export function CellPotential({ cell, electrolyte, editable, onChange }: CellPotentialProps) {
-  const potential = useMemo(() => computeCellPotential(cell, electrolyte), [cell, electrolyte]);
+  // A saved revision uses the activities stored with its electrolyte, not today's engine.
+  const stored = useStoredSolution(electrolyte?.blockId);
+  const potential = useMemo(
+    () =>
+      computeCellPotential(
+        cell,
+        electrolyte,
+        stored && electrolyte && !editable ? evaluationFromStored(electrolyte, stored) : undefined,
+      ),
+    [cell, electrolyte, stored, editable],
+  );
   const couples = coupleOptions();
   const needsPh = cell.referenceElectrode.type === "RHE";
   const phError =

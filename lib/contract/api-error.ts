@@ -12,6 +12,7 @@ export type ApiErrorCode =
   | "payload_too_large"
   | "unsupported_media_type"
   | "gone"
+  | "unavailable"
   | "internal";
 
 export interface ApiErrorBody {

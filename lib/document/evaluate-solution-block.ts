@@ -56,6 +56,12 @@ function toChemInput(
   return { input, rowIndex };
 }
 
+/** The engine input a block stands for, or null while it is incomplete. */
+export function chemInputOf(block: SolutionBlockInput): ChemInput | null {
+  const prepared = toChemInput(block);
+  return prepared && "input" in prepared ? prepared.input : null;
+}
+
 /** Evaluates a block: a pure function of its inputs, so callers may cache it freely. */
 export function evaluateSolutionBlock(block: SolutionBlockInput): SolutionEvaluation {
   const prepared = toChemInput(block);

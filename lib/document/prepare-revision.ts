@@ -22,7 +22,7 @@ export interface PreparedRevision {
 }
 
 /** The content hash a revision (and a signature) records: SHA-256 of canonical { title, content }. */
-function revisionHash(title: string, content: unknown): string {
+export function revisionHash(title: string, content: unknown): string {
   return canonicalHash({ title, content });
 }
 

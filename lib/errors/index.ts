@@ -17,6 +17,7 @@ const STATUS: Record<AppErrorCode, number> = {
   payload_too_large: 413,
   unsupported_media_type: 415,
   gone: 410,
+  unavailable: 503,
 };
 
 export type FieldErrors = Record<string, string[]>;

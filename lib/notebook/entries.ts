@@ -122,23 +122,6 @@ export async function setEntryArchived(
   });
 }
 
-/** draft, returned or amended → submitted: the author asks for a countersignature. */
-export async function submitEntry(actor: Actor, entryId: string): Promise<void> {
-  assertCan(actor, "entry.write");
-  await getDb().transaction(async (tx) => {
-    const entry = await loadEntryFor(tx, actor, entryId, "submit", { forUpdate: true });
-    await updateEntry(tx, actor.labId, entry.id, { status: "submitted", updatedAt: new Date() });
-    await insertAuditEvent(tx, {
-      labId: actor.labId,
-      actorId: actor.userId,
-      action: "entry.submitted",
-      targetType: "entry",
-      targetId: entryId,
-      details: { revision: entry.currentRevisionNumber },
-    });
-  });
-}
-
 export async function getEntryHeader(actor: Actor, entryId: string) {
   assertCan(actor, "entry.read");
   const found = await findEntryHeader(getDb(), actor.labId, parseRecordId(entryId, "Entry"));

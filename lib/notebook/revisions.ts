@@ -1,7 +1,11 @@
 import "server-only";
 import { loadEntryFor } from "./entry-access";
 import { findRevision, listRevisions } from "@/db/queries/entries";
+import { listEntrySignatures } from "@/db/queries/review";
 import { listRevisionSolutions } from "@/db/queries/solutions";
+import type { StoredSolution } from "@/lib/document/stored-evaluation";
+import { storedResultsOf } from "./review-view";
+import { verifyRevision } from "./verification";
 import { assertCan, type Actor } from "@/lib/rules/authorize";
 import { AppError } from "@/lib/errors";
 import { getDb } from "@/lib/server/database";
@@ -15,6 +19,9 @@ export interface RevisionDto {
   contentHash: string;
   authorName: string;
   createdAt: string;
+  /** For an amendment: the countersigned revision it amends, and why. */
+  amendsRevisionNumber: number | null;
+  amendmentReason: string | null;
 }
 
 async function entryOf(actor: Actor, entryId: string) {
@@ -45,6 +52,8 @@ function toRevisionDto({
     contentHash: r.contentHash,
     authorName,
     createdAt: r.createdAt.toISOString(),
+    amendsRevisionNumber: r.amendsRevisionNumber,
+    amendmentReason: r.amendmentReason,
   };
 }
 
@@ -63,28 +72,59 @@ function currentOf(entry: {
       contentHash: "",
       authorName: "",
       createdAt: entry.createdAt.toISOString(),
+      amendsRevisionNumber: null,
+      amendmentReason: null,
     };
   }
   return revisionOf(entry.id, entry.currentRevisionNumber);
 }
 
-export async function getRevision(
-  actor: Actor,
-  entryId: string,
-  number: number,
-): Promise<RevisionDto> {
+/** A saved revision as its page shows it: content, stored numbers, and its signatures' check. */
+export async function getRevisionPage(actor: Actor, entryId: string, number: number) {
   const entry = await entryOf(actor, entryId);
-  return revisionOf(entry.id, number);
+  const revision = await revisionOf(entry.id, number);
+  const [stored, verification] = await Promise.all([
+    storedResultsOf(getDb(), actor.labId, entry.id, number),
+    verifyRevision(actor, entry.id, number),
+  ]);
+  return { revision, storedResults: Object.fromEntries(stored), verification };
 }
 
 export async function getCurrentContent(actor: Actor, entryId: string): Promise<RevisionDto> {
   return currentOf(await entryOf(actor, entryId));
 }
 
-/** What the entry page and GET /api/entries/:id show: the header and the current content. */
+/**
+ * What the entry page and GET /api/entries/:id show: the header, the current content with the
+ * numbers stored for it, and its signatures. "Amended after countersignature" holds while a
+ * countersigned entry has newer revisions that are not signed yet.
+ */
 export async function openEntry(actor: Actor, entryId: string) {
   const header = await getEntryHeader(actor, entryId);
-  return { ...header, current: await currentOf(header.entry) };
+  const { entry } = header;
+  const current = await currentOf(entry);
+  const [stored, signatures] = await Promise.all([
+    current.number > 0
+      ? storedResultsOf(getDb(), actor.labId, entry.id, current.number)
+      : Promise.resolve(new Map()),
+    listEntrySignatures(getDb(), actor.labId, entry.id),
+  ]);
+  return {
+    ...header,
+    current,
+    storedResults: Object.fromEntries(stored) as Record<string, StoredSolution>,
+    amendedAfterCountersignature:
+      entry.signedRevisionNumber !== null &&
+      entry.currentRevisionNumber > entry.signedRevisionNumber,
+    signatures: signatures.map((sig) => ({
+      revision: sig.revisionNumber,
+      signerName: sig.signerName,
+      meaning: sig.meaning,
+      comment: sig.comment,
+      signedAt: sig.signedAt.toISOString(),
+      contentHash: sig.contentHash,
+    })),
+  };
 }
 
 export async function getRevisionHistory(actor: Actor, entryId: string) {
@@ -96,6 +136,8 @@ export async function getRevisionHistory(actor: Actor, entryId: string) {
     contentHash: r.contentHash,
     authorName: r.authorName,
     createdAt: r.createdAt.toISOString(),
+    amends: r.amendsRevisionNumber,
+    amendmentReason: r.amendmentReason,
     changes: summariseChange(rows[i + 1] ?? null, r),
   }));
 }

@@ -31,6 +31,8 @@ export interface EntryFacts {
   archived: boolean;
   /** Number of the newest revision; 0 before the first save. */
   currentRevisionNumber: number;
+  /** The newest countersigned revision, or null. */
+  signedRevisionNumber: number | null;
 }
 
 export interface MemberFacts {
@@ -93,7 +95,10 @@ const RULES: Record<EntryAction, (member: MemberFacts, entry: EntryFacts) => Ent
       ? conflict(STATE_REASONS[entry.status])
       : entry.currentRevisionNumber === 0
         ? conflict("Write something before submitting: the entry has no saved revision.")
-        : ALLOW),
+        : entry.status === "amended" &&
+            entry.currentRevisionNumber <= (entry.signedRevisionNumber ?? 0)
+          ? conflict("Change something before submitting the amendment.")
+          : ALLOW),
   archive: (member, entry) =>
     (member.userId === entry.authorId || member.role === "admin"
       ? null
@@ -162,6 +167,7 @@ export function entryFactsOf(row: {
   status: EntryStatus;
   archivedAt: Date | null;
   currentRevisionNumber: number;
+  signedRevisionNumber: number | null;
 }): EntryFacts {
   return {
     labId: row.labId,
@@ -169,5 +175,6 @@ export function entryFactsOf(row: {
     status: row.status,
     archived: row.archivedAt !== null,
     currentRevisionNumber: row.currentRevisionNumber,
+    signedRevisionNumber: row.signedRevisionNumber,
   };
 }

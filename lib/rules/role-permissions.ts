@@ -12,6 +12,7 @@ const PERMISSIONS = {
   "review.read": ["supervisor"],
   "solution.search": ["researcher", "supervisor", "admin"],
   "lab.manage": ["admin"],
+  "audit.read": ["admin"],
   "mail.read": ["admin"],
 } as const satisfies Record<string, readonly Role[]>;
 

@@ -10,7 +10,8 @@ import { canonicalHash } from "@/lib/document/canonical-hash";
 import { extractSolutionBlocks } from "@/lib/document/extract-blocks";
 import { findTemplate } from "@/lib/document/templates";
 import { AppError } from "@/lib/errors";
-import { createEntry, listEntries, setEntryArchived, submitEntry } from "@/lib/notebook/entries";
+import { createEntry, listEntries, setEntryArchived } from "@/lib/notebook/entries";
+import { submitEntry } from "@/lib/notebook/review";
 import {
   getCurrentContent,
   getRevisionHistory,

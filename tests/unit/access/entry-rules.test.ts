@@ -95,6 +95,8 @@ const entry = (status: EntryStatus, archived: boolean, revisions = 3): EntryFact
   status,
   archived,
   currentRevisionNumber: revisions,
+  // Countersigned at revision 2 for the states that come after a signature.
+  signedRevisionNumber: status === "countersigned" ? revisions : status === "amended" ? 2 : null,
 });
 
 const cases = Object.entries(TABLE).flatMap(([status, byKind]) =>
@@ -168,6 +170,16 @@ describe("entry rules: how a refusal is reported", () => {
     expect(
       decideEntryAction(MEMBERS["other supervisor"], entry("draft", false), "countersign"),
     ).toMatchObject({ allowed: false, code: "conflict" });
+  });
+
+  it("needs a change before an amendment is submitted", () => {
+    const unchanged = { ...entry("amended", false, 2), signedRevisionNumber: 2 };
+    expect(decideEntryAction(researcher, unchanged, "submit")).toMatchObject({
+      allowed: false,
+      code: "conflict",
+      reason: "Change something before submitting the amendment.",
+    });
+    expect(decideEntryAction(researcher, unchanged, "edit").allowed).toBe(true);
   });
 
   it("needs a saved revision before submitting", () => {
