@@ -130,6 +130,10 @@ function splitUnit(text: string): { stem: string; unitText: string | null } {
   const spelled = /^(.*?)(?:\s+in|,)\s+(\S+)$/.exec(text);
   if (spelled && readUnit(spelled[2])) return { stem: spelled[1], unitText: spelled[2] };
   if (bracket && bracket[1]) return { stem: bracket[1], unitText: bracket[2] };
+  // "I/furlong": a unit in the slash position that is not one we know is still the unit.
+  const slash = text.lastIndexOf("/");
+  if (slash > 0 && slash < text.length - 1)
+    return { stem: text.slice(0, slash).trim(), unitText: text.slice(slash + 1).trim() };
   return { stem: text, unitText: null };
 }
 
@@ -139,6 +143,10 @@ function splitReference(text: string): {
   reference: string | null;
   unitText: string | null;
 } {
+  // "E (V vs. Hg/HgO)": the reference inside the unit's brackets.
+  const inside = /^(.*?)\s*[([]\s*(\S+)\s+(?:vs\.?|versus)\s*(.+?)\s*[)\]]$/i.exec(text);
+  if (inside && readUnit(inside[2])?.dimension === "potential")
+    return { rest: inside[1].trim(), reference: inside[3].trim(), unitText: inside[2] };
   const vs = /^(.*?)\s*\b(?:vs\.?|versus)\s*(.+)$/i.exec(text);
   if (!vs) return { rest: text, reference: null, unitText: null };
   let reference = vs[2].trim();

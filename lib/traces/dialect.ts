@@ -1,8 +1,9 @@
 /**
- * Where the table starts and how it is written. The first line that begins a run of rows
- * whose every cell is a number is the first data row; the line above it, if it has as many
- * fields, holds the column names (and the one above that the names, when that line is a row
- * of units). Everything before is the header block.
+ * Where the table starts and how it is written. A line whose every cell is a number, followed
+ * by lines most of which (two in three) are numbers with the same field count, is inside
+ * the table. Walking up from it over lines that start with a number (data rows with a bad
+ * cell), the first line without any number holds the column names (and the one above it the
+ * names, when that line is a row of units). Everything before is the header block.
  *
  * Delimiter: each of tab, semicolon and comma is tried. A comma decimal cannot go with a
  * comma delimiter, so "0,1;2,3" is only numbers when split on ";" (two cells), and "0,5"
@@ -72,17 +73,26 @@ function numericRow(line: string, delimiter: Delimiter): number {
   return numbers > 0 ? fields.length : -1;
 }
 
-function previousNonEmpty(lines: string[], index: number): number | null {
-  for (let i = index - 1; i >= 0; i--) if (lines[i].trim() !== "") return i;
-  return null;
+/** A data row with a bad cell or a missing field still starts with a number; a header key never does. */
+function startsWithNumber(line: string, delimiter: Delimiter): boolean {
+  const first = splitLine(line, delimiter)[0];
+  return first !== undefined && looksNumeric(first, delimiter !== ",");
+}
+
+function hasNumber(line: string, delimiter: Delimiter): boolean {
+  return splitLine(line, delimiter).some((f) => looksNumeric(f, delimiter !== ","));
 }
 
 interface Candidate {
   delimiter: Delimiter;
   firstDataLine: number;
   columnCount: number;
+  namesLine: number | null;
   namesMatch: boolean;
 }
+
+/** Lines looked at after a candidate first row; at least twice as many must agree as not. */
+const LOOK_AHEAD = 8;
 
 function findCandidate(
   lines: string[],
@@ -92,23 +102,38 @@ function findCandidate(
   for (let i = 0; i < lines.length; i++) {
     const count = numericRow(lines[i], delimiter);
     if (count < 0) continue;
-    let confirmed = 0;
-    let consistent = true;
-    let j = i + 1;
-    for (; j < lines.length && confirmed < CONFIRMING_ROWS; j++) {
+    let agree = 0;
+    let disagree = 0;
+    let seen = 0;
+    for (let j = i + 1; j < lines.length && seen < LOOK_AHEAD; j++) {
       if (lines[j].trim() === "") continue;
-      if (numericRow(lines[j], delimiter) !== count) {
-        consistent = false;
-        break;
-      }
-      confirmed++;
+      seen++;
+      if (numericRow(lines[j], delimiter) === count) agree++;
+      else disagree++;
     }
-    if (!consistent) continue;
-    if (confirmed < CONFIRMING_ROWS && !final) return "need-more";
-    const names = previousNonEmpty(lines, i);
+    const endReached = seen < LOOK_AHEAD;
+    if (endReached && !final && agree < CONFIRMING_ROWS) return "need-more";
+    if (agree < 2 * disagree || (agree < CONFIRMING_ROWS && !endReached)) continue;
+    // Walk up over rows that start with a number (data rows with a bad cell) to the names.
+    let first = i;
+    let names: number | null = null;
+    for (let k = i - 1, steps = 0; k >= 0 && steps < 50; k--) {
+      if (lines[k].trim() === "") continue;
+      steps++;
+      if (startsWithNumber(lines[k], delimiter)) {
+        first = k;
+        continue;
+      }
+      if (!hasNumber(lines[k], delimiter)) names = k;
+      break;
+    }
     const namesMatch = names !== null && splitLine(lines[names], delimiter).length === count;
-    return { delimiter, firstDataLine: i, columnCount: count, namesMatch };
+    return { delimiter, firstDataLine: first, columnCount: count, namesLine: names, namesMatch };
   }
+  return null;
+}
+function previousNonEmpty(lines: string[], index: number): number | null {
+  for (let i = index - 1; i >= 0; i--) if (lines[i].trim() !== "") return i;
   return null;
 }
 
@@ -129,10 +154,11 @@ export function locateTable(lines: string[], final: boolean, only?: Delimiter): 
     if (candidate) found.push(candidate);
   }
   if (found.length === 0) return final ? { status: "none" } : { status: "need-more" };
-  // A names line with the same field count decides; then more columns; then the earlier table.
+  // Names above the data decide (with the same field count first); then more columns; then the earlier table.
   found.sort(
     (a, b) =>
       Number(b.namesMatch) - Number(a.namesMatch) ||
+      Number(b.namesLine !== null) - Number(a.namesLine !== null) ||
       b.columnCount - a.columnCount ||
       a.firstDataLine - b.firstDataLine,
   );
@@ -142,16 +168,20 @@ export function locateTable(lines: string[], final: boolean, only?: Delimiter): 
       .trim()
       .replace(/^"(.*)"$/, "$1")
       .trim();
-  let namesLine: number | null = null;
+  let namesLine = best.namesLine;
   let unitsLine: number | null = null;
-  let names = Array.from({ length: best.columnCount }, (_, k) => `column ${k + 1}`);
-  if (best.namesMatch) {
-    namesLine = previousNonEmpty(lines, best.firstDataLine);
-    names = splitLine(lines[namesLine!], best.delimiter).map(clean);
-    const above = previousNonEmpty(lines, namesLine!);
+  let columnCount = best.columnCount;
+  let names = Array.from({ length: columnCount }, (_, k) => `column ${k + 1}`);
+  if (namesLine !== null) {
+    names = splitLine(lines[namesLine], best.delimiter).map(clean);
+    // A trailing delimiter on one side only: pad or trim the empty names.
+    while (names.length > columnCount && names[names.length - 1] === "") names.pop();
+    while (names.length < columnCount) names.push("");
+    columnCount = names.length;
+    const above = previousNonEmpty(lines, namesLine);
     if (above !== null && isUnitsRow(names)) {
       const aboveFields = splitLine(lines[above], best.delimiter).map(clean);
-      if (aboveFields.length === best.columnCount) {
+      if (aboveFields.length === columnCount) {
         unitsLine = namesLine;
         namesLine = above;
         names = aboveFields.map((n, k) =>
@@ -175,7 +205,7 @@ export function locateTable(lines: string[], final: boolean, only?: Delimiter): 
       namesLine,
       unitsLine,
       firstDataLine: best.firstDataLine,
-      columnCount: best.columnCount,
+      columnCount,
       names,
       decimalCommaAllowed: best.delimiter !== ",",
       sampledCommaCells,

@@ -183,7 +183,7 @@ export function createTraceParser(options: TraceParseOptions = {}): TraceParser 
   }
 
   function tryLocate(final: boolean) {
-    if (!final && head.length < nextAttemptAt) return;
+    if (!final && head.length < nextAttemptAt && head.length <= maxHeadChars) return;
     const { lines, starts, endsWithNewline } = splitLines(head);
     // Without the last, unfinished line unless the text has ended.
     const complete = final || endsWithNewline ? lines : lines.slice(0, -1);
@@ -198,7 +198,7 @@ export function createTraceParser(options: TraceParseOptions = {}): TraceParser 
       problems.push(`A line of ${longest} characters: this does not look like a text table.`);
     problems.push(
       head.length > maxHeadChars
-        ? `No table of numbers was found in the first ${Math.round(maxHeadChars / 1048576)} MB of the file.`
+        ? `No table of numbers was found in the first ${(maxHeadChars / 1048576).toPrecision(2)} MB of the file.`
         : head.trim() === ""
           ? "The file is empty."
           : "No table of numbers was found: no run of lines whose every cell is a number.",
