@@ -78,6 +78,10 @@ export function createTraceParser(options: TraceParseOptions = {}): TraceParser 
   let reader: CellReader | null = null;
   let stores: ColumnStore[] = [];
   let factors: number[] = [];
+  let minimum = new Float64Array(0);
+  let maximum = new Float64Array(0);
+  let numeric = new Float64Array(0);
+  let nonNumeric = new Float64Array(0);
   let storedColumns = 0;
   let capacity = 0;
   let points = 0;
@@ -113,6 +117,10 @@ export function createTraceParser(options: TraceParseOptions = {}): TraceParser 
     stores = plan.columns.map(() => new ColumnStore());
     capacity = stores.length ? stores[0].values.length : 0;
     factors = plan.columns.map((c) => c.siFactor);
+    minimum = new Float64Array(stores.length).fill(Infinity);
+    maximum = new Float64Array(stores.length).fill(-Infinity);
+    numeric = new Float64Array(stores.length);
+    nonNumeric = new Float64Array(stores.length);
     reader = createCellReader(location.decimalCommaAllowed);
     const newline = detectNewline(text);
     papa = new Papa.Parser({ delimiter: location.delimiter, newline, quoteChar: '"' });
@@ -122,45 +130,51 @@ export function createTraceParser(options: TraceParseOptions = {}): TraceParser 
     feedTable(text.slice(starts[location.firstDataLine]), final);
   }
 
-  function storeRow(fields: string[]) {
-    tableLine++;
-    const count = fields.length;
-    if (count === 1 && fields[0].trim() === "") return;
+  /** One papaparse batch into the columns; locals hoisted because this runs per cell. */
+  function storeRows(rows: string[][]) {
     const r = reader!;
-    let numbers = 0;
-    if (count !== table!.columnCount) {
-      let extraFilled = false;
-      for (let k = table!.columnCount; k < count; k++)
-        if (fields[k].trim() !== "") extraFilled = true;
-      if (count < table!.columnCount || extraFilled) note(ragged, tableLine);
-    }
-    const row = points;
-    if (row >= capacity) {
-      for (const store of stores) store.ensure(row + 1);
-      capacity = stores[0].values.length;
-    }
-    for (let k = 0; k < storedColumns; k++) {
-      const store = stores[k];
-      const value = k < count ? r.read(fields[k]) : NaN;
-      if (value === value) {
-        numbers++;
-        const si = value * factors[k];
-        store.values[row] = si;
-        store.numeric++;
-        if (si < store.min) store.min = si;
-        if (si > store.max) store.max = si;
-      } else {
-        store.values[row] = NaN;
-        store.nonNumeric++;
+    const columnCount = table!.columnCount;
+    const width = storedColumns;
+    let values = stores.map((s) => s.values);
+    for (let n = 0; n < rows.length; n++) {
+      const fields = rows[n];
+      tableLine++;
+      const count = fields.length;
+      if (count === 1 && fields[0].trim() === "") continue;
+      if (count !== columnCount) {
+        let extraFilled = false;
+        for (let k = columnCount; k < count; k++) if (fields[k].trim() !== "") extraFilled = true;
+        if (count < columnCount || extraFilled) note(ragged, tableLine);
       }
+      const row = points;
+      if (row >= capacity) {
+        for (const store of stores) store.ensure(row + 1);
+        capacity = stores[0].values.length;
+        values = stores.map((s) => s.values);
+      }
+      let numbers = 0;
+      for (let k = 0; k < width; k++) {
+        const value = k < count ? r.read(fields[k]) : NaN;
+        if (value === value) {
+          numbers++;
+          const si = value * factors[k];
+          values[k][row] = si;
+          numeric[k]++;
+          if (si < minimum[k]) minimum[k] = si;
+          if (si > maximum[k]) maximum[k] = si;
+        } else {
+          values[k][row] = NaN;
+          nonNumeric[k]++;
+        }
+      }
+      if (numbers === 0) {
+        // A line of text inside the table (a repeated header, "Cycle 2"): not a data point.
+        for (let k = 0; k < width; k++) nonNumeric[k]--;
+        note(textRows, tableLine);
+        continue;
+      }
+      points++;
     }
-    if (numbers === 0) {
-      // A line of text inside the table (a repeated header, "Cycle 2"): not a data point.
-      for (let k = 0; k < storedColumns; k++) stores[k].nonNumeric -= 1;
-      note(textRows, tableLine);
-      return;
-    }
-    points++;
   }
 
   function feedTable(text: string, final: boolean) {
@@ -172,7 +186,7 @@ export function createTraceParser(options: TraceParseOptions = {}): TraceParser 
     }
     const aggregate = partial + text;
     const result = papa!.parse(aggregate, 0, !final);
-    for (const fields of result.data as string[][]) storeRow(fields);
+    storeRows(result.data as string[][]);
     partial = final ? "" : aggregate.slice(result.meta.cursor);
     if (partial.length > maxLineChars) {
       note(longLines, tableLine + 1);
@@ -249,6 +263,12 @@ export function createTraceParser(options: TraceParseOptions = {}): TraceParser 
         problems.push(
           `${longLines.count} lines longer than ${maxLineChars} characters were skipped (first at line ${longLines.firstLine}).`,
         );
+      stores.forEach((store, k) => {
+        store.min = minimum[k];
+        store.max = maximum[k];
+        store.numeric = numeric[k];
+        store.nonNumeric = nonNumeric[k];
+      });
       return buildSummary({
         table,
         plan,
