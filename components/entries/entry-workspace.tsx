@@ -1,6 +1,6 @@
 "use client";
 import type { JSONContent } from "@tiptap/core";
-import { useEffect, useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import { NotebookEditor } from "@/editor/notebook-editor";
 import { ConflictPanel } from "./conflict-panel";
 import { readLocalDraft } from "./local-draft";
@@ -24,7 +24,9 @@ export function EntryWorkspace(props: EntryWorkspaceProps) {
 
   // Once per mount: the page gives this component a key of entry id and revision, so a new
   // revision remounts it; a server refresh with the same revision must not restart the session.
+  const initial = useRef(props);
   useEffect(() => {
+    const props = initial.current;
     const draft = props.editable ? readLocalDraft(props.entryId) : null;
     if (draft && draft.baseRevision <= props.revision) {
       setStart({

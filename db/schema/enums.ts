@@ -5,7 +5,17 @@
 export const ROLES = ["researcher", "supervisor", "admin"] as const;
 export type Role = (typeof ROLES)[number];
 
-export const ENTRY_STATUSES = ["draft", "submitted", "countersigned", "returned"] as const;
+/**
+ * draft → submitted → countersigned; submitted → returned (editable) → submitted;
+ * countersigned → amended (a new revision with a reason, editable) → submitted → countersigned.
+ */
+export const ENTRY_STATUSES = [
+  "draft",
+  "submitted",
+  "countersigned",
+  "returned",
+  "amended",
+] as const;
 export type EntryStatus = (typeof ENTRY_STATUSES)[number];
 
 export const SIGNATURE_MEANINGS = ["authored", "countersigned", "witnessed"] as const;

@@ -12,7 +12,7 @@ import {
   unique,
   uuid,
 } from "drizzle-orm/pg-core";
-import { ENTRY_STATUSES, SIGNATURE_MEANINGS, sqlList } from "./enums";
+import { ENTRY_STATUSES, type EntryStatus, SIGNATURE_MEANINGS, sqlList } from "./enums";
 import { labs, users } from "./labs";
 
 const createdAt = () => timestamp("created_at", { withTimezone: true }).notNull().defaultNow();
@@ -49,7 +49,7 @@ export const entries = pgTable(
       .notNull()
       .references(() => projects.id, { onDelete: "restrict" }),
     title: text("title").notNull(),
-    status: text("status").notNull().default("draft"),
+    status: text("status").$type<EntryStatus>().notNull().default("draft"),
     authorId: uuid("author_id")
       .notNull()
       .references(() => users.id),

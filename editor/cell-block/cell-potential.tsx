@@ -52,29 +52,31 @@ export function CellPotential({ cell, electrolyte, editable, onChange }: CellPot
         ) : null}
       </div>
       {potential.status === "ok" ? (
-        <dl className="grid grid-cols-2 gap-3 sm:grid-cols-3" aria-live="polite">
-          <div className="rounded-md border border-lagoon-100 bg-lagoon-50/60 px-3 py-1.5">
-            <dt className="text-xs font-medium text-ink-soft">
-              E vs {referenceElectrodeLabel(potential.reference)}
-            </dt>
-            <dd
-              className="font-mono text-base text-lagoon-700 tabular-nums"
-              data-testid="potential-vs-reference"
-            >
-              {formatPotentialV(potential.vsReference)}{" "}
-              <span className="font-sans text-xs text-ink-soft">V</span>
-            </dd>
-          </div>
-          <div className="rounded-md border border-lagoon-100 bg-lagoon-50/60 px-3 py-1.5">
-            <dt className="text-xs font-medium text-ink-soft">E vs SHE</dt>
-            <dd
-              className="font-mono text-base text-lagoon-700 tabular-nums"
-              data-testid="potential-vs-she"
-            >
-              {formatPotentialV(potential.vsShe)}{" "}
-              <span className="font-sans text-xs text-ink-soft">V</span>
-            </dd>
-          </div>
+        <div className="grid grid-cols-2 gap-3 sm:grid-cols-3" aria-live="polite">
+          <dl className="contents">
+            <div className="rounded-md border border-lagoon-100 bg-lagoon-50/60 px-3 py-1.5">
+              <dt className="text-xs font-medium text-ink-soft">
+                E vs {referenceElectrodeLabel(potential.reference)}
+              </dt>
+              <dd
+                className="font-mono text-base text-lagoon-700 tabular-nums"
+                data-testid="potential-vs-reference"
+              >
+                {formatPotentialV(potential.vsReference)}{" "}
+                <span className="font-sans text-xs text-ink-soft">V</span>
+              </dd>
+            </div>
+            <div className="rounded-md border border-lagoon-100 bg-lagoon-50/60 px-3 py-1.5">
+              <dt className="text-xs font-medium text-ink-soft">E vs SHE</dt>
+              <dd
+                className="font-mono text-base text-lagoon-700 tabular-nums"
+                data-testid="potential-vs-she"
+              >
+                {formatPotentialV(potential.vsShe)}{" "}
+                <span className="font-sans text-xs text-ink-soft">V</span>
+              </dd>
+            </div>
+          </dl>
           <p className="col-span-2 self-center text-xs text-ink-soft sm:col-span-1">
             {potential.reaction}, E° = {formatPotentialV(potential.standardPotentialV)} V vs SHE.
             Nernst equation at {potential.temperatureC} °C with the activities computed for the
@@ -87,7 +89,7 @@ export function CellPotential({ cell, electrolyte, editable, onChange }: CellPot
               ))}
             </ul>
           ) : null}
-        </dl>
+        </div>
       ) : potential.status === "error" &&
         potential.field !== "couple" &&
         potential.field !== "pH" ? (

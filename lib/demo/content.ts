@@ -1,8 +1,7 @@
 import "server-only";
 import { eq } from "drizzle-orm";
 import { users } from "@/db/schema";
-import type { Role } from "@/db/schema/enums";
-import type { Actor } from "@/lib/access/authorize";
+import type { Actor } from "@/lib/rules/authorize";
 import { defaultCellBlockInput, defaultSolutionBlockInput } from "@/lib/document/block-defaults";
 import type { SolutionBlockInput } from "@/lib/document/block-schemas";
 import { createEntry, submitEntry } from "@/lib/notebook/entries";
@@ -29,7 +28,7 @@ async function actorsOf(labId: string): Promise<Record<string, Actor>> {
   return Object.fromEntries(
     rows.map((u) => [
       u.email,
-      { userId: u.id, labId: u.labId, role: u.role as Role, name: u.name, email: u.email },
+      { userId: u.id, labId: u.labId, role: u.role, name: u.name, email: u.email },
     ]),
   );
 }
@@ -67,11 +66,46 @@ async function saltmarsh(labId: string) {
   const tobin = a["tobin.bench@saltmarsh.example"];
   const mira = a["mira.bench@saltmarsh.example"];
 
+  const copperBath = defaultSolutionBlockInput({
+    name: "0.1 mol/kg NaCl with 1 mmol/kg CuCl₂",
+    components: [
+      { formula: "NaCl", amount: 0.1, unit: "mol/kg" },
+      { formula: "CuCl2·2H2O", amount: 0.001, unit: "mol/kg" },
+    ],
+  });
+  const copperCell = defaultCellBlockInput({
+    name: "Cu disc, three-electrode cell",
+    electrolyteBlockId: copperBath.blockId,
+    couple: "Cu2+/Cu",
+    workingElectrode: {
+      material: "copper disc (99.99 %)",
+      areaCm2: 0.196,
+      pretreatment: ["SiC 1200 then 2400 grit", "rinse in water and ethanol, dry under N₂"],
+    },
+    counterElectrode: { material: "Pt mesh", areaCm2: null, pretreatment: [] },
+    referenceElectrode: {
+      material: "saturated calomel",
+      areaCm2: null,
+      pretreatment: [],
+      type: "SCE",
+    },
+    purgeMinutes: 20,
+    instrument: "bench potentiostat A",
+    channel: "1",
+  });
   await write(
     tobin,
     "Copper corrosion in chloride media",
-    "Cu disc in 0.1 m NaCl — polarisation run 1",
-    { template: "cell-preparation" },
+    "Cu disc in 0.1 m NaCl with 1 mM CuCl₂ — polarisation run 1",
+    [
+      heading("Electrolyte"),
+      solution(copperBath),
+      heading("Cell"),
+      { type: "cellBlock", attrs: copperCell },
+      paragraph(
+        "Open-circuit potential for 30 min, then a slow linear sweep from −250 mV to +250 mV about it at 0.167 mV/s.",
+      ),
+    ],
   );
 
   const mixed = defaultSolutionBlockInput({
@@ -133,11 +167,24 @@ async function saltmarsh(labId: string) {
       "Hexacyanoferrates release hydrogen cyanide with strong acid: keep acids away from these solutions.",
     ),
   ]);
+  const filling = defaultSolutionBlockInput({
+    name: "3 mol/L KCl filling solution",
+    temperatureC: 22,
+    components: [{ formula: "KCl", amount: 22.37, unit: "g", perAmount: 100, perUnit: "mL" }],
+  });
   await write(
     mira,
     "Ferrocyanide kinetics",
     "KCl stock for the reference compartment",
-    { template: "electrolyte-stock" },
+    [
+      heading("Recipe"),
+      paragraph("22.37 g KCl (dried 2 h at 110 °C) made up to 100 mL in a class A flask at 22 °C."),
+      solution(filling),
+      heading("Use"),
+      paragraph(
+        "Fills the Ag/AgCl (3 mol/L KCl) reference electrodes of the ferrocyanide cells; replaced monthly.",
+      ),
+    ],
     true,
   );
 }

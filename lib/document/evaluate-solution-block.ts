@@ -20,7 +20,7 @@ export type SolutionEvaluation =
  * typed); `rowIndex` maps the engine's component index back to the row on screen, so its
  * message lands on the right input.
  */
-export function toChemInput(
+function toChemInput(
   block: SolutionBlockInput,
 ):
   | { input: ChemInput; rowIndex: number[] }
@@ -40,7 +40,7 @@ export function toChemInput(
       amount: row.amount,
       unit: row.unit,
       ...(hasPer ? { per: { amount: row.perAmount as number, unit: row.perUnit as string } } : {}),
-    } as ChemInput["components"][number]);
+    });
     rowIndex.push(index);
   }
   if (components.length === 0) return null;
@@ -89,7 +89,9 @@ const CACHE_SIZE = 256;
  * transaction; only a change to this block's own inputs reaches computeSolution.
  */
 export function evaluateSolutionBlockCached(block: SolutionBlockInput): SolutionEvaluation {
-  const key = JSON.stringify(block, (k, v) => (k === "blockId" || k === "name" ? undefined : v));
+  const key = JSON.stringify(block, (k, v: unknown) =>
+    k === "blockId" || k === "name" ? undefined : v,
+  );
   const hit = cache.get(key);
   if (hit) {
     // Refresh recency: Map keeps insertion order, so the oldest entry is evicted first.

@@ -1,6 +1,6 @@
 import { AppError } from "@/lib/errors";
 import { canonicalHash } from "./canonical-hash";
-import { describeDocumentErrors, entryDocumentSchema, type EntryDocument } from "./document-schema";
+import { safeParseEntryDocument, type EntryDocument } from "./document-schema";
 import { extractSolutionBlocks } from "./extract-blocks";
 import { documentPlainText } from "./plain-text";
 import { solutionRecordFor, type SolutionRecord } from "./solution-record";
@@ -18,7 +18,7 @@ export interface PreparedRevision {
 }
 
 /** The content hash a revision (and a signature) records: SHA-256 of canonical { title, content }. */
-export function revisionHash(title: string, content: unknown): string {
+function revisionHash(title: string, content: unknown): string {
   return canonicalHash({ title, content });
 }
 
@@ -28,12 +28,12 @@ export function revisionHash(title: string, content: unknown): string {
  * previous revision is untouched because nothing has been written yet.
  */
 export function prepareRevision(title: string, rawContent: unknown): PreparedRevision {
-  const parsed = entryDocumentSchema.safeParse(rawContent);
+  const parsed = safeParseEntryDocument(rawContent);
   if (!parsed.success) {
     throw new AppError(
       "invalid_input",
       "The document was refused; the previous revision is unchanged.",
-      { details: { problems: describeDocumentErrors(parsed.error).slice(0, 20) } },
+      { details: { problems: parsed.problems.slice(0, 20) } },
     );
   }
   const content = parsed.data;

@@ -56,11 +56,11 @@ export function solutionRecordFor(block: SolutionBlockInput): SolutionRecord {
     debyeLengthNm: finiteOrNull(ok?.debyeLengthNm),
     species: [...species],
     results: ok
-      ? { status: "ok", ...JSON.parse(JSON.stringify(ok)) }
+      ? { status: "ok", ...(JSON.parse(JSON.stringify(ok)) as Record<string, unknown>) }
       : evaluation.status === "error"
         ? { status: "error", field: evaluation.field ?? null, message: evaluation.message }
         : { status: "empty" },
-    inputs: block as unknown as Record<string, unknown>,
+    inputs: block,
     components: typedRows.map((c, position) => ({
       position,
       formula: c.formula.trim(),

@@ -1,18 +1,9 @@
 import "server-only";
 import { requireActor, type Actor } from "@/lib/access/actor";
+import type { ApiErrorBody } from "@/lib/contract/api-error";
 import { AppError, isAppError } from "@/lib/errors";
 
-/** The JSON body of every API error: a code a client can switch on and a message a person can read. */
-export interface ApiErrorBody {
-  error: {
-    code: string;
-    message: string;
-    fieldErrors?: Record<string, string[]>;
-    details?: Record<string, unknown>;
-  };
-}
-
-export function errorResponse(error: AppError): Response {
+function errorResponse(error: AppError): Response {
   const body: ApiErrorBody = {
     error: {
       code: error.code,
@@ -25,7 +16,7 @@ export function errorResponse(error: AppError): Response {
 }
 
 /** Wraps a route handler: typed errors become their status, anything else a 500 without internals. */
-export function route<C>(handler: (request: Request, context: C) => Promise<Response>) {
+function route<C>(handler: (request: Request, context: C) => Promise<Response>) {
   return async (request: Request, context: C): Promise<Response> => {
     try {
       return await handler(request, context);
@@ -46,7 +37,7 @@ export function route<C>(handler: (request: Request, context: C) => Promise<Resp
 }
 
 /** Largest JSON body accepted (an entry document with many blocks is well under 1 MB). */
-export const MAX_JSON_BYTES = 4 * 1024 * 1024;
+const MAX_JSON_BYTES = 4 * 1024 * 1024;
 
 /** Reads a JSON body: 413 when it is too large, 422 when it is not JSON. */
 export async function readJson(request: Request, maxBytes = MAX_JSON_BYTES): Promise<unknown> {

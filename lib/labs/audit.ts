@@ -1,6 +1,6 @@
 import "server-only";
 import { listAuditEvents } from "@/db/queries/audit";
-import { assertCan, type Actor } from "@/lib/access/authorize";
+import { assertCan, type Actor } from "@/lib/rules/authorize";
 import { getDb } from "@/lib/server/database";
 
 export async function listRecentAudit(actor: Actor, limit = 30) {

@@ -26,7 +26,7 @@ export async function appendRevision(
     entryId: r.entryId,
     number: r.number,
     title: prepared.title,
-    content: prepared.content as unknown as Record<string, unknown>,
+    content: prepared.content,
     contentText: prepared.contentText,
     contentHash: prepared.contentHash,
     authorId: r.authorId,

@@ -1,10 +1,10 @@
 import "server-only";
-import { findLabEntry, findRevision, listRevisions } from "@/db/queries/entries";
+import { loadEntryFor } from "./entry-access";
+import { findRevision, listRevisions } from "@/db/queries/entries";
 import { listComponentsOf, listRevisionSolutions } from "@/db/queries/solutions";
-import { assertCan, type Actor } from "@/lib/access/authorize";
+import { assertCan, type Actor } from "@/lib/rules/authorize";
 import { AppError } from "@/lib/errors";
 import { getDb } from "@/lib/server/database";
-import { parseRecordId } from "@/lib/validation/parse";
 import { EMPTY_DOCUMENT, getEntryHeader } from "./entries";
 import { summariseChange } from "@/lib/document/revision-diff";
 
@@ -19,9 +19,7 @@ export interface RevisionDto {
 
 async function entryOf(actor: Actor, entryId: string) {
   assertCan(actor, "entry.read");
-  const entry = await findLabEntry(getDb(), actor.labId, parseRecordId(entryId, "Entry"));
-  if (!entry) throw new AppError("not_found", "Entry not found.");
-  return entry;
+  return loadEntryFor(getDb(), actor, entryId, "view");
 }
 
 async function findRevisionOrThrow(entryId: string, number: number) {

@@ -8,6 +8,12 @@ import { seedDemo } from "@/lib/demo/seed";
 import { verifyCredentials } from "@/lib/auth/verify-credentials";
 import { getDb } from "@/lib/server/database";
 
+/** What lib/demo/content.ts writes for each lab: entries, and solution rows over all revisions. */
+const EXPECTED: Record<string, { entries: number; solutions: number }> = {
+  "saltmarsh-interfaces": { entries: 4, solutions: 4 },
+  "ridgeback-cells": { entries: 1, solutions: 1 },
+};
+
 describe("demo scenario seed", () => {
   it("creates two labs with members in every role and notebook content, once", async () => {
     const first = await seedDemo(getDb(), { afterLab: demoContent });
@@ -27,12 +33,12 @@ describe("demo scenario seed", () => {
       expect(signIn.kind).toBe("ok");
       const [row] = await getDb().select().from(labs).where(eq(labs.slug, lab.slug));
       const labEntries = await getDb().select().from(entries).where(eq(entries.labId, row.id));
-      expect(labEntries.length).toBeGreaterThan(0);
+      expect(labEntries).toHaveLength(EXPECTED[lab.slug].entries);
       const labSolutions = await getDb()
         .select()
         .from(solutions)
         .where(eq(solutions.labId, row.id));
-      expect(labSolutions.length).toBeGreaterThan(0);
+      expect(labSolutions).toHaveLength(EXPECTED[lab.slug].solutions);
     }
   });
 });

@@ -7,8 +7,10 @@ import type { Actor } from "@/lib/access/actor";
 import { computeSolution } from "@/lib/chem";
 import { defaultSolutionBlockInput } from "@/lib/document/block-defaults";
 import { canonicalHash } from "@/lib/document/canonical-hash";
+import { extractSolutionBlocks } from "@/lib/document/extract-blocks";
+import { findTemplate } from "@/lib/document/templates";
 import { AppError } from "@/lib/errors";
-import { createEntry, listEntries, submitEntry } from "@/lib/notebook/entries";
+import { createEntry, listEntries, setEntryArchived, submitEntry } from "@/lib/notebook/entries";
 import { getCurrentContent, getRevisionHistory } from "@/lib/notebook/revisions";
 import { saveEntryContent } from "@/lib/notebook/save-entry";
 import { getDb } from "@/lib/server/database";
@@ -227,6 +229,8 @@ describe("entries, revisions and server-computed solutions", () => {
     const current = await getCurrentContent(researcher, id);
     expect(current.number).toBe(1);
     const rows = await getDb().select().from(solutions).where(eq(solutions.entryId, id));
+    const template = findTemplate("cell-preparation")!;
+    expect(rows).toHaveLength(extractSolutionBlocks(template.build()).length);
     expect(rows.length).toBeGreaterThanOrEqual(1);
   });
 
@@ -262,6 +266,37 @@ describe("entries, revisions and server-computed solutions", () => {
     ).toBe(409);
     const mine = await listEntries(researcher, { author: "me", status: "submitted" });
     expect(mine.map((e) => e.id)).toContain(id);
+  });
+
+  it("refuses to save or submit an archived entry (409) and never archives one under review", async () => {
+    const { id } = await createEntry(researcher, { projectId, title: "Archived draft" });
+    await saveEntryContent(researcher, id, {
+      baseRevision: 0,
+      title: "Archived draft",
+      content: docWith(paragraph("before archiving")),
+    });
+    await setEntryArchived(researcher, id, true);
+    const save = await errorOf(
+      saveEntryContent(researcher, id, {
+        baseRevision: 1,
+        title: "Archived draft",
+        content: docWith(paragraph("after archiving")),
+      }),
+    );
+    expect(save.status).toBe(409);
+    expect(save.message).toBe("This entry is archived; restore it before you edit it.");
+    const submit = await errorOf(submitEntry(researcher, id));
+    expect(submit.status).toBe(409);
+    expect(submit.message).toBe("This entry is archived; restore it before you submit it.");
+    expect((await getCurrentContent(researcher, id)).number).toBe(1);
+
+    await setEntryArchived(researcher, id, false);
+    await submitEntry(researcher, id);
+    const archive = await errorOf(setEntryArchived(researcher, id, true));
+    expect(archive.status).toBe(409);
+    expect(archive.message).toMatch(/stays in the review queue/);
+    const queue = await listEntries(supervisor, { status: "submitted" });
+    expect(queue.map((e) => e.id)).toContain(id);
   });
 
   it("the database itself refuses to change or delete a revision", async () => {

@@ -3,12 +3,18 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { InviteForm } from "@/components/lab/invite-form";
 import { MemberRow } from "@/components/lab/member-row";
+import { WithdrawInvitation } from "@/components/lab/withdraw-invitation";
 import { requireActor } from "@/lib/access/actor";
-import { roleCan } from "@/lib/access/policy";
+import { roleCan } from "@/lib/rules/role-permissions";
 import { listRecentAudit } from "@/lib/labs/audit";
 import { listMembers, listPendingInvitations } from "@/lib/labs/members";
 import { mailCatcherConfigured } from "@/lib/mail/catcher";
-import { changeRoleAction, inviteMemberAction, setActivationAction } from "./actions";
+import {
+  changeRoleAction,
+  inviteMemberAction,
+  setActivationAction,
+  withdrawInvitationAction,
+} from "./actions";
 
 export const metadata: Metadata = { title: "Lab settings" };
 
@@ -43,12 +49,17 @@ export default async function LabSettingsPage() {
         {invitations.length ? (
           <ul className="mt-5 divide-y divide-ink/5 text-sm" aria-label="Open invitations">
             {invitations.map((i) => (
-              <li key={i.id} className="flex justify-between py-2">
+              <li key={i.id} className="flex flex-wrap items-center justify-between gap-2 py-2">
                 <span>
                   {i.email} <span className="text-ink-soft">as {i.role}</span>
                 </span>
-                <span className="text-xs text-ink-soft">
+                <span className="flex items-center gap-3 text-xs text-ink-soft">
                   sent by {i.invitedBy}, expires {i.expiresAt.toISOString().slice(0, 10)}
+                  <WithdrawInvitation
+                    invitationId={i.id}
+                    email={i.email}
+                    withdraw={withdrawInvitationAction}
+                  />
                 </span>
               </li>
             ))}

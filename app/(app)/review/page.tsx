@@ -3,7 +3,7 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { StatusChip } from "@/components/entries/status-chip";
 import { requireActor } from "@/lib/access/actor";
-import { roleCan } from "@/lib/access/policy";
+import { roleCan } from "@/lib/rules/role-permissions";
 import { listEntries } from "@/lib/notebook/entries";
 
 export const metadata: Metadata = { title: "Review queue" };

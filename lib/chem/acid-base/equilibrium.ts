@@ -63,7 +63,7 @@ export function waterIons(pH: number, pKw: number, log10Gamma: Log10Gamma): IonA
   ];
 }
 
-export function speciesAt(
+function speciesAt(
   systems: readonly SystemAtT[],
   fixedIons: readonly IonAmount[],
   pH: number,
@@ -85,7 +85,7 @@ const PH_LOW = -2;
 const PH_HIGH = 16;
 
 /** The pH at which the solution is electrically neutral, for fixed γ. */
-export function neutralPH(
+function neutralPH(
   systems: readonly SystemAtT[],
   fixedIons: readonly IonAmount[],
   pKw: number,

@@ -24,7 +24,7 @@ const key = (text: string) => normalizeFormulaText(text).replace(/\s+/g, "");
 export type ResolvedReagent =
   { kind: "buffer"; reagent: BufferReagent } | { kind: "strong"; reagent: StrongElectrolyte };
 
-export function findReagent(text: string): ResolvedReagent | undefined {
+function findReagent(text: string): ResolvedReagent | undefined {
   const wanted = key(ALIASES[text.trim().toLowerCase()] ?? text);
   const buffer = BUFFER_REAGENTS.find(
     (r) => key(r.formula) === wanted || r.name.toLowerCase() === text.trim().toLowerCase(),

@@ -32,7 +32,7 @@ export function ionicStrengthMessage(
   ];
 }
 
-export function waterOnlyNote(label: string, what: string, solvent: string): string[] {
+function waterOnlyNote(label: string, what: string, solvent: string): string[] {
   return solvent === "water"
     ? []
     : [`${label}: ${what} were fitted for water; for ${solvent} they are an extrapolation.`];
@@ -72,7 +72,7 @@ export function substitutedCore(input: ActivityModelInput): {
  */
 export const ION_ASSOCIATION_ONSET_MOLAL = 0.05;
 
-export function ionAssociationMessage(input: ActivityModelInput): string[] {
+function ionAssociationMessage(input: ActivityModelInput): string[] {
   if (input.ionicStrengthMolal <= ION_ASSOCIATION_ONSET_MOLAL) return [];
   const multivalentAnions = input.ions
     .filter((i) => i.charge <= -2 && i.molality > 0)
@@ -111,7 +111,7 @@ function lnGammaExtendedForm(az2: number, beta: number, b: number, x: number): n
 
 const LN10_LOCAL = Math.LN10;
 
-export function evaluateExtendedForm(
+function evaluateExtendedForm(
   input: ActivityModelInput,
   beta: ArrayLike<number>,
   b: ArrayLike<number>,
@@ -170,7 +170,7 @@ export function dhFamilyOutput(
 }
 
 /** Ions of higher charge than the model was built for (its documented charge types). */
-export function chargeTypeMessage(
+function chargeTypeMessage(
   model: { label: string; maxChargeMagnitude?: number },
   input: ActivityModelInput,
 ): string[] {

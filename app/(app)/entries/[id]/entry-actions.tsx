@@ -1,6 +1,6 @@
 "use client";
 import { useActionState } from "react";
-import { initialActionState, type ActionState } from "@/lib/http/action-state";
+import { initialActionState, type ActionState } from "@/lib/contract/action-state";
 
 type Action = (prev: ActionState, form: FormData) => Promise<ActionState>;
 

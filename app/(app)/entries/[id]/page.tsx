@@ -15,7 +15,7 @@ async function load(id: string) {
   const actor = await requireActor();
   try {
     const { current, ...header } = await openEntry(actor, id);
-    return { actor, header, current };
+    return { header, current };
   } catch (error) {
     if (isAppError(error) && error.code === "not_found") notFound();
     throw error;
@@ -24,11 +24,9 @@ async function load(id: string) {
 
 export default async function EntryPage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
-  const { actor, header, current } = await load(id);
-  const { entry, authorName, projectName } = header;
-  const isAuthor = entry.authorId === actor.userId;
-  const editable =
-    isAuthor && (entry.status === "draft" || entry.status === "returned") && !entry.archivedAt;
+  const { header, current } = await load(id);
+  const { entry, authorName, projectName, actions } = header;
+  const editable = actions.edit.allowed;
   return (
     <div className="grid gap-8 lg:grid-cols-[minmax(0,1fr)_16rem]">
       <div className="min-w-0">
@@ -66,20 +64,14 @@ export default async function EntryPage({ params }: { params: Promise<{ id: stri
         </div>
         <EntryActions
           entryId={entry.id}
-          canSubmit={
-            isAuthor &&
-            (entry.status === "draft" || entry.status === "returned") &&
-            entry.currentRevisionNumber > 0
-          }
-          canArchive={isAuthor || actor.role === "admin"}
+          canSubmit={actions.submit.allowed}
+          canArchive={actions.archive.allowed || actions.restore.allowed}
           archived={entry.archivedAt !== null}
           submit={submitEntryAction}
           archive={archiveEntryAction}
         />
-        {!editable && isAuthor && entry.status === "submitted" ? (
-          <p className="text-xs text-ink-soft">
-            Submitted entries are read-only while they wait for a countersignature.
-          </p>
+        {!actions.edit.allowed && actions.edit.code === "conflict" ? (
+          <p className="text-xs text-ink-soft">{actions.edit.reason}</p>
         ) : null}
       </aside>
     </div>

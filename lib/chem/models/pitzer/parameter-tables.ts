@@ -20,7 +20,7 @@ import type { PitzerMixingRow } from "./data/mixing-row";
 import { PITZER_TEMPERATURE_DERIVATIVES } from "./data/temperature-derivatives";
 import { pairKey } from "./ion-key";
 
-export const BINARY_SETS_IN_PRIORITY: readonly (readonly PitzerBinaryRow[])[] = [
+const BINARY_SETS_IN_PRIORITY: readonly (readonly PitzerBinaryRow[])[] = [
   MAY_2011_BINARY,
   HMW_1984_BINARY,
   PITZER_MAYORGA_1973_BINARY,

@@ -18,18 +18,18 @@ import { waterActivityFromOsmotic } from "../../solution/osmotic";
 /** Ba_j of the SIT Debye–Hückel term, kg^½ mol^−½ (NEA-TDB convention, Grenthe et al. 1992). */
 const SIT_BA = 1.5;
 /** Upper ionic strength for SIT (NEA-TDB guidance, Grenthe et al. 1992 App. B). */
-export const SIT_MAX_IONIC_STRENGTH_MOLAL = 3.5;
+const SIT_MAX_IONIC_STRENGTH_MOLAL = 3.5;
 /** ε are 25 °C values; NEA treat them as temperature-independent within about ±25 K. */
 const SIT_TEMPERATURE_SPAN_K = 25;
 
 const epsilonByPair = new Map(SIT_EPSILON_25C.map((r) => [`${r.cation}|${r.anion}`, r]));
 
-export function sitEpsilon(cation: string, anion: string): number | undefined {
+function sitEpsilon(cation: string, anion: string): number | undefined {
   return epsilonByPair.get(`${cation}|${anion}`)?.epsilonKgPerMol;
 }
 
 /** Cation–anion pairs present without a tabulated ε. */
-export function sitMissingPairs(ions: readonly ModelIon[]): string[] {
+function sitMissingPairs(ions: readonly ModelIon[]): string[] {
   const present = ions.filter((i) => i.molality > 0);
   const missing: string[] = [];
   for (const c of present.filter((i) => i.charge > 0))
