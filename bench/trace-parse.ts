@@ -36,7 +36,7 @@ const TARGET_RATIO = 1.5;
 const scientific = (x: number) => x.toExponential(8);
 
 /** Writes the export in batches: one simulated cycle repeated, time running on, noise added. */
-export function writeCvExport(path: string, rows = ROWS): number {
+function writeCvExport(path: string, rows = ROWS): number {
   const sim = simulateReversibleCv({ stepV: 5e-4, noiseA: 1e-7, seed: 11 });
   const perCycle = sim.potentialV.length - 1;
   const fd = openSync(path, "w");
@@ -119,7 +119,7 @@ export interface TraceParseBenchReport {
   pass: boolean;
 }
 
-export function runTraceParseBench(rounds = 3): TraceParseBenchReport {
+function runTraceParseBench(rounds = 3): TraceParseBenchReport {
   const dir = mkdtempSync(join(tmpdir(), "ionleaf-bench-"));
   try {
     const path = join(dir, "cv-1e6.csv");

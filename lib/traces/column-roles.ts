@@ -10,11 +10,11 @@ import {
   readColumnName,
 } from "./column-names";
 import { TraceParseError } from "./errors";
-import type { ColumnMapping, Quantity, ReferenceElectrodeText, TraceColumn } from "./types";
+import type { ColumnMapping, Quantity, TraceColumn } from "./types";
 import { readUnit, SI_UNIT_OF_DIMENSION, type UnitReading } from "./units";
 import { QUANTITIES } from "./types";
 
-export type ColumnPlan = Omit<TraceColumn, "minSi" | "maxSi" | "numericCells" | "nonNumericCells">;
+type ColumnPlan = Omit<TraceColumn, "minSi" | "maxSi" | "numericCells" | "nonNumericCells">;
 
 export interface RolePlan {
   columns: ColumnPlan[];
@@ -62,7 +62,7 @@ export function planColumns(names: string[], mapping: ColumnMapping | undefined)
         unit: r.unit?.canonical ?? null,
         siUnit: null,
         siFactor: 1,
-        referenceElectrode: r.referenceElectrode as ReferenceElectrodeText | null,
+        referenceElectrode: r.referenceElectrode,
         unitReading: r.unit,
         sign: r.sign,
       };

@@ -38,7 +38,7 @@ const DELIMITERS: Delimiter[] = ["\t", ";", ","];
 const CONFIRMING_ROWS = 5;
 
 /** Splits one line on a delimiter, honouring double quotes ("a,b" is one field). */
-export function splitLine(line: string, delimiter: string): string[] {
+function splitLine(line: string, delimiter: string): string[] {
   if (line.indexOf('"') === -1) return line.split(delimiter);
   const fields: string[] = [];
   let field = "";

@@ -11,7 +11,7 @@ import type { HeaderFields } from "./types";
 const MAX_ENTRIES = 200;
 const MAX_VALUE_CHARS = 200;
 
-export function splitKeyValue(line: string): { key: string; value: string } | null {
+function splitKeyValue(line: string): { key: string; value: string } | null {
   const text = line.replace(/^\uFEFF/, "").trim();
   if (!text) return null;
   for (const separator of ["=", ":", "\t", ";", ","]) {

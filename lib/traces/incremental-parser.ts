@@ -185,8 +185,8 @@ export function createTraceParser(options: TraceParseOptions = {}): TraceParser 
       skippingLongLine = false;
     }
     const aggregate = partial + text;
-    const result = papa!.parse(aggregate, 0, !final);
-    storeRows(result.data as string[][]);
+    const result = papa!.parse(aggregate, 0, !final) as Papa.ParseResult<string[]>;
+    storeRows(result.data);
     partial = final ? "" : aggregate.slice(result.meta.cursor);
     if (partial.length > maxLineChars) {
       note(longLines, tableLine + 1);

@@ -4,7 +4,7 @@
  * missing (not 0), a decimal comma is read when no point is present, hexadecimal and
  * "Infinity" are not numbers.
  */
-export const enum CellKind {
+const enum CellKind {
   Number = 0,
   Empty = 1,
   Text = 2,

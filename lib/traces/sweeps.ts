@@ -12,7 +12,7 @@ export interface SweepShape {
 }
 
 /** 1 % of the potential window, at least 0.2 mV: far above readback noise, far below a sweep. */
-export function sweepHysteresis(potential: ArrayLike<number>, start: number, end: number): number {
+function sweepHysteresis(potential: ArrayLike<number>, start: number, end: number): number {
   let min = Infinity;
   let max = -Infinity;
   for (let i = start; i < end; i++) {

@@ -26,7 +26,7 @@ export const TECHNIQUE_LABEL: Record<TechniqueId, string> = {
   unknown: "unknown technique",
 };
 
-export function techniqueFromName(name: string): TechniqueId | null {
+function techniqueFromName(name: string): TechniqueId | null {
   for (const [pattern, id] of NAMED) if (pattern.test(name)) return id;
   return null;
 }

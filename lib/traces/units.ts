@@ -48,7 +48,7 @@ const AREA_M2: Record<string, number> = { cm: 1e-4, mm: 1e-6, m: 1 };
  * NFKC turns "²" into "2", the micro sign and Greek mu into one letter, "Ω" (ohm sign) into
  * omega and "⁻" into a minus sign; the rest is spelling.
  */
-export function normaliseUnitText(text: string): string {
+function normaliseUnitText(text: string): string {
   return text
     .normalize("NFKC")
     .replace(/[μµ]/g, "u")

@@ -14,8 +14,7 @@
 import { FARADAY_C_PER_MOL, GAS_CONSTANT_J_PER_MOL_K, kelvin } from "../constants";
 import { ChemInputError } from "../errors";
 import { parseFormula } from "../formula";
-import { assertWaterTemperature } from "../solvents/water";
-import { waterViscosityMPaS } from "../solvents/water-viscosity";
+import { assertLiquidWaterTemperature, waterViscosityMPaS } from "../solvents/water-viscosity";
 import { interpolate } from "../interpolate";
 import {
   IONIC_CONDUCTIVITY_SOURCE,
@@ -66,7 +65,7 @@ export function ionCharge(
 }
 
 export function limitingIonicConductivity(ion: string, temperatureC = 25): LimitingConductivity {
-  assertWaterTemperature(temperatureC);
+  assertLiquidWaterTemperature(temperatureC);
   const { key, charge, formula } = ionCharge(ion);
   const row = BY_KEY.get(key);
   if (!row)

@@ -20,8 +20,7 @@
  */
 import { GAS_CONSTANT_J_PER_MOL_K, kelvin } from "../constants";
 import { ChemInputError } from "../errors";
-import { assertWaterTemperature } from "../solvents/water";
-import { waterViscosityMPaS } from "../solvents/water-viscosity";
+import { assertLiquidWaterTemperature, waterViscosityMPaS } from "../solvents/water-viscosity";
 
 export type RedoxProbeId =
   | "ferricyanide/ferrocyanide"
@@ -48,7 +47,7 @@ export interface RedoxProbe {
   confidence: "confirmed" | "memory";
 }
 
-export const REDOX_PROBES: readonly RedoxProbe[] = [
+const REDOX_PROBES: readonly RedoxProbe[] = [
   {
     id: "ferricyanide/ferrocyanide",
     name: "hexacyanoferrate(III)/(II)",
@@ -163,7 +162,7 @@ export function diffusionCoefficient(
   if (Math.abs(temperatureC - 25) > 1e-9) {
     const law = probe.temperatureLaw;
     if (law.kind === "stokes-einstein-water") {
-      assertWaterTemperature(temperatureC);
+      assertLiquidWaterTemperature(temperatureC);
       value =
         at25 *
         (kelvin(temperatureC) / kelvin(25)) *

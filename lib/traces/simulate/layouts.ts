@@ -4,7 +4,7 @@
  * is every combination the parser must read; tests write each one and read it back.
  */
 export type NameStyle = "slash" | "spaced-slash" | "words" | "vs-reference" | "brackets";
-export type HeaderStyle = "none" | "equals" | "colon" | "delimited";
+type HeaderStyle = "none" | "equals" | "colon" | "delimited";
 
 export interface TraceFileLayout {
   delimiter: "," | ";" | "\t";
@@ -17,26 +17,23 @@ export interface TraceFileLayout {
   newline: "\n" | "\r\n";
 }
 
-export const NAME_STYLES: readonly NameStyle[] = [
+const NAME_STYLES: readonly NameStyle[] = [
   "slash",
   "spaced-slash",
   "words",
   "vs-reference",
   "brackets",
 ];
-export const HEADER_STYLES: readonly HeaderStyle[] = ["none", "equals", "colon", "delimited"];
+const HEADER_STYLES: readonly HeaderStyle[] = ["none", "equals", "colon", "delimited"];
 /** Unit pairs: every potential and current unit appears with every other setting. */
-export const UNIT_SETS: readonly [
-  TraceFileLayout["potentialUnit"],
-  TraceFileLayout["currentUnit"],
-][] = [
+const UNIT_SETS: readonly [TraceFileLayout["potentialUnit"], TraceFileLayout["currentUnit"]][] = [
   ["V", "A"],
   ["V", "mA"],
   ["mV", "µA"],
   ["mV", "uA"],
 ];
 /** Comma decimals never go with a comma delimiter. */
-export const DIALECTS: readonly [TraceFileLayout["delimiter"], TraceFileLayout["decimal"]][] = [
+const DIALECTS: readonly [TraceFileLayout["delimiter"], TraceFileLayout["decimal"]][] = [
   [",", "."],
   [";", "."],
   [";", ","],

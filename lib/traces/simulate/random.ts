@@ -1,5 +1,5 @@
 /** Seeded pseudo-random numbers (mulberry32) and Gaussian noise (Box–Muller), so simulated files repeat exactly. */
-export function seededRandom(seed: number): () => number {
+function seededRandom(seed: number): () => number {
   let a = seed >>> 0;
   return () => {
     a = (a + 0x6d2b79f5) >>> 0;

@@ -78,7 +78,7 @@ const STEMS: Record<NameStyle, Partial<Record<Quantity, string>>> = {
 };
 
 /** The unit a layout writes a quantity in, and the divisor from SI. */
-export function writtenUnit(
+function writtenUnit(
   quantity: Quantity,
   layout: TraceFileLayout,
 ): { unit: string; factor: number } {
@@ -90,12 +90,12 @@ export function writtenUnit(
   return { unit: "", factor: 1 };
 }
 
-export function columnNameFor(quantity: Quantity, layout: TraceFileLayout): string {
+function columnNameFor(quantity: Quantity, layout: TraceFileLayout): string {
   const stem = STEMS[layout.nameStyle][quantity] ?? quantity;
   return stem.replace("{u}", writtenUnit(quantity, layout).unit);
 }
 
-export function formatValue(value: number, decimal: "." | ","): string {
+function formatValue(value: number, decimal: "." | ","): string {
   if (!Number.isFinite(value)) return "";
   const text = String(Number(value.toPrecision(10)));
   return decimal === "," ? text.replace(".", ",") : text;

@@ -41,7 +41,7 @@ export interface SweepInput {
   cycleCurrentRangeA: number;
 }
 
-export function baselineAt(
+function baselineAt(
   e: ArrayLike<number>,
   i: ArrayLike<number>,
   from: number,

@@ -42,7 +42,7 @@ describe("column names in their common written forms", () => {
     const r = readColumnName(name);
     expect(r.quantity).toBe(quantity);
     expect(r.unit?.canonical).toBe(unit);
-    expect(r.unit!.siFactor).toBeCloseTo(factor as number, 12);
+    expect(r.unit!.siFactor).toBeCloseTo(factor, 12);
     expect(r.problem).toBeNull();
   });
 

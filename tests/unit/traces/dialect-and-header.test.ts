@@ -75,7 +75,7 @@ describe("header block", () => {
     ["Scan rate / V s-1 = 0.25", 0.25],
   ])("%s → %f V/s", (line, expected) => {
     const { summary } = parseTraceText(`${line}\n${table}`);
-    expect(summary.header.scanRateVPerS).toBeCloseTo(expected as number, 12);
+    expect(summary.header.scanRateVPerS).toBeCloseTo(expected, 12);
     expect(summary.headerLineCount).toBe(1);
   });
 
@@ -87,7 +87,7 @@ describe("header block", () => {
     ["Electrode Area = 1.96e-5 m^2", 0.196],
   ])("%s → %f cm²", (line, expected) => {
     const { summary } = parseTraceText(`${line}\n${table}`);
-    expect(summary.header.electrodeAreaCm2).toBeCloseTo(expected as number, 10);
+    expect(summary.header.electrodeAreaCm2).toBeCloseTo(expected, 10);
   });
 
   it("reads reference electrode, technique and temperature, and keeps every entry", () => {
