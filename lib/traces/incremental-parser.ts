@@ -1,8 +1,9 @@
 /**
  * The trace parser, fed with text in chunks of any size so a 50 MB export never has to be
  * one string. Until the table is found, text is kept (the header block, up to 4 MB); from
- * then on papaparse's core parser tokenises each chunk (the unfinished last line is carried
- * to the next chunk) and every cell goes straight into a Float64Array in SI units.
+ * then papaparse's core parser cuts each chunk into rows (the unfinished last line is carried
+ * to the next chunk) and table-columns.ts puts every cell straight into a Float64Array in SI
+ * units.
  *
  *   const parser = createTraceParser({ mapping });
  *   parser.push(chunk); …  // strings, split anywhere
@@ -10,12 +11,12 @@
  */
 import Papa from "papaparse";
 import { planColumns, type RolePlan } from "./column-roles";
-import { ColumnStore } from "./column-store";
 import { locateTable, type TableLocation } from "./dialect";
 import { TraceParseError } from "./errors";
 import { readHeaderFields, type HeaderReading } from "./header-fields";
 import { createCellReader, type CellReader } from "./numbers";
 import { buildSummary } from "./summary";
+import { TableColumns, type LineIssue } from "./table-columns";
 import type { ParsedTrace, TraceParseOptions } from "./types";
 
 export const TRACE_PARSER_VERSION = "ionleaf-traces/1";
@@ -26,11 +27,6 @@ const DEFAULT_MAX_LINE_CHARS = 1024 * 1024;
 export interface TraceParser {
   push(chunk: string): void;
   finish(): ParsedTrace;
-}
-
-interface LineIssue {
-  count: number;
-  firstLine: number;
 }
 
 /** Lines with the offset where each starts; "\r\n", "\n" and "\r" all end a line. */
@@ -76,23 +72,9 @@ export function createTraceParser(options: TraceParseOptions = {}): TraceParser 
   let partial = "";
   let skippingLongLine = false;
   let reader: CellReader | null = null;
-  let stores: ColumnStore[] = [];
-  let factors: number[] = [];
-  let minimum = new Float64Array(0);
-  let maximum = new Float64Array(0);
-  let numeric = new Float64Array(0);
-  let nonNumeric = new Float64Array(0);
-  let storedColumns = 0;
-  let capacity = 0;
-  let points = 0;
-  let tableLine = 0;
-  const ragged: LineIssue = { count: 0, firstLine: 0 };
-  const textRows: LineIssue = { count: 0, firstLine: 0 };
+  let columns: TableColumns | null = null;
+  let linePapa: Papa.Parser | null = null;
   const longLines: LineIssue = { count: 0, firstLine: 0 };
-
-  const note = (issue: LineIssue, line: number) => {
-    if (issue.count++ === 0) issue.firstLine = line;
-  };
 
   function startTable(
     location: TableLocation,
@@ -106,7 +88,7 @@ export function createTraceParser(options: TraceParseOptions = {}): TraceParser 
     header = readHeaderFields(lines.slice(0, headerEnd));
     plan = planColumns(location.names, options.mapping);
     // A trailing delimiter makes an empty last column: not data, not a problem.
-    storedColumns = location.names.length;
+    let storedColumns = location.names.length;
     while (
       storedColumns > 1 &&
       location.names[storedColumns - 1].trim() === "" &&
@@ -114,67 +96,21 @@ export function createTraceParser(options: TraceParseOptions = {}): TraceParser 
     )
       storedColumns--;
     plan.columns = plan.columns.slice(0, storedColumns);
-    stores = plan.columns.map(() => new ColumnStore());
-    capacity = stores.length ? stores[0].values.length : 0;
-    factors = plan.columns.map((c) => c.siFactor);
-    minimum = new Float64Array(stores.length).fill(Infinity);
-    maximum = new Float64Array(stores.length).fill(-Infinity);
-    numeric = new Float64Array(stores.length);
-    nonNumeric = new Float64Array(stores.length);
     reader = createCellReader(location.decimalCommaAllowed);
+    columns = new TableColumns(
+      location.columnCount,
+      plan.columns.map((c) => c.siFactor),
+      reader,
+      location.delimiter,
+      location.firstDataLine,
+    );
     const newline = detectNewline(text);
     papa = new Papa.Parser({ delimiter: location.delimiter, newline, quoteChar: '"' });
-    tableLine = location.firstDataLine;
+    // The same core with a delimiter that never occurs returns whole lines (quote-free chunks).
+    linePapa = new Papa.Parser({ delimiter: "\u0001", newline, quoteChar: '"' });
     state = "table";
     head = "";
     feedTable(text.slice(starts[location.firstDataLine]), final);
-  }
-
-  /** One papaparse batch into the columns; locals hoisted because this runs per cell. */
-  function storeRows(rows: string[][]) {
-    const r = reader!;
-    const columnCount = table!.columnCount;
-    const width = storedColumns;
-    let values = stores.map((s) => s.values);
-    for (let n = 0; n < rows.length; n++) {
-      const fields = rows[n];
-      tableLine++;
-      const count = fields.length;
-      if (count === 1 && fields[0].trim() === "") continue;
-      if (count !== columnCount) {
-        let extraFilled = false;
-        for (let k = columnCount; k < count; k++) if (fields[k].trim() !== "") extraFilled = true;
-        if (count < columnCount || extraFilled) note(ragged, tableLine);
-      }
-      const row = points;
-      if (row >= capacity) {
-        for (const store of stores) store.ensure(row + 1);
-        capacity = stores[0].values.length;
-        values = stores.map((s) => s.values);
-      }
-      let numbers = 0;
-      for (let k = 0; k < width; k++) {
-        const value = k < count ? r.read(fields[k]) : NaN;
-        if (value === value) {
-          numbers++;
-          const si = value * factors[k];
-          values[k][row] = si;
-          numeric[k]++;
-          if (si < minimum[k]) minimum[k] = si;
-          if (si > maximum[k]) maximum[k] = si;
-        } else {
-          values[k][row] = NaN;
-          nonNumeric[k]++;
-        }
-      }
-      if (numbers === 0) {
-        // A line of text inside the table (a repeated header, "Cycle 2"): not a data point.
-        for (let k = 0; k < width; k++) nonNumeric[k]--;
-        note(textRows, tableLine);
-        continue;
-      }
-      points++;
-    }
   }
 
   function feedTable(text: string, final: boolean) {
@@ -185,12 +121,17 @@ export function createTraceParser(options: TraceParseOptions = {}): TraceParser 
       skippingLongLine = false;
     }
     const aggregate = partial + text;
-    const result = papa!.parse(aggregate, 0, !final) as Papa.ParseResult<string[]>;
-    storeRows(result.data);
+    // Quotes need papaparse's field splitting; without them whole lines are read faster.
+    const quoted = aggregate.indexOf('"') !== -1;
+    const result = (quoted ? papa! : linePapa!).parse(aggregate, 0, !final) as Papa.ParseResult<
+      string[]
+    >;
+    if (quoted) columns!.addFieldRows(result.data);
+    else columns!.addLines(result.data);
     partial = final ? "" : aggregate.slice(result.meta.cursor);
     if (partial.length > maxLineChars) {
-      note(longLines, tableLine + 1);
-      tableLine++;
+      columns!.line++;
+      if (longLines.count++ === 0) longLines.firstLine = columns!.line;
       partial = "";
       skippingLongLine = true;
     }
@@ -251,11 +192,13 @@ export function createTraceParser(options: TraceParseOptions = {}): TraceParser 
         problems.unshift(
           `The file contains ${nulChars} NUL characters (${Math.round((100 * nulChars) / Math.max(totalChars, 1))} % of it): a binary file, or text saved as UTF-16? They were removed before reading.`,
         );
-      if (ragged.count)
+      const ragged = columns?.ragged;
+      const textRows = columns?.textRows;
+      if (ragged?.count)
         problems.push(
           `${ragged.count} rows have a different number of fields than the column names (first at line ${ragged.firstLine}).`,
         );
-      if (textRows.count)
+      if (textRows?.count)
         problems.push(
           `${textRows.count} lines inside the table hold no numbers and were skipped (first at line ${textRows.firstLine}).`,
         );
@@ -263,18 +206,12 @@ export function createTraceParser(options: TraceParseOptions = {}): TraceParser 
         problems.push(
           `${longLines.count} lines longer than ${maxLineChars} characters were skipped (first at line ${longLines.firstLine}).`,
         );
-      stores.forEach((store, k) => {
-        store.min = minimum[k];
-        store.max = maximum[k];
-        store.numeric = numeric[k];
-        store.nonNumeric = nonNumeric[k];
-      });
       return buildSummary({
         table,
         plan,
         header,
-        stores,
-        points,
+        stores: columns?.finish() ?? [],
+        points: columns?.points ?? 0,
         reader,
         problems,
         parserVersion: TRACE_PARSER_VERSION,

@@ -23,7 +23,7 @@ const HAS_DIGIT = /\d/;
 const RADIX_PREFIX = /^\s*[+-]?0[xXbBoO]/;
 
 /** Cheap pre-check: a letter x, b or o in the second or third character. */
-function mayHaveRadixPrefix(cell: string): boolean {
+export function mayHaveRadixPrefix(cell: string): boolean {
   const c1 = cell.charCodeAt(1) | 32;
   const c2 = cell.charCodeAt(2) | 32;
   return c1 === 120 || c1 === 98 || c1 === 111 || c2 === 120 || c2 === 98 || c2 === 111;

@@ -81,6 +81,44 @@ describe("parser properties", () => {
     expect(runs).toBe(300);
   });
 
+  it("reads a file the same with some cells in quotes (papaparse's field splitting) as without", () => {
+    const sim = simulateReversibleCv({ stepV: 2e-2, cycles: 2 });
+    const layouts = allLayoutVariants();
+    let runs = 0;
+    fc.assert(
+      fc.property(
+        fc.integer({ min: 0, max: layouts.length - 1 }),
+        fc.integer({ min: 2, max: 40 }),
+        fc.integer({ min: 16, max: 400 }),
+        (layoutIndex, every, chunk) => {
+          runs++;
+          const layout = layouts[layoutIndex];
+          const plain = writeTraceFile(cvTrace(sim), layout);
+          // Quote every n-th data cell, so quote-free and quoted chunks alternate.
+          let cell = 0;
+          const lines = plain.split(layout.newline);
+          const start = lines.findIndex((l) => /^-?\d/.test(l));
+          const quoted = lines
+            .map((l, i) =>
+              i < start || l === ""
+                ? l
+                : l
+                    .split(layout.delimiter)
+                    .map((c) => (++cell % every === 0 ? `"${c}"` : c))
+                    .join(layout.delimiter),
+            )
+            .join(layout.newline);
+          const a = parseTraceText(plain, {}, chunk);
+          const b = parseTraceText(quoted, {}, chunk);
+          expect(b.summary).toEqual(a.summary);
+          expect(b.columns.map((c) => Array.from(c))).toEqual(a.columns.map((c) => Array.from(c)));
+        },
+      ),
+      { seed: 4242, numRuns: 80 },
+    );
+    expect(runs).toBe(80);
+  });
+
   it("gives the same summary and columns however the text is cut into chunks", () => {
     const sim = simulateReversibleCv({ stepV: 2e-2, cycles: 2 });
     const layouts = allLayoutVariants();
