@@ -18,8 +18,12 @@ export const ENTRY_STATUSES = [
 ] as const;
 export type EntryStatus = (typeof ENTRY_STATUSES)[number];
 
-export const SIGNATURE_MEANINGS = ["authored", "countersigned", "witnessed"] as const;
+/** What a countersignature means (our wording; labels in lib/contract/vocabulary.ts). */
+export const SIGNATURE_MEANINGS = ["witnessed", "approved", "reviewed"] as const;
 export type SignatureMeaning = (typeof SIGNATURE_MEANINGS)[number];
+
+export const REVIEW_DECISIONS = ["countersigned", "returned"] as const;
+export type ReviewDecision = (typeof REVIEW_DECISIONS)[number];
 
 /** SQL list literal for a CHECK constraint, e.g. `('a','b')`. Values are our own constants. */
 export function sqlList(values: readonly string[]): string {

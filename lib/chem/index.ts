@@ -1,4 +1,5 @@
 /** Public API of the electrolyte engine (see docs/architecture.md, "The computation contract"). */
+export { ENGINE_VERSION } from "./version";
 export { ChemInputError, isChemInputError } from "./errors";
 export { parseFormula, molarMass } from "./formula";
 export type { ParsedFormula, Composition } from "./formula";

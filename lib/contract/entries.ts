@@ -26,4 +26,6 @@ export interface SaveResult {
   /** False when the document was identical to the current revision: nothing was written. */
   created: boolean;
   solutions: number;
+  /** Solution rows this save wrote: zero when no solution block changed. */
+  solutionRowsWritten: number;
 }

@@ -1,7 +1,7 @@
 import "server-only";
 import { loadEntryFor } from "./entry-access";
 import { findRevision, listRevisions } from "@/db/queries/entries";
-import { listComponentsOf, listRevisionSolutions } from "@/db/queries/solutions";
+import { listRevisionSolutions } from "@/db/queries/solutions";
 import { assertCan, type Actor } from "@/lib/rules/authorize";
 import { AppError } from "@/lib/errors";
 import { getDb } from "@/lib/server/database";
@@ -100,20 +100,28 @@ export async function getRevisionHistory(actor: Actor, entryId: string) {
   }));
 }
 
-/** One revision with the server-computed solution rows it produced (what the solution finder searches). */
+/** One revision with the server-computed solutions it showed (what the solution finder searches). */
 export async function getRevisionWithSolutions(actor: Actor, entryId: string, number: number) {
   const entry = await entryOf(actor, entryId);
   const found = await findRevisionOrThrow(entry.id, number);
-  const rows = await listRevisionSolutions(getDb(), actor.labId, found.revision.id);
-  const components = await listComponentsOf(
-    getDb(),
-    rows.map((r) => r.id),
-  );
+  const rows = await listRevisionSolutions(getDb(), actor.labId, entry.id, found.revision.number);
   return {
     revision: toRevisionDto(found),
-    solutions: rows.map((r) => ({
-      ...r,
-      components: components.filter((c) => c.solutionId === r.id),
+    solutions: rows.map(({ block, result }) => ({
+      blockId: block.blockId,
+      name: result.name,
+      engineVersion: result.engineVersion,
+      temperatureC: result.temperatureC,
+      solvent: result.solvent,
+      modelRequested: result.modelRequested,
+      modelUsed: result.modelUsed,
+      ionicStrengthMolal: result.ionicStrengthMolal,
+      ionicStrengthMolar: result.ionicStrengthMolar,
+      debyeLengthNm: result.debyeLengthNm,
+      species: result.species,
+      inputs: result.inputs,
+      results: result.results,
+      computedAt: result.createdAt.toISOString(),
     })),
   };
 }

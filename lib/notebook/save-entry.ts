@@ -37,25 +37,43 @@ export async function saveEntryContent(
     if (entry.currentRevisionNumber > 0) {
       const current = await findRevision(tx, entry.id, entry.currentRevisionNumber);
       if (current?.revision.contentHash === contentHash) {
-        return { revision: entry.currentRevisionNumber, contentHash, created: false, solutions: 0 };
+        return {
+          revision: entry.currentRevisionNumber,
+          contentHash,
+          created: false,
+          solutions: prepared.solutionBlocks.length,
+          solutionRowsWritten: 0,
+        };
       }
     }
     const number = entry.currentRevisionNumber + 1;
-    const { solutions } = await appendRevision(tx, {
+    // While an amendment is in progress, every revision is marked as part of it.
+    const amendment =
+      entry.status === "amended" && entry.signedRevisionNumber !== null
+        ? { amendsRevisionNumber: entry.signedRevisionNumber, reason: entry.amendmentReason ?? "" }
+        : null;
+    const appended = await appendRevision(tx, {
       labId: actor.labId,
       entryId: entry.id,
       number,
       authorId: actor.userId,
       prepared,
+      amendment,
     });
-    if (number === 1)
-      await insertAuditEvent(tx, {
-        labId: actor.labId,
-        actorId: actor.userId,
-        action: "entry.first_saved",
-        targetType: "entry",
-        targetId: entry.id,
-      });
-    return { revision: number, contentHash, created: true, solutions };
+    await insertAuditEvent(tx, {
+      labId: actor.labId,
+      actorId: actor.userId,
+      action: "entry.saved",
+      targetType: "entry",
+      targetId: entry.id,
+      details: { revision: number, contentHash, amendment: amendment !== null },
+    });
+    return {
+      revision: number,
+      contentHash,
+      created: true,
+      solutions: appended.solutions,
+      solutionRowsWritten: appended.solutionRowsWritten,
+    };
   });
 }

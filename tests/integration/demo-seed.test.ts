@@ -1,14 +1,14 @@
 // @vitest-environment node
 import { eq } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
-import { entries, labs, solutions } from "@/db/schema";
+import { blockResults, entries, labs } from "@/db/schema";
 import { demoContent } from "@/lib/demo/content";
 import { DEMO_LABS, DEMO_PASSWORD } from "@/lib/demo/scenario";
 import { seedDemo } from "@/lib/demo/seed";
 import { verifyCredentials } from "@/lib/auth/verify-credentials";
 import { getDb } from "@/lib/server/database";
 
-/** What lib/demo/content.ts writes for each lab: entries, and solution rows over all revisions. */
+/** What lib/demo/content.ts writes for each lab: entries, and solution block rows over all revisions. */
 const EXPECTED: Record<string, { entries: number; solutions: number }> = {
   "saltmarsh-interfaces": { entries: 4, solutions: 4 },
   "ridgeback-cells": { entries: 1, solutions: 1 },
@@ -36,8 +36,8 @@ describe("demo scenario seed", () => {
       expect(labEntries).toHaveLength(EXPECTED[lab.slug].entries);
       const labSolutions = await getDb()
         .select()
-        .from(solutions)
-        .where(eq(solutions.labId, row.id));
+        .from(blockResults)
+        .where(eq(blockResults.labId, row.id));
       expect(labSolutions).toHaveLength(EXPECTED[lab.slug].solutions);
     }
   });
