@@ -11,6 +11,8 @@ const config: KnipConfig = {
     "vitest.e2e.config.mts",
     // The engine's public API (docs/architecture.md, "The computation contract").
     "lib/chem/index.ts",
+    // The trace parser's public API, wired into the upload route and trace block by main.
+    "lib/traces/index.ts",
   ],
   project: ["**/*.{ts,tsx,mts,mjs}"],
   ignoreExportsUsedInFile: false,

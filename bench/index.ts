@@ -7,6 +7,7 @@ import { printDhBench } from "./chem-dh";
 import { printPitzerBench } from "./chem-pitzer";
 import { printBufferBench } from "./chem-buffer";
 import { printEditorRecomputeBench } from "./editor-recompute";
+import { printTraceParseBench } from "./trace-parse";
 
 console.log(
   `Node ${process.version}, ${os.cpus().length} CPU(s), load average ${os
@@ -20,6 +21,7 @@ const reports = [
   printPitzerBench(),
   printBufferBench(),
   printEditorRecomputeBench(),
+  printTraceParseBench(),
 ];
 
 const failed = reports.filter((r) => !r.pass).length;
