@@ -34,4 +34,3 @@ export const auditQuerySchema = z
     message: "The first date comes before the last.",
     path: ["to"],
   });
-
