@@ -9,7 +9,7 @@ const config: Config = {
     extend: {
       colors: {
         paper: { DEFAULT: "#fbfaf7", deep: "#f3f1ea" },
-        ink: { DEFAULT: "#1f2933", soft: "#52606d", faint: "#9aa5b1" },
+        ink: { DEFAULT: "#1f2933", soft: "#52606d", faint: "#5f6b78" },
         copper: {
           50: "#fbf3ee",
           100: "#f4e0d3",

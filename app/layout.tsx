@@ -7,6 +7,14 @@ import "./globals.css";
 export const metadata: Metadata = {
   title: { default: "Ionleaf", template: "%s · Ionleaf" },
   description: "The electrochemistry lab's notebook: solutions, cells and countersigned records.",
+  manifest: "/manifest.webmanifest",
+  icons: {
+    icon: [
+      { url: "/favicon.ico", sizes: "32x32" },
+      { url: "/favicon.svg", type: "image/svg+xml" },
+    ],
+    apple: "/apple-touch-icon.png",
+  },
 };
 
 export default function RootLayout({ children }: { children: React.ReactNode }) {

@@ -21,7 +21,7 @@ function median(values: number[]): number {
   return s[Math.floor(s.length / 2)];
 }
 
-export function runBufferBench(rounds = 200): BufferBenchReport {
+function runBufferBench(rounds = 200): BufferBenchReport {
   const design = (k: number) =>
     designBuffer({
       buffer: "phosphate",

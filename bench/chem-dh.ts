@@ -57,7 +57,7 @@ export interface DhBenchReport {
   pass: boolean;
 }
 
-export function runDhBench(batches = 40, callsPerBatch = 250): DhBenchReport {
+function runDhBench(batches = 40, callsPerBatch = 250): DhBenchReport {
   // Warm every model first, then interleave the batches so that load from other processes
   // on this shared machine falls on all models alike.
   for (let k = 0; k < 3000; k++) computeSolution(solutionFor(MODELS[k % MODELS.length], k));
@@ -90,10 +90,10 @@ export function runDhBench(batches = 40, callsPerBatch = 250): DhBenchReport {
   const heapAfter = process.memoryUsage().heapUsed;
 
   // 50 blocks: the ten components taken in different subsets and models, as an entry holds.
-  const blocks = Array.from({ length: 50 }, (_, i) => ({
-    model: (i % 6 === 5 ? "auto" : MODELS[i % 5]) as ActivityModelId | "auto",
-    components: TEN_COMPONENTS.slice(0, 1 + (i % 10)),
-  }));
+  const blocks = Array.from({ length: 50 }, (_, i) => {
+    const model: ActivityModelId | "auto" = i % 6 === 5 ? "auto" : MODELS[i % 5];
+    return { model, components: TEN_COMPONENTS.slice(0, 1 + (i % 10)) };
+  });
   const fifty: number[] = [];
   for (let r = 0; r < 60; r++) {
     const start = performance.now();

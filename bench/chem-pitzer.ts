@@ -38,7 +38,7 @@ function ionicStrength(ions: readonly ModelIon[]): number {
   return 0.5 * ions.reduce((a, i) => a + i.molality * i.charge * i.charge, 0);
 }
 
-export function runPitzerBench(batches = 60, callsPerBatch = 200): PitzerBenchReport {
+function runPitzerBench(batches = 60, callsPerBatch = 200): PitzerBenchReport {
   const constants = debyeHuckelConstants(25);
   const call = (k: number) => {
     // A small change per call so that nothing can be answered from a cache.

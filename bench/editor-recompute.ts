@@ -50,7 +50,7 @@ const RECIPES: {
   { components: [{ formula: "N(C4H9)4PF6", amount: 0.1, unit: "mol/L" }], solvent: "acetonitrile" },
 ];
 
-export function typicalEntryBlocks(count = 50, jitter = 0): SolutionBlockInput[] {
+function typicalEntryBlocks(count = 50, jitter = 0): SolutionBlockInput[] {
   return Array.from({ length: count }, (_, i) => {
     const recipe = RECIPES[i % RECIPES.length];
     return defaultSolutionBlockInput({
@@ -83,7 +83,7 @@ export interface BenchReport {
   pass: boolean;
 }
 
-export function runEditorRecomputeBench(rounds = 40): BenchReport {
+function runEditorRecomputeBench(rounds = 40): BenchReport {
   // Warm-up: the JIT and lib/chem's species caches, as after the first render of an entry.
   for (let r = 0; r < 20; r++) typicalEntryBlocks(50, -r - 1).forEach(evaluateSolutionBlock);
 

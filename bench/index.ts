@@ -9,6 +9,7 @@ import { printBufferBench } from "./chem-buffer";
 import { printEditorRecomputeBench } from "./editor-recompute";
 import { printSeawaterBench } from "./chem-seawater";
 import { printSweepBench } from "./chem-sweep";
+import { printTraceParseBench } from "./trace-parse";
 
 console.log(
   `Node ${process.version}, ${os.cpus().length} CPU(s), load average ${os
@@ -24,6 +25,7 @@ const reports = [
   printEditorRecomputeBench(),
   printSeawaterBench(),
   printSweepBench(),
+  printTraceParseBench(),
 ];
 
 const failed = reports.filter((r) => !r.pass).length;

@@ -5,7 +5,7 @@ import type { z } from "zod";
  * the block's inputs as JSON. On the way back in, the JSON is validated with the block's
  * own zod schema, so pasted HTML cannot smuggle odd attributes into a block.
  */
-export function readBlockData<T>(element: HTMLElement, schema: z.ZodType<T>): Partial<T> {
+function readBlockData<T>(element: HTMLElement, schema: z.ZodType<T>): Partial<T> {
   const raw = element.getAttribute("data-block");
   if (!raw) return {};
   try {

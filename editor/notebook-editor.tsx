@@ -44,14 +44,15 @@ export function NotebookEditor({
   onChangeRef.current = onChange;
   const promptRef = useRef(setPrompt);
 
+  // The schema (and its placeholder) is fixed for the editor's lifetime.
+  const initialPlaceholder = useRef(placeholder);
   const extensions = useMemo(
     () =>
       buildEditorExtensions({
-        placeholder,
+        placeholder: initialPlaceholder.current,
         onEditMath: (kind, latex, pos) =>
           promptRef.current({ kind: "math", display: kind === "block", latex, pos }),
       }),
-    // The schema is fixed for the editor's lifetime.
     [],
   );
 
@@ -86,9 +87,11 @@ export function NotebookEditor({
     onUpdate: ({ editor: e }) => onChangeRef.current?.(e.getJSON()),
   });
 
+  // Once per editor instance; a new callback identity must not re-announce it.
+  const onEditorReadyRef = useRef(onEditorReady);
+  onEditorReadyRef.current = onEditorReady;
   useEffect(() => {
-    if (editor) onEditorReady?.(editor);
-    // Once per editor instance; a new callback identity must not re-announce it.
+    if (editor) onEditorReadyRef.current?.(editor);
   }, [editor]);
 
   useEffect(() => {

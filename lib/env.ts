@@ -15,6 +15,8 @@ const envSchema = z.object({
   /** Set only when mail goes to the local mail catcher; enables the in-app inbox page. */
   MAIL_CATCHER_URL: z.string().url().optional(),
   UPLOAD_DIR: z.string().default("uploads"),
+  /** Debian's Chromium, for PDF exports. */
+  CHROMIUM_PATH: z.string().default("/usr/bin/chromium"),
   NODE_ENV: z.enum(["development", "production", "test"]).default("development"),
 });
 

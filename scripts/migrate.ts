@@ -6,12 +6,15 @@ import { drizzle } from "drizzle-orm/node-postgres";
 import { migrate } from "drizzle-orm/node-postgres/migrator";
 import { Pool } from "pg";
 
-export async function runMigrations(databaseUrl: string): Promise<void> {
+export const MIGRATIONS_FOLDER = new URL("../drizzle", import.meta.url).pathname;
+
+export async function runMigrations(
+  databaseUrl: string,
+  migrationsFolder = MIGRATIONS_FOLDER,
+): Promise<void> {
   const pool = new Pool({ connectionString: databaseUrl, max: 1 });
   try {
-    await migrate(drizzle(pool), {
-      migrationsFolder: new URL("../drizzle", import.meta.url).pathname,
-    });
+    await migrate(drizzle(pool), { migrationsFolder });
   } finally {
     await pool.end();
   }

@@ -53,7 +53,16 @@ start_mail_catcher "$SMTP_PORT" "$MAIL_HTTP_PORT" "$WORK/mail-catcher.log"
 
 set +e
 TYPE_STATUS=0
+CHECK_STATUS=0
 if [ "$RUN_E2E" = 1 ]; then
+  # House rules first: the formatter, the linter (with the architecture's import rules) and
+  # knip (unused files, exports, dependencies) fail the run on any finding.
+  say "Format check (prettier --check)"
+  node_modules/.bin/prettier --check --log-level warn . || CHECK_STATUS=1
+  say "Lint (eslint, with the import rules of docs/architecture.md)"
+  node_modules/.bin/eslint --max-warnings=0 . || CHECK_STATUS=1
+  say "Unused files, exports and dependencies (knip)"
+  node_modules/.bin/knip || CHECK_STATUS=1
   say "Type check (tsc --noEmit)"
   node_modules/.bin/tsc --noEmit -p . || TYPE_STATUS=1
 fi
@@ -66,7 +75,7 @@ E2E_STATUS=0
 if [ "$RUN_E2E" = 1 ]; then
   say "Production build for the end-to-end tests"
   if node node_modules/next/dist/bin/next build >"$WORK/build.log" 2>&1; then
-    node_modules/.bin/tsx --tsconfig tsconfig.scripts.json scripts/reset-and-seed.ts
+    node_modules/.bin/tsx --tsconfig tsconfig.scripts.json tests/support/reset-and-seed.ts
     NODE_ENV=production node node_modules/next/dist/bin/next start -p "$APP_PORT" >"$WORK/app.log" 2>&1 &
     APP_PID=$!
     if wait_for_http "http://localhost:$APP_PORT/api/health" 90; then
@@ -86,4 +95,5 @@ set -e
 node scripts/test-summary.mjs "$WORK/vitest.json" "$WORK/e2e.json"
 SUMMARY_STATUS=$?
 [ "$TYPE_STATUS" = 0 ] || echo "The type check failed (see above)."
-[ "$TYPE_STATUS" = 0 ] && [ "$UNIT_STATUS" = 0 ] && [ "$E2E_STATUS" = 0 ] && [ "$SUMMARY_STATUS" = 0 ]
+[ "$CHECK_STATUS" = 0 ] || echo "The format, lint or knip check failed (see above; npm run lint and npm run format fix most findings)."
+[ "$CHECK_STATUS" = 0 ] && [ "$TYPE_STATUS" = 0 ] && [ "$UNIT_STATUS" = 0 ] && [ "$E2E_STATUS" = 0 ] && [ "$SUMMARY_STATUS" = 0 ]

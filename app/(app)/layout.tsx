@@ -3,6 +3,7 @@ import { QueryProvider } from "@/components/providers/query-provider";
 import { AppHeader } from "@/components/shell/app-header";
 import { getActor } from "@/lib/access/actor";
 import { signOut } from "@/lib/auth";
+import { recordSignOut } from "@/lib/auth/sign-out";
 import { getLabName } from "@/lib/labs/members";
 import { navigationFor } from "@/lib/shell/navigation";
 
@@ -13,6 +14,8 @@ export default async function AppLayout({ children }: { children: React.ReactNod
 
   async function signOutAction() {
     "use server";
+    const current = await getActor();
+    if (current) await recordSignOut(current);
     await signOut({ redirectTo: "/sign-in" });
   }
 

@@ -2,7 +2,9 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { StatusChip } from "@/components/entries/status-chip";
 import { requireActor } from "@/lib/access/actor";
-import { countReviewQueue, listEntries, type EntryListItem } from "@/lib/notebook/entries";
+import { countReviewQueue, listEntries } from "@/lib/notebook/entries";
+import type { EntryListItem } from "@/lib/contract/entries";
+import { roleCan } from "@/lib/rules/role-permissions";
 import { listProjects } from "@/lib/projects/service";
 
 export const metadata: Metadata = { title: "Bench" };
@@ -74,7 +76,7 @@ export default async function BenchPage() {
         </div>
       </div>
 
-      {actor.role === "supervisor" ? (
+      {roleCan(actor.role, "review.read") ? (
         <Link
           href="/review"
           className="flex items-center justify-between card p-5 hover:border-copper-300"

@@ -2,19 +2,10 @@
 import Link from "next/link";
 import { useQuery } from "@tanstack/react-query";
 import { useMemo, useState } from "react";
-import { apiFetch } from "@/lib/ui-api";
+import { apiFetch } from "@/lib/ui/api-client";
 import { StatusChip } from "./status-chip";
-
-export interface EntryRow {
-  id: string;
-  title: string;
-  status: string;
-  revision: number;
-  projectName: string;
-  authorName: string;
-  createdAt: string;
-  updatedAt: string;
-}
+import type { EntryListResponse } from "@/lib/contract/entries";
+import { ENTRY_STATUS_LABELS, ENTRY_STATUSES } from "@/lib/contract/vocabulary";
 
 type SortKey = "updatedAt" | "createdAt" | "title" | "status";
 
@@ -57,7 +48,7 @@ export function EntryTable({ projects }: { projects: { id: string; name: string 
 
   const { data, error, isLoading } = useQuery({
     queryKey: ["entries", params],
-    queryFn: () => apiFetch<{ entries: EntryRow[] }>(`/api/entries?${params}`),
+    queryFn: () => apiFetch<EntryListResponse>(`/api/entries?${params}`),
   });
 
   const toggleSort = (key: SortKey) =>
@@ -98,9 +89,9 @@ export function EntryTable({ projects }: { projects: { id: string; name: string 
           <span className="mb-1 label">Status</span>
           <select className="input w-40" value={status} onChange={(e) => setStatus(e.target.value)}>
             <option value="">Any status</option>
-            {["draft", "submitted", "returned", "countersigned"].map((s) => (
+            {ENTRY_STATUSES.map((s) => (
               <option key={s} value={s}>
-                {s}
+                {ENTRY_STATUS_LABELS[s]}
               </option>
             ))}
           </select>
@@ -164,7 +155,7 @@ export function EntryTable({ projects }: { projects: { id: string; name: string 
             {error ? (
               <tr>
                 <td colSpan={6} role="alert" className="px-4 py-6 text-red-700">
-                  {(error as Error).message}
+                  {error.message}
                 </td>
               </tr>
             ) : null}

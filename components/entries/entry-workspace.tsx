@@ -1,7 +1,9 @@
 "use client";
 import type { JSONContent } from "@tiptap/core";
-import { useEffect, useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import { NotebookEditor } from "@/editor/notebook-editor";
+import { StoredResultsProvider } from "@/editor/stored-results";
+import type { StoredSolution } from "@/lib/document/stored-evaluation";
 import { ConflictPanel } from "./conflict-panel";
 import { readLocalDraft } from "./local-draft";
 import { SaveIndicator } from "./save-indicator";
@@ -13,6 +15,8 @@ export interface EntryWorkspaceProps {
   content: unknown;
   revision: number;
   editable: boolean;
+  /** The stored numbers of the shown revision's solution blocks, when it is read-only. */
+  storedResults?: Readonly<Record<string, StoredSolution>> | null;
 }
 
 /**
@@ -24,7 +28,9 @@ export function EntryWorkspace(props: EntryWorkspaceProps) {
 
   // Once per mount: the page gives this component a key of entry id and revision, so a new
   // revision remounts it; a server refresh with the same revision must not restart the session.
+  const initial = useRef(props);
   useEffect(() => {
+    const props = initial.current;
     const draft = props.editable ? readLocalDraft(props.entryId) : null;
     if (draft && draft.baseRevision <= props.revision) {
       setStart({
@@ -54,6 +60,7 @@ function EntrySession({
   entryId,
   editable,
   start,
+  storedResults,
 }: EntryWorkspaceProps & { start: AutosaveStart }) {
   const restored = start.unsaved;
   const { state, change, keepMine, discardMine } = useAutosave(entryId, start);
@@ -113,12 +120,14 @@ function EntrySession({
           ) : null}
         </div>
       ) : null}
-      <NotebookEditor
-        initialContent={start.content as JSONContent}
-        editable={editable}
-        ariaLabel={`Text of ${start.title}`}
-        onChange={(doc) => change({ content: doc })}
-      />
+      <StoredResultsProvider results={editable || start.unsaved ? null : (storedResults ?? null)}>
+        <NotebookEditor
+          initialContent={start.content as JSONContent}
+          editable={editable}
+          ariaLabel={`Text of ${start.title}`}
+          onChange={(doc) => change({ content: doc })}
+        />
+      </StoredResultsProvider>
     </div>
   );
 }

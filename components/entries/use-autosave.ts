@@ -1,9 +1,9 @@
 "use client";
 import { useCallback, useEffect, useRef, useState } from "react";
-import { ApiError, apiFetch } from "@/lib/ui-api";
+import { ApiError, apiFetch } from "@/lib/ui/api-client";
 import { clearLocalDraft, writeLocalDraft } from "./local-draft";
 
-export type SaveStatus = "saved" | "unsaved" | "saving" | "offline" | "conflict" | "refused";
+type SaveStatus = "saved" | "unsaved" | "saving" | "offline" | "conflict" | "refused";
 
 export interface AutosaveState {
   status: SaveStatus;

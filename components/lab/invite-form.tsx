@@ -3,7 +3,8 @@ import { useActionState } from "react";
 import { Field } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
 import { SubmitButton } from "@/components/ui/submit-button";
-import { initialActionState, type ActionState } from "@/lib/http/action-state";
+import { initialActionState, type ActionState } from "@/lib/contract/action-state";
+import { ROLE_LABELS, ROLES } from "@/lib/contract/vocabulary";
 
 export function InviteForm({
   action,
@@ -34,9 +35,11 @@ export function InviteForm({
               className="input"
               defaultValue={state.values?.role ?? "researcher"}
             >
-              <option value="researcher">Researcher — writes entries</option>
-              <option value="supervisor">Supervisor — countersigns</option>
-              <option value="admin">Admin — manages the lab</option>
+              {ROLES.map((role) => (
+                <option key={role} value={role}>
+                  {ROLE_LABELS[role].name} — {ROLE_LABELS[role].duty}
+                </option>
+              ))}
             </select>
           )}
         </Field>

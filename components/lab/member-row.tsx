@@ -1,6 +1,7 @@
 "use client";
 import { useActionState } from "react";
-import { initialActionState, type ActionState } from "@/lib/http/action-state";
+import { initialActionState, type ActionState } from "@/lib/contract/action-state";
+import { ROLE_LABELS, ROLES } from "@/lib/contract/vocabulary";
 
 type Action = (prev: ActionState, form: FormData) => Promise<ActionState>;
 
@@ -38,9 +39,11 @@ export function MemberRow({ member, isSelf, changeRole, setActivation }: MemberR
             className="input w-36 py-1.5"
             disabled={!member.active}
           >
-            <option value="researcher">researcher</option>
-            <option value="supervisor">supervisor</option>
-            <option value="admin">admin</option>
+            {ROLES.map((role) => (
+              <option key={role} value={role}>
+                {ROLE_LABELS[role].name}
+              </option>
+            ))}
           </select>
           <button type="submit" className="btn-quiet py-1.5" disabled={!member.active}>
             Save role

@@ -18,7 +18,7 @@ export function AppHeader(props: {
   return (
     <header className="border-b border-ink/10 bg-paper-deep/70 backdrop-blur">
       <div className="mx-auto flex max-w-7xl flex-wrap items-center gap-x-6 gap-y-2 px-5 py-3">
-        <Link href="/" className="flex items-center gap-2.5" aria-label="Ionleaf bench">
+        <Link href="/" className="flex items-center gap-2.5" title="Your bench">
           <IonleafMark />
           <span className="leading-tight">
             <span className="block text-[15px] font-semibold tracking-tight">Ionleaf</span>

@@ -1,11 +1,11 @@
 import { and, asc, desc, eq, ilike, isNull, isNotNull, sql, type SQL } from "drizzle-orm";
 import type { Executor } from "../client";
-import { entries, projects, revisions, users } from "../schema";
+import { entries, projects, revisions, users, type EntryStatus } from "../schema";
 
 export interface EntryListFilter {
   labId: string;
   projectId?: string;
-  status?: string;
+  status?: EntryStatus;
   authorId?: string;
   search?: string;
   archived?: boolean;
@@ -54,7 +54,7 @@ export async function listEntries(db: Executor, f: EntryListFilter) {
     .limit(f.limit);
 }
 
-export async function countEntriesByStatus(db: Executor, labId: string, status: string) {
+export async function countEntriesByStatus(db: Executor, labId: string, status: EntryStatus) {
   const rows = await db
     .select({ n: sql<number>`count(*)::int` })
     .from(entries)
@@ -131,6 +131,8 @@ export async function listRevisions(db: Executor, entryId: string) {
       title: revisions.title,
       content: revisions.content,
       contentHash: revisions.contentHash,
+      amendsRevisionNumber: revisions.amendsRevisionNumber,
+      amendmentReason: revisions.amendmentReason,
       createdAt: revisions.createdAt,
       authorName: users.name,
     })

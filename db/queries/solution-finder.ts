@@ -1,6 +1,6 @@
 import { and, desc, eq, gte, isNull, lte, sql, type SQL } from "drizzle-orm";
 import type { Executor } from "../client";
-import { entries, revisions, solutions, users } from "../schema";
+import { blockResults, entries, users } from "../schema";
 
 export interface SolutionFinderFilter {
   labId: string;
@@ -16,46 +16,45 @@ export interface SolutionFinderFilter {
   limit: number;
 }
 
-/** Solutions as they stand in each entry's current revision (older revisions are history). */
+/** Solutions as they stand in each entry's current revision: the open block rows. */
 export async function findSolutions(db: Executor, f: SolutionFinderFilter) {
   const where: SQL[] = [
-    eq(solutions.labId, f.labId),
+    eq(blockResults.labId, f.labId),
+    isNull(blockResults.toRevision),
     isNull(entries.archivedAt),
-    sql`${revisions.number} = ${entries.currentRevisionNumber}`,
   ];
   if (f.ionicStrengthMin !== undefined)
-    where.push(gte(solutions.ionicStrengthMolal, f.ionicStrengthMin));
+    where.push(gte(blockResults.ionicStrengthMolal, f.ionicStrengthMin));
   if (f.ionicStrengthMax !== undefined)
-    where.push(lte(solutions.ionicStrengthMolal, f.ionicStrengthMax));
-  if (f.species.length) where.push(sql`${solutions.species} @> ${sql.param(f.species)}::text[]`);
-  if (f.temperatureMin !== undefined) where.push(gte(solutions.temperatureC, f.temperatureMin));
-  if (f.temperatureMax !== undefined) where.push(lte(solutions.temperatureC, f.temperatureMax));
-  if (f.solvent) where.push(eq(solutions.solvent, f.solvent));
+    where.push(lte(blockResults.ionicStrengthMolal, f.ionicStrengthMax));
+  if (f.species.length) where.push(sql`${blockResults.species} @> ${sql.param(f.species)}::text[]`);
+  if (f.temperatureMin !== undefined) where.push(gte(blockResults.temperatureC, f.temperatureMin));
+  if (f.temperatureMax !== undefined) where.push(lte(blockResults.temperatureC, f.temperatureMax));
+  if (f.solvent) where.push(eq(blockResults.solvent, f.solvent));
   if (f.authorId) where.push(eq(entries.authorId, f.authorId));
-  if (f.createdFrom) where.push(gte(solutions.createdAt, f.createdFrom));
-  if (f.createdTo) where.push(lte(solutions.createdAt, f.createdTo));
+  if (f.createdFrom) where.push(gte(blockResults.createdAt, f.createdFrom));
+  if (f.createdTo) where.push(lte(blockResults.createdAt, f.createdTo));
   return db
     .select({
-      id: solutions.id,
-      name: solutions.name,
-      blockId: solutions.blockId,
+      id: blockResults.id,
+      name: blockResults.name,
+      blockId: blockResults.blockId,
       entryId: entries.id,
       entryTitle: entries.title,
-      ionicStrengthMolal: solutions.ionicStrengthMolal,
-      ionicStrengthMolar: solutions.ionicStrengthMolar,
-      debyeLengthNm: solutions.debyeLengthNm,
-      temperatureC: solutions.temperatureC,
-      solvent: solutions.solvent,
-      modelUsed: solutions.modelUsed,
-      species: solutions.species,
+      ionicStrengthMolal: blockResults.ionicStrengthMolal,
+      ionicStrengthMolar: blockResults.ionicStrengthMolar,
+      debyeLengthNm: blockResults.debyeLengthNm,
+      temperatureC: blockResults.temperatureC,
+      solvent: blockResults.solvent,
+      modelUsed: blockResults.modelUsed,
+      species: blockResults.species,
       authorName: users.name,
-      createdAt: solutions.createdAt,
+      createdAt: blockResults.createdAt,
     })
-    .from(solutions)
-    .innerJoin(revisions, eq(revisions.id, solutions.revisionId))
-    .innerJoin(entries, eq(entries.id, solutions.entryId))
+    .from(blockResults)
+    .innerJoin(entries, eq(entries.id, blockResults.entryId))
     .innerJoin(users, eq(users.id, entries.authorId))
     .where(and(...where))
-    .orderBy(desc(solutions.createdAt))
+    .orderBy(desc(blockResults.createdAt))
     .limit(f.limit);
 }

@@ -1,33 +1,103 @@
-import { and, asc, eq, inArray } from "drizzle-orm";
+import { and, asc, eq, gt, inArray, isNull, lte, or } from "drizzle-orm";
 import type { Executor } from "../client";
-import { solutionComponents, solutions } from "../schema";
+import { blockResults, solutionResults } from "../schema";
 
-export async function insertSolutionWithComponents(
+type NewSolutionResult = typeof solutionResults.$inferInsert;
+
+/** Stored results of a lab by their input keys. */
+export async function findResultsByHash(db: Executor, labId: string, hashes: string[]) {
+  if (!hashes.length) return [];
+  return db
+    .select({
+      id: solutionResults.id,
+      inputsHash: solutionResults.inputsHash,
+      name: solutionResults.name,
+      temperatureC: solutionResults.temperatureC,
+      solvent: solutionResults.solvent,
+      modelUsed: solutionResults.modelUsed,
+      ionicStrengthMolal: solutionResults.ionicStrengthMolal,
+      ionicStrengthMolar: solutionResults.ionicStrengthMolar,
+      debyeLengthNm: solutionResults.debyeLengthNm,
+      species: solutionResults.species,
+    })
+    .from(solutionResults)
+    .where(and(eq(solutionResults.labId, labId), inArray(solutionResults.inputsHash, hashes)));
+}
+
+/** Inserts a result unless the lab already has one with its key (a concurrent save may). */
+export async function insertResult(db: Executor, row: NewSolutionResult): Promise<string> {
+  const [inserted] = await db
+    .insert(solutionResults)
+    .values(row)
+    .onConflictDoNothing({ target: [solutionResults.labId, solutionResults.inputsHash] })
+    .returning({ id: solutionResults.id });
+  if (inserted) return inserted.id;
+  const [existing] = await findResultsByHash(db, row.labId, [row.inputsHash]);
+  return existing.id;
+}
+
+/** The entry's open block rows (its current solutions) with the key of each result. */
+export async function openBlockRows(db: Executor, labId: string, entryId: string) {
+  return db
+    .select({
+      id: blockResults.id,
+      blockId: blockResults.blockId,
+      position: blockResults.position,
+      inputsHash: solutionResults.inputsHash,
+    })
+    .from(blockResults)
+    .innerJoin(solutionResults, eq(solutionResults.id, blockResults.resultId))
+    .where(
+      and(
+        eq(blockResults.labId, labId),
+        eq(blockResults.entryId, entryId),
+        isNull(blockResults.toRevision),
+      ),
+    );
+}
+
+export async function insertBlockRows(db: Executor, rows: (typeof blockResults.$inferInsert)[]) {
+  if (rows.length) await db.insert(blockResults).values(rows);
+}
+
+/** Closes open rows at a revision (the only change the database allows on them). */
+export async function closeBlockRows(
   db: Executor,
-  solution: typeof solutions.$inferInsert,
-  components: Omit<typeof solutionComponents.$inferInsert, "solutionId">[],
+  labId: string,
+  ids: string[],
+  toRevision: number,
 ) {
-  const [row] = await db.insert(solutions).values(solution).returning({ id: solutions.id });
-  if (components.length)
-    await db
-      .insert(solutionComponents)
-      .values(components.map((c) => ({ ...c, solutionId: row.id })));
-  return row.id;
+  if (!ids.length) return;
+  await db
+    .update(blockResults)
+    .set({ toRevision })
+    .where(
+      and(
+        eq(blockResults.labId, labId),
+        inArray(blockResults.id, ids),
+        isNull(blockResults.toRevision),
+      ),
+    );
 }
 
-export async function listRevisionSolutions(db: Executor, labId: string, revisionId: string) {
+/** The solutions a revision showed: the block rows whose interval covers it, with results. */
+export async function listRevisionSolutions(
+  db: Executor,
+  labId: string,
+  entryId: string,
+  revisionNumber: number,
+) {
   return db
-    .select()
-    .from(solutions)
-    .where(and(eq(solutions.labId, labId), eq(solutions.revisionId, revisionId)))
-    .orderBy(asc(solutions.createdAt));
-}
-
-export async function listComponentsOf(db: Executor, solutionIds: string[]) {
-  if (!solutionIds.length) return [];
-  return db
-    .select()
-    .from(solutionComponents)
-    .where(inArray(solutionComponents.solutionId, solutionIds))
-    .orderBy(asc(solutionComponents.position));
+    .select({ block: blockResults, result: solutionResults })
+    .from(blockResults)
+    .innerJoin(solutionResults, eq(solutionResults.id, blockResults.resultId))
+    .where(
+      and(
+        eq(blockResults.labId, labId),
+        eq(blockResults.entryId, entryId),
+        lte(blockResults.fromRevision, revisionNumber),
+        or(isNull(blockResults.toRevision), gt(blockResults.toRevision, revisionNumber)),
+      ),
+    )
+    .orderBy(asc(blockResults.position));
 }

@@ -76,3 +76,12 @@ export async function countActiveAdmins(db: Executor, labId: string) {
     .where(and(eq(users.labId, labId), eq(users.role, "admin"), eq(users.active, true)));
   return rows[0]?.n ?? 0;
 }
+
+/** Active supervisors of a lab, by name: who can be asked to review. */
+export async function listLabSupervisors(db: Executor, labId: string) {
+  return db
+    .select({ id: users.id, name: users.name, email: users.email })
+    .from(users)
+    .where(and(eq(users.labId, labId), eq(users.role, "supervisor"), eq(users.active, true)))
+    .orderBy(asc(users.name));
+}

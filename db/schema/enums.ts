@@ -5,11 +5,25 @@
 export const ROLES = ["researcher", "supervisor", "admin"] as const;
 export type Role = (typeof ROLES)[number];
 
-export const ENTRY_STATUSES = ["draft", "submitted", "countersigned", "returned"] as const;
+/**
+ * draft → submitted → countersigned; submitted → returned (editable) → submitted;
+ * countersigned → amended (a new revision with a reason, editable) → submitted → countersigned.
+ */
+export const ENTRY_STATUSES = [
+  "draft",
+  "submitted",
+  "countersigned",
+  "returned",
+  "amended",
+] as const;
 export type EntryStatus = (typeof ENTRY_STATUSES)[number];
 
-export const SIGNATURE_MEANINGS = ["authored", "countersigned", "witnessed"] as const;
+/** What a countersignature means (our wording; labels in lib/contract/vocabulary.ts). */
+export const SIGNATURE_MEANINGS = ["witnessed", "approved", "reviewed"] as const;
 export type SignatureMeaning = (typeof SIGNATURE_MEANINGS)[number];
+
+export const REVIEW_DECISIONS = ["countersigned", "returned"] as const;
+export type ReviewDecision = (typeof REVIEW_DECISIONS)[number];
 
 /** SQL list literal for a CHECK constraint, e.g. `('a','b')`. Values are our own constants. */
 export function sqlList(values: readonly string[]): string {

@@ -11,7 +11,7 @@ import {
   uniqueIndex,
   uuid,
 } from "drizzle-orm/pg-core";
-import { ROLES, sqlList } from "./enums";
+import { ROLES, type Role, sqlList } from "./enums";
 
 const createdAt = () => timestamp("created_at", { withTimezone: true }).notNull().defaultNow();
 
@@ -36,7 +36,7 @@ export const users = pgTable(
     email: text("email").notNull(),
     name: text("name").notNull(),
     passwordHash: text("password_hash").notNull(),
-    role: text("role").notNull(),
+    role: text("role").$type<Role>().notNull(),
     active: boolean("active").notNull().default(true),
     deactivatedAt: timestamp("deactivated_at", { withTimezone: true }),
     createdAt: createdAt(),
@@ -58,7 +58,7 @@ export const invitations = pgTable(
       .notNull()
       .references(() => labs.id, { onDelete: "cascade" }),
     email: text("email").notNull(),
-    role: text("role").notNull(),
+    role: text("role").$type<Role>().notNull(),
     /** SHA-256 of the token in the link; the token itself is only ever in the e-mail. */
     tokenHash: text("token_hash").notNull().unique(),
     invitedById: uuid("invited_by_id")

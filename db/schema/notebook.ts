@@ -10,9 +10,18 @@ import {
   text,
   timestamp,
   unique,
+  uniqueIndex,
   uuid,
 } from "drizzle-orm/pg-core";
-import { ENTRY_STATUSES, SIGNATURE_MEANINGS, sqlList } from "./enums";
+import {
+  ENTRY_STATUSES,
+  type EntryStatus,
+  REVIEW_DECISIONS,
+  type ReviewDecision,
+  SIGNATURE_MEANINGS,
+  type SignatureMeaning,
+  sqlList,
+} from "./enums";
 import { labs, users } from "./labs";
 
 const createdAt = () => timestamp("created_at", { withTimezone: true }).notNull().defaultNow();
@@ -49,13 +58,17 @@ export const entries = pgTable(
       .notNull()
       .references(() => projects.id, { onDelete: "restrict" }),
     title: text("title").notNull(),
-    status: text("status").notNull().default("draft"),
+    status: text("status").$type<EntryStatus>().notNull().default("draft"),
     authorId: uuid("author_id")
       .notNull()
       .references(() => users.id),
     /** Number of the newest revision; 0 before the first save. */
     currentRevisionNumber: integer("current_revision_number").notNull().default(0),
     template: text("template"),
+    /** The newest countersigned revision; null until the first countersignature. */
+    signedRevisionNumber: integer("signed_revision_number"),
+    /** The reason of the amendment in progress (status "amended" or its submission). */
+    amendmentReason: text("amendment_reason"),
     archivedAt: timestamp("archived_at", { withTimezone: true }),
     createdAt: createdAt(),
     updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
@@ -89,19 +102,142 @@ export const revisions = pgTable(
     authorId: uuid("author_id")
       .notNull()
       .references(() => users.id),
+    /** An amendment: the countersigned revision it changes, and why. */
+    amendsRevisionNumber: integer("amends_revision_number"),
+    amendmentReason: text("amendment_reason"),
     createdAt: createdAt(),
   },
   (t) => [
     unique("revisions_entry_number_unique").on(t.entryId, t.number),
+    check(
+      "revisions_amendment_consistent",
+      sql`(${t.amendsRevisionNumber} is null) = (${t.amendmentReason} is null)`,
+    ),
     index("revisions_text_fts_idx").using("gin", sql`to_tsvector('simple', ${t.contentText})`),
     check("revisions_number_positive", sql`${t.number} >= 1`),
     check("revisions_hash_format", sql`${t.contentHash} ~ '^[0-9a-f]{64}$'`),
   ],
 );
 
-/** One row per solution block per revision, recomputed on the server. */
-export const solutions = pgTable(
-  "solutions",
+/**
+ * The server's computation of one solution block's inputs, stored once per distinct content
+ * and engine version: a block that did not change between two saves points at the same row.
+ * Immutable (a trigger refuses UPDATE and DELETE), so a revision shows forever the numbers
+ * that were computed when it was saved.
+ */
+export const solutionResults = pgTable(
+  "solution_results",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    labId: uuid("lab_id")
+      .notNull()
+      .references(() => labs.id, { onDelete: "restrict" }),
+    /** SHA-256 of the canonical { inputs without the block id, engine version }. */
+    inputsHash: text("inputs_hash").notNull(),
+    /** lib/chem's ENGINE_VERSION when this row was computed. */
+    engineVersion: text("engine_version").notNull(),
+    name: text("name").notNull().default(""),
+    temperatureC: doublePrecision("temperature_c").notNull(),
+    solvent: text("solvent").notNull(),
+    modelRequested: text("model_requested").notNull(),
+    modelUsed: text("model_used"),
+    ionicStrengthMolal: doublePrecision("ionic_strength_molal"),
+    ionicStrengthMolar: doublePrecision("ionic_strength_molar"),
+    debyeLengthNm: doublePrecision("debye_length_nm"),
+    /** Species formulas (components, ions, salts) for the solution finder. */
+    species: text("species")
+      .array()
+      .notNull()
+      .default(sql`'{}'::text[]`),
+    /** Molality (mol/kg) of every ion, for the composition distance of "similar solutions". */
+    composition: jsonb("composition").$type<Record<string, number>>().notNull().default({}),
+    /** The engine's full result, or its error when the inputs were impossible. */
+    results: jsonb("results").$type<Record<string, unknown>>().notNull(),
+    inputs: jsonb("inputs").$type<Record<string, unknown>>().notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [
+    unique("solution_results_lab_inputs_unique").on(t.labId, t.inputsHash),
+    check("solution_results_hash_format", sql`${t.inputsHash} ~ '^[0-9a-f]{64}$'`),
+    check(
+      "solution_results_ionic_strength_nonnegative",
+      sql`${t.ionicStrengthMolal} is null or ${t.ionicStrengthMolal} >= 0`,
+    ),
+  ],
+);
+
+/**
+ * Which result a solution block of an entry showed, from one revision up to (not including)
+ * another: `[fromRevision, toRevision)`, open-ended while the block is current. A save writes
+ * a row only for a block that is new or changed, and closes the row of a block that changed
+ * or left the document; an unchanged block costs nothing. The rows with `to_revision IS NULL`
+ * are the entry's current solutions, which the solution finder searches (partial indexes).
+ * Finder fields are copied from the result so that search never joins through history.
+ * A trigger refuses DELETE and every UPDATE except closing an open row once.
+ */
+export const blockResults = pgTable(
+  "block_results",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    labId: uuid("lab_id")
+      .notNull()
+      .references(() => labs.id, { onDelete: "restrict" }),
+    entryId: uuid("entry_id")
+      .notNull()
+      .references(() => entries.id, { onDelete: "restrict" }),
+    blockId: text("block_id").notNull(),
+    resultId: uuid("result_id")
+      .notNull()
+      .references(() => solutionResults.id, { onDelete: "restrict" }),
+    fromRevision: integer("from_revision").notNull(),
+    toRevision: integer("to_revision"),
+    /** Position of the block among the entry's solution blocks when this row was written. */
+    position: integer("position").notNull(),
+    name: text("name").notNull().default(""),
+    temperatureC: doublePrecision("temperature_c").notNull(),
+    solvent: text("solvent").notNull(),
+    modelUsed: text("model_used"),
+    ionicStrengthMolal: doublePrecision("ionic_strength_molal"),
+    ionicStrengthMolar: doublePrecision("ionic_strength_molar"),
+    debyeLengthNm: doublePrecision("debye_length_nm"),
+    species: text("species")
+      .array()
+      .notNull()
+      .default(sql`'{}'::text[]`),
+    createdAt: createdAt(),
+  },
+  (t) => [
+    unique("block_results_entry_block_from_unique").on(t.entryId, t.blockId, t.fromRevision),
+    index("block_results_entry_idx").on(t.entryId, t.fromRevision),
+    index("block_results_current_ionic_strength_idx")
+      .on(t.labId, t.ionicStrengthMolal)
+      .where(sql`${t.toRevision} is null`),
+    index("block_results_current_ionic_strength_molar_idx")
+      .on(t.labId, t.ionicStrengthMolar)
+      .where(sql`${t.toRevision} is null`),
+    index("block_results_current_species_idx")
+      .using("gin", t.species)
+      .where(sql`${t.toRevision} is null`),
+    index("block_results_current_created_idx")
+      .on(t.labId, t.createdAt)
+      .where(sql`${t.toRevision} is null`),
+    index("block_results_lab_ionic_strength_idx").on(t.labId, t.ionicStrengthMolal),
+    check("block_results_from_positive", sql`${t.fromRevision} >= 1`),
+    check(
+      "block_results_interval_valid",
+      sql`${t.toRevision} is null or ${t.toRevision} > ${t.fromRevision}`,
+    ),
+  ],
+);
+
+/**
+ * A countersignature: an electronic signature of one revision by a supervisor who re-entered
+ * their password. It records the SHA-256 of the revision's signed content (title, document
+ * and the hashes of its attachments), so the record can be verified later. Immutable; one
+ * countersignature per revision (the unique constraint makes concurrent signing safe).
+ */
+export const signatures = pgTable(
+  "signatures",
   {
     id: uuid("id").primaryKey().defaultRandom(),
     labId: uuid("lab_id")
@@ -113,78 +249,68 @@ export const solutions = pgTable(
     revisionId: uuid("revision_id")
       .notNull()
       .references(() => revisions.id, { onDelete: "restrict" }),
-    blockId: text("block_id").notNull(),
-    name: text("name").notNull().default(""),
-    temperatureC: doublePrecision("temperature_c").notNull(),
-    solvent: text("solvent").notNull(),
-    modelRequested: text("model_requested").notNull(),
-    modelUsed: text("model_used"),
-    ionicStrengthMolal: doublePrecision("ionic_strength_molal"),
-    ionicStrengthMolar: doublePrecision("ionic_strength_molar"),
-    debyeLengthNm: doublePrecision("debye_length_nm"),
-    /** Species formulas (salts and ions) for the solution finder (GIN). */
-    species: text("species")
-      .array()
-      .notNull()
-      .default(sql`'{}'::text[]`),
-    /** The engine's full result, or its error when the inputs were impossible. */
-    results: jsonb("results").$type<Record<string, unknown>>().notNull(),
-    inputs: jsonb("inputs").$type<Record<string, unknown>>().notNull(),
-    createdAt: createdAt(),
-  },
-  (t) => [
-    unique("solutions_revision_block_unique").on(t.revisionId, t.blockId),
-    index("solutions_ionic_strength_idx").on(t.ionicStrengthMolal),
-    index("solutions_species_idx").using("gin", t.species),
-    index("solutions_temperature_idx").on(t.temperatureC),
-    index("solutions_lab_created_idx").on(t.labId, t.createdAt),
-    check(
-      "solutions_ionic_strength_nonnegative",
-      sql`${t.ionicStrengthMolal} is null or ${t.ionicStrengthMolal} >= 0`,
-    ),
-  ],
-);
-
-export const solutionComponents = pgTable(
-  "solution_components",
-  {
-    id: uuid("id").primaryKey().defaultRandom(),
-    solutionId: uuid("solution_id")
-      .notNull()
-      .references(() => solutions.id, { onDelete: "cascade" }),
-    position: integer("position").notNull(),
-    formula: text("formula").notNull(),
-    amount: doublePrecision("amount").notNull(),
-    unit: text("unit").notNull(),
-    perAmount: doublePrecision("per_amount"),
-    perUnit: text("per_unit"),
-    molality: doublePrecision("molality"),
-    molarity: doublePrecision("molarity"),
-  },
-  (t) => [
-    unique("solution_components_position_unique").on(t.solutionId, t.position),
-    index("solution_components_formula_idx").on(t.formula),
-  ],
-);
-
-export const signatures = pgTable(
-  "signatures",
-  {
-    id: uuid("id").primaryKey().defaultRandom(),
-    revisionId: uuid("revision_id")
-      .notNull()
-      .references(() => revisions.id, { onDelete: "restrict" }),
+    revisionNumber: integer("revision_number").notNull(),
     signerId: uuid("signer_id")
       .notNull()
       .references(() => users.id),
-    meaning: text("meaning").notNull(),
+    /** The signer's name as it was when they signed (the manifest never changes). */
+    signerName: text("signer_name").notNull(),
+    meaning: text("meaning").$type<SignatureMeaning>().notNull(),
     contentHash: text("content_hash").notNull(),
     comment: text("comment").notNull().default(""),
+    /** Server clock, UTC. */
     signedAt: timestamp("signed_at", { withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [
-    index("signatures_revision_idx").on(t.revisionId),
+    unique("signatures_revision_unique").on(t.revisionId),
+    index("signatures_entry_idx").on(t.entryId),
     check("signatures_meaning_valid", sql.raw(`meaning in ${sqlList(SIGNATURE_MEANINGS)}`)),
+    check("signatures_hash_format", sql`${t.contentHash} ~ '^[0-9a-f]{64}$'`),
+  ],
+);
+
+/**
+ * One request for review: opened when the author submits a revision, closed when a
+ * supervisor countersigns or returns it. At most one is open per entry.
+ */
+export const reviewRequests = pgTable(
+  "review_requests",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    labId: uuid("lab_id")
+      .notNull()
+      .references(() => labs.id, { onDelete: "restrict" }),
+    entryId: uuid("entry_id")
+      .notNull()
+      .references(() => entries.id, { onDelete: "restrict" }),
+    revisionNumber: integer("revision_number").notNull(),
+    submittedById: uuid("submitted_by_id")
+      .notNull()
+      .references(() => users.id),
+    /** The supervisor asked to review; null: any supervisor of the lab. */
+    reviewerId: uuid("reviewer_id").references(() => users.id),
+    submittedAt: timestamp("submitted_at", { withTimezone: true }).notNull().defaultNow(),
+    decision: text("decision").$type<ReviewDecision>(),
+    decidedById: uuid("decided_by_id").references(() => users.id),
+    decidedAt: timestamp("decided_at", { withTimezone: true }),
+    /** The return comment (required) or the countersignature's comment. */
+    comment: text("comment").notNull().default(""),
+  },
+  (t) => [
+    uniqueIndex("review_requests_one_open_per_entry")
+      .on(t.entryId)
+      .where(sql`${t.decision} is null`),
+    index("review_requests_lab_open_idx")
+      .on(t.labId)
+      .where(sql`${t.decision} is null`),
+    check(
+      "review_requests_decision_valid",
+      sql.raw(`decision is null or decision in ${sqlList(REVIEW_DECISIONS)}`),
+    ),
+    check(
+      "review_requests_decision_consistent",
+      sql`(${t.decision} is null) = (${t.decidedAt} is null) and (${t.decision} is null) = (${t.decidedById} is null)`,
+    ),
   ],
 );
 
@@ -239,8 +365,9 @@ export const species = pgTable(
 export type Project = typeof projects.$inferSelect;
 export type Entry = typeof entries.$inferSelect;
 export type Revision = typeof revisions.$inferSelect;
-export type Solution = typeof solutions.$inferSelect;
-export type SolutionComponent = typeof solutionComponents.$inferSelect;
+export type SolutionResultRow = typeof solutionResults.$inferSelect;
+export type BlockResult = typeof blockResults.$inferSelect;
+export type ReviewRequest = typeof reviewRequests.$inferSelect;
 export type Signature = typeof signatures.$inferSelect;
 export type Attachment = typeof attachments.$inferSelect;
 export type SpeciesAddition = typeof species.$inferSelect;

@@ -1,12 +1,12 @@
 import { relations } from "drizzle-orm";
 import { auditEvents, invitations, labs, users } from "./labs";
 import {
+  blockResults,
   entries,
   projects,
   revisions,
   signatures,
-  solutionComponents,
-  solutions,
+  solutionResults,
 } from "./notebook";
 
 export const labsRelations = relations(labs, ({ many }) => ({
@@ -41,17 +41,15 @@ export const entriesRelations = relations(entries, ({ one, many }) => ({
 export const revisionsRelations = relations(revisions, ({ one, many }) => ({
   entry: one(entries, { fields: [revisions.entryId], references: [entries.id] }),
   author: one(users, { fields: [revisions.authorId], references: [users.id] }),
-  solutions: many(solutions),
   signatures: many(signatures),
 }));
 
-export const solutionsRelations = relations(solutions, ({ one, many }) => ({
-  revision: one(revisions, { fields: [solutions.revisionId], references: [revisions.id] }),
-  components: many(solutionComponents),
-}));
-
-export const solutionComponentsRelations = relations(solutionComponents, ({ one }) => ({
-  solution: one(solutions, { fields: [solutionComponents.solutionId], references: [solutions.id] }),
+export const blockResultsRelations = relations(blockResults, ({ one }) => ({
+  entry: one(entries, { fields: [blockResults.entryId], references: [entries.id] }),
+  result: one(solutionResults, {
+    fields: [blockResults.resultId],
+    references: [solutionResults.id],
+  }),
 }));
 
 export const signaturesRelations = relations(signatures, ({ one }) => ({

@@ -8,6 +8,8 @@ import { NumberField } from "../ui/number-field";
 import { SafetyCaution } from "../ui/safety-caution";
 import { SelectField } from "../ui/select-field";
 import { computeCellPotential } from "@/lib/document/evaluate-cell-block";
+import { evaluationFromStored } from "@/lib/document/stored-evaluation";
+import { useStoredSolution } from "../stored-results";
 
 interface CellPotentialProps {
   cell: CellBlockInput;
@@ -18,7 +20,17 @@ interface CellPotentialProps {
 
 /** Couple choice and the computed equilibrium potential, against the reference and against SHE. */
 export function CellPotential({ cell, electrolyte, editable, onChange }: CellPotentialProps) {
-  const potential = useMemo(() => computeCellPotential(cell, electrolyte), [cell, electrolyte]);
+  // A saved revision uses the activities stored with its electrolyte, not today's engine.
+  const stored = useStoredSolution(electrolyte?.blockId);
+  const potential = useMemo(
+    () =>
+      computeCellPotential(
+        cell,
+        electrolyte,
+        stored && electrolyte && !editable ? evaluationFromStored(electrolyte, stored) : undefined,
+      ),
+    [cell, electrolyte, stored, editable],
+  );
   const couples = coupleOptions();
   const needsPh = cell.referenceElectrode.type === "RHE";
   const phError =
@@ -52,29 +64,31 @@ export function CellPotential({ cell, electrolyte, editable, onChange }: CellPot
         ) : null}
       </div>
       {potential.status === "ok" ? (
-        <dl className="grid grid-cols-2 gap-3 sm:grid-cols-3" aria-live="polite">
-          <div className="rounded-md border border-lagoon-100 bg-lagoon-50/60 px-3 py-1.5">
-            <dt className="text-xs font-medium text-ink-soft">
-              E vs {referenceElectrodeLabel(potential.reference)}
-            </dt>
-            <dd
-              className="font-mono text-base text-lagoon-700 tabular-nums"
-              data-testid="potential-vs-reference"
-            >
-              {formatPotentialV(potential.vsReference)}{" "}
-              <span className="font-sans text-xs text-ink-soft">V</span>
-            </dd>
-          </div>
-          <div className="rounded-md border border-lagoon-100 bg-lagoon-50/60 px-3 py-1.5">
-            <dt className="text-xs font-medium text-ink-soft">E vs SHE</dt>
-            <dd
-              className="font-mono text-base text-lagoon-700 tabular-nums"
-              data-testid="potential-vs-she"
-            >
-              {formatPotentialV(potential.vsShe)}{" "}
-              <span className="font-sans text-xs text-ink-soft">V</span>
-            </dd>
-          </div>
+        <div className="grid grid-cols-2 gap-3 sm:grid-cols-3" aria-live="polite">
+          <dl className="contents">
+            <div className="rounded-md border border-lagoon-100 bg-lagoon-50/60 px-3 py-1.5">
+              <dt className="text-xs font-medium text-ink-soft">
+                E vs {referenceElectrodeLabel(potential.reference)}
+              </dt>
+              <dd
+                className="font-mono text-base text-lagoon-700 tabular-nums"
+                data-testid="potential-vs-reference"
+              >
+                {formatPotentialV(potential.vsReference)}{" "}
+                <span className="font-sans text-xs text-ink-soft">V</span>
+              </dd>
+            </div>
+            <div className="rounded-md border border-lagoon-100 bg-lagoon-50/60 px-3 py-1.5">
+              <dt className="text-xs font-medium text-ink-soft">E vs SHE</dt>
+              <dd
+                className="font-mono text-base text-lagoon-700 tabular-nums"
+                data-testid="potential-vs-she"
+              >
+                {formatPotentialV(potential.vsShe)}{" "}
+                <span className="font-sans text-xs text-ink-soft">V</span>
+              </dd>
+            </div>
+          </dl>
           <p className="col-span-2 self-center text-xs text-ink-soft sm:col-span-1">
             {potential.reaction}, E° = {formatPotentialV(potential.standardPotentialV)} V vs SHE.
             Nernst equation at {potential.temperatureC} °C with the activities computed for the
@@ -87,7 +101,7 @@ export function CellPotential({ cell, electrolyte, editable, onChange }: CellPot
               ))}
             </ul>
           ) : null}
-        </dl>
+        </div>
       ) : potential.status === "error" &&
         potential.field !== "couple" &&
         potential.field !== "pH" ? (

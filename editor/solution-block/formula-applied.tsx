@@ -14,10 +14,12 @@ export function FormulaApplied({ result }: { result: SolutionResult }) {
       <figcaption className="mb-1 text-[11px] font-medium tracking-wide text-ink-soft uppercase">
         Formula applied — {result.model.label}
       </figcaption>
-      <div className="overflow-x-auto text-ink">
-        {result.formulaTexGeneral ? <Tex tex={result.formulaTexGeneral} display /> : null}
+      {/* Long equations (Pitzer's) wrap at their + and = signs instead of running out of the
+          box: KaTeX breaks lines only in inline mode, so they are set inline in display style. */}
+      <div className="space-y-1 text-ink">
+        {result.formulaTexGeneral ? <Tex tex={result.formulaTexGeneral} wrap /> : null}
         {result.formulaTex && result.formulaTex !== result.formulaTexGeneral ? (
-          <Tex tex={result.formulaTex} display className="text-lagoon-700" />
+          <Tex tex={result.formulaTex} wrap className="text-lagoon-700" />
         ) : null}
       </div>
       <p className="mt-1 font-mono text-xs text-ink-soft tabular-nums">

@@ -8,6 +8,9 @@ import { evaluateSolutionBlockCached } from "@/lib/document/evaluate-solution-bl
 import { NO_MESSAGES, type FieldMessages } from "./field-messages";
 import { SolutionResults } from "./solution-results";
 import { SolutionSettings } from "./solution-settings";
+import { StoredNotice } from "./stored-notice";
+import { useStoredSolution } from "../stored-results";
+import { describeEngineChange, evaluationFromStored } from "@/lib/document/stored-evaluation";
 
 interface SolutionBlockPanelProps {
   value: SolutionBlockInput;
@@ -20,7 +23,18 @@ interface SolutionBlockPanelProps {
  * node's attributes in and writes changes back with updateAttributes.
  */
 export function SolutionBlockPanel({ value, onChange, editable = true }: SolutionBlockPanelProps) {
-  const evaluation = useMemo(() => evaluateSolutionBlockCached(value), [value]);
+  const stored = useStoredSolution(value.blockId);
+  const live = useMemo(() => evaluateSolutionBlockCached(value), [value]);
+  // A saved revision shows its stored numbers; today's engine is asked only to compare.
+  const showStored = stored !== null && !editable;
+  const evaluation = useMemo(
+    () => (showStored ? evaluationFromStored(value, stored) : live),
+    [showStored, stored, value, live],
+  );
+  const engineChanges = useMemo(
+    () => (showStored ? describeEngineChange(evaluation, live) : []),
+    [showStored, evaluation, live],
+  );
   const errors: FieldMessages = useMemo(
     () =>
       evaluation.status === "error" && evaluation.field
@@ -76,7 +90,8 @@ export function SolutionBlockPanel({ value, onChange, editable = true }: Solutio
           editable={editable}
           onChange={(components) => patch({ components })}
         />
-        <div className="border-t border-dashed border-ink-faint/40 pt-3">
+        <div className="space-y-3 border-t border-dashed border-ink-faint/40 pt-3">
+          {showStored ? <StoredNotice stored={stored} engineChanges={engineChanges} /> : null}
           <SolutionResults
             evaluation={evaluation}
             formulas={formulas}

@@ -5,7 +5,7 @@ import { actionButtonClass } from "../ui/field-styles";
 import { SafetyCaution } from "../ui/safety-caution";
 import { hazardNotesFor } from "../chem-catalogue";
 import type { SolutionComponentInput } from "@/lib/document/block-schemas";
-import type { SolutionEvaluation } from "@/lib/document/evaluate-solution-block";
+import type { SolutionEvaluation, SolutionResult } from "@/lib/document/evaluate-solution-block";
 import { ChargeBalanceOffer } from "./charge-balance-offer";
 import { ComponentResults } from "./component-results";
 import { describeField } from "./describe-field";
@@ -33,6 +33,10 @@ export function SolutionResults({ evaluation, formulas, onAddComponent }: Soluti
     formulas,
     evaluation.status === "ok" ? evaluation.result : undefined,
   );
+
+  // Results stored by an engine before 2026.12.2 carry no density or charge balance.
+  const { density, chargeBalance } =
+    evaluation.status === "ok" ? (evaluation.result as Partial<SolutionResult>) : {};
 
   if (evaluation.status === "empty") {
     return (
@@ -65,15 +69,14 @@ export function SolutionResults({ evaluation, formulas, onAddComponent }: Soluti
             tone="validity"
             messages={evaluation.result.modelChange ? [evaluation.result.modelChange] : []}
           />
-          <p className="text-xs text-ink-soft" data-testid="density-used">
-            <span className="font-medium text-ink">Density:</span> {evaluation.result.density.label}
-          </p>
-          {evaluation.result.chargeBalance.balanced ? null : (
-            <ChargeBalanceOffer
-              offers={evaluation.result.chargeBalance.offers}
-              onAdd={onAddComponent}
-            />
-          )}
+          {density ? (
+            <p className="text-xs text-ink-soft" data-testid="density-used">
+              <span className="font-medium text-ink">Density:</span> {density.label}
+            </p>
+          ) : null}
+          {chargeBalance && !chargeBalance.balanced ? (
+            <ChargeBalanceOffer offers={chargeBalance.offers} onAdd={onAddComponent} />
+          ) : null}
           <div className="grid gap-4 overflow-x-auto xl:grid-cols-[3fr_2fr]">
             <IonTable result={evaluation.result} />
             <SaltList result={evaluation.result} />

@@ -25,7 +25,6 @@ export function ToolbarButton({
   return (
     <button
       type="button"
-      aria-label={label}
       aria-pressed={active === undefined ? undefined : active}
       title={shortcut ? `${label} (${shortcut})` : label}
       disabled={disabled}
@@ -42,7 +41,12 @@ export function ToolbarButton({
             : "text-ink-soft hover:bg-paper-deep hover:text-ink",
       )}
     >
-      {children}
+      {/* The glyph is what sighted users read; the name is the words (so "H2" is announced
+          as "Heading 2" without a label that contradicts the visible text). */}
+      <span aria-hidden className="contents">
+        {children}
+      </span>
+      <span className="sr-only">{label}</span>
     </button>
   );
 }

@@ -44,8 +44,13 @@ export function NumberField({
   // Follow outside changes (undo, a template) without fighting the person typing: the
   // text is replaced only when it no longer reads as the stored value.
   useEffect(() => {
-    if (parseTypedNumber(text) !== (value ?? null))
-      setText(value === null || value === undefined ? "" : String(value));
+    setText((current) =>
+      parseTypedNumber(current) !== (value ?? null)
+        ? value === null || value === undefined
+          ? ""
+          : String(value)
+        : current,
+    );
   }, [value]);
   const typed = parseTypedNumber(text);
   const unparsable = text.trim() !== "" && typed === null;

@@ -1,4 +1,4 @@
-/** The general caution DESIGN.md asks of every screen that gives a recipe or a potential. */
+/** The general caution shown on every screen that gives a recipe or a potential. */
 export function SafetyCaution() {
   return (
     <p className="text-xs leading-snug text-ink-soft">

@@ -1,32 +1,45 @@
 "use client";
 
-import katex from "katex";
-import { useMemo } from "react";
+import { BlockMath, InlineMath } from "react-katex";
 
 /**
- * TeX rendered with KaTeX. `trust: false` and `throwOnError: false`: a typo shows in red in
- * place instead of breaking the block, and no TeX command can emit links or HTML.
+ * TeX rendered by KaTeX through react-katex. KaTeX's defaults keep `trust` off, so no TeX
+ * command can emit links or HTML; a typo shows in red in place instead of breaking the block.
  */
 export function Tex({
   tex,
   display = false,
+  wrap = false,
   className,
 }: {
   tex: string;
   display?: boolean;
+  /** A block that breaks at its + and = signs when it is wider than its box. */
+  wrap?: boolean;
   className?: string;
 }) {
-  const html = useMemo(
-    () =>
-      katex.renderToString(tex, {
-        displayMode: display,
-        throwOnError: false,
-        trust: false,
-        strict: "ignore",
-        output: "htmlAndMathml",
-      }),
-    [tex, display],
+  const renderError = (error: Error) => (
+    <span className="font-mono text-xs text-red-700" title={error.message}>
+      {tex}
+    </span>
   );
-  const Tag = display ? "div" : "span";
-  return <Tag className={className} dangerouslySetInnerHTML={{ __html: html }} />;
+  if (wrap) {
+    return (
+      <div className={`leading-loose ${className ?? ""}`}>
+        <InlineMath math={`\\displaystyle ${tex}`} renderError={renderError} />
+      </div>
+    );
+  }
+  if (display) {
+    return (
+      <div className={className}>
+        <BlockMath math={tex} renderError={renderError} />
+      </div>
+    );
+  }
+  return (
+    <span className={className}>
+      <InlineMath math={tex} renderError={renderError} />
+    </span>
+  );
 }

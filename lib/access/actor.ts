@@ -1,13 +1,12 @@
 import "server-only";
 import { cache } from "react";
 import { findUserById } from "@/db/queries/users";
-import type { Role } from "@/db/schema/enums";
 import { auth } from "@/lib/auth";
 import { AppError } from "@/lib/errors";
 import { getDb } from "@/lib/server/database";
-import type { Actor } from "./authorize";
+import type { Actor } from "@/lib/rules/authorize";
 
-export { assertCan, type Actor } from "./authorize";
+export { assertCan, type Actor } from "@/lib/rules/authorize";
 
 /** Resolves a session user id to an Actor; null when the member is unknown or deactivated. */
 export async function actorForUserId(userId: string): Promise<Actor | null> {
@@ -16,7 +15,7 @@ export async function actorForUserId(userId: string): Promise<Actor | null> {
   return {
     userId: user.id,
     labId: user.labId,
-    role: user.role as Role,
+    role: user.role,
     name: user.name,
     email: user.email,
   };

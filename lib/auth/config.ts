@@ -4,7 +4,7 @@ import type { NextAuthConfig } from "next-auth";
  * The part of the Auth.js configuration that needs no database or native module, shared
  * by proxy.ts (optimistic redirects only) and the full configuration in ./index.ts.
  */
-export const PUBLIC_PATHS = ["/sign-in", "/invitations", "/api/auth", "/api/health"];
+const PUBLIC_PATHS = ["/sign-in", "/invitations", "/api/auth", "/api/health"];
 
 export const authConfig = {
   pages: { signIn: "/sign-in" },
@@ -24,7 +24,7 @@ export const authConfig = {
     session({ session, token }) {
       // Display hints only: the server reloads the member from the database for every
       // decision (lib/auth/session.ts), so a role change or deactivation takes effect at once.
-      session.user.id = String(token.uid ?? "");
+      session.user.id = typeof token.uid === "string" ? token.uid : "";
       (session.user as { labId?: string }).labId = token.labId as string | undefined;
       (session.user as { role?: string }).role = token.role as string | undefined;
       return session;

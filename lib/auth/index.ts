@@ -5,7 +5,7 @@ import { getDb } from "@/lib/server/database";
 import { authConfig } from "./config";
 import { verifyCredentials } from "./verify-credentials";
 
-export class ThrottledSignIn extends CredentialsSignin {
+class ThrottledSignIn extends CredentialsSignin {
   code = "throttled";
 }
 

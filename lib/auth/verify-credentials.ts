@@ -1,5 +1,6 @@
 import "server-only";
 import type { Database } from "@/db/client";
+import { insertAuditEvent } from "@/db/queries/audit";
 import { findUserByEmail } from "@/db/queries/users";
 import { recentSignInAttempts, recordSignInAttempt } from "@/db/queries/sign-in-attempts";
 import { signInSchema } from "@/lib/validation/auth";
@@ -27,15 +28,28 @@ export async function verifyCredentials(
 
   const attempts = await recentSignInAttempts(db, email, new Date(now.getTime() - WINDOW_MS));
   const decision = throttleDecision(attempts, now);
-  if (!decision.allowed)
-    return { kind: "throttled", retryAfterSeconds: decision.retryAfterSeconds };
-
   const user = await findUserByEmail(db, email);
+  // The audit trail of a known member's lab records every attempt (never the password).
+  const audit = (action: string, details: Record<string, unknown> = {}) =>
+    insertAuditEvent(db, {
+      labId: user?.labId ?? null,
+      actorId: user?.id ?? null,
+      action,
+      targetType: "user",
+      targetId: user?.id ?? null,
+      details: { email, ...details },
+    });
+  if (!decision.allowed) {
+    await audit("auth.sign_in_throttled", { retryAfterSeconds: decision.retryAfterSeconds });
+    return { kind: "throttled", retryAfterSeconds: decision.retryAfterSeconds };
+  }
+
   const passwordOk = user
     ? await verifyPassword(user.passwordHash, password)
     : await verifyDecoy(password);
   const ok = Boolean(user && passwordOk && user.active);
   await recordSignInAttempt(db, email, ok);
+  await audit(ok ? "auth.signed_in" : "auth.sign_in_failed");
   if (!ok || !user) return { kind: "invalid" };
   return {
     kind: "ok",

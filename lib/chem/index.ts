@@ -1,4 +1,5 @@
 /** Public API of the electrolyte engine (see docs/architecture.md, "The computation contract"). */
+export { ENGINE_VERSION } from "./version";
 export { ChemInputError, isChemInputError } from "./errors";
 export { parseFormula, molarMass } from "./formula";
 export type { ParsedFormula, Composition } from "./formula";
@@ -55,3 +56,49 @@ export type {
   ActivityConvention,
   BufferSystemId,
 } from "./acid-base";
+export { FARADAY_C_PER_MOL, GAS_CONSTANT_J_PER_MOL_K } from "./constants";
+export { waterViscosityMPaS } from "./solvents/water-viscosity";
+export {
+  limitingIonicConductivity,
+  listIonicConductivities,
+  conductivityTemperatureRatio,
+} from "./electrochem/ionic-conductivity";
+export type { LimitingConductivity } from "./electrochem/ionic-conductivity";
+export {
+  electrolyteConductivity,
+  onsagerCoefficients,
+  CONDUCTIVITY_METHOD,
+} from "./electrochem/electrolyte-conductivity";
+export type {
+  IonConcentration,
+  ElectrolyteConductivityInput,
+  ElectrolyteConductivityResult,
+} from "./electrochem/electrolyte-conductivity";
+export {
+  liquidJunctionPotential,
+  junctionCorrectedPotential,
+} from "./electrochem/junction-potential";
+export type {
+  JunctionPotentialInput,
+  JunctionPotentialResult,
+} from "./electrochem/junction-potential";
+export { referenceFillingSolution } from "./electrochem/reference-fillings";
+export { uncompensatedResistanceDisk, iRDrop } from "./electrochem/uncompensated-resistance";
+export { listRedoxProbes, findRedoxProbe, diffusionCoefficient } from "./electrochem/redox-probes";
+export type {
+  RedoxProbe,
+  RedoxProbeId,
+  DiffusionCoefficientResult,
+} from "./electrochem/redox-probes";
+export {
+  randlesSevcikPeakCurrent,
+  reversiblePeakSeparationV,
+  expectedPeakCurrent,
+} from "./electrochem/peak-current";
+export type {
+  RandlesSevcikInput,
+  ExpectedPeakInput,
+  ExpectedPeak,
+} from "./electrochem/peak-current";
+export { judgeVoltammogram } from "./electrochem/judge-voltammogram";
+export type { JudgeVoltammogramInput, VoltammogramVerdict } from "./electrochem/judge-voltammogram";

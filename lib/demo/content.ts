@@ -1,11 +1,12 @@
 import "server-only";
 import { eq } from "drizzle-orm";
 import { users } from "@/db/schema";
-import type { Role } from "@/db/schema/enums";
-import type { Actor } from "@/lib/access/authorize";
+import type { Actor } from "@/lib/rules/authorize";
 import { defaultCellBlockInput, defaultSolutionBlockInput } from "@/lib/document/block-defaults";
 import type { SolutionBlockInput } from "@/lib/document/block-schemas";
-import { createEntry, submitEntry } from "@/lib/notebook/entries";
+import { createEntry } from "@/lib/notebook/entries";
+import { countersignEntry, returnEntry, startAmendment, submitEntry } from "@/lib/notebook/review";
+import { DEMO_PASSWORD } from "./scenario";
 import { saveEntryContent } from "@/lib/notebook/save-entry";
 import { listProjects } from "@/lib/projects/service";
 import { getDb } from "@/lib/server/database";
@@ -29,7 +30,7 @@ async function actorsOf(labId: string): Promise<Record<string, Actor>> {
   return Object.fromEntries(
     rows.map((u) => [
       u.email,
-      { userId: u.id, labId: u.labId, role: u.role as Role, name: u.name, email: u.email },
+      { userId: u.id, labId: u.labId, role: u.role, name: u.name, email: u.email },
     ]),
   );
 }
@@ -66,13 +67,54 @@ async function saltmarsh(labId: string) {
   const a = await actorsOf(labId);
   const tobin = a["tobin.bench@saltmarsh.example"];
   const mira = a["mira.bench@saltmarsh.example"];
+  const odile = a["odile.pi@saltmarsh.example"];
 
-  await write(
+  const copperBath = defaultSolutionBlockInput({
+    name: "0.1 mol/kg NaCl with 1 mmol/kg CuCl₂",
+    components: [
+      { formula: "NaCl", amount: 0.1, unit: "mol/kg" },
+      { formula: "CuCl2·2H2O", amount: 0.001, unit: "mol/kg" },
+    ],
+  });
+  const copperCell = defaultCellBlockInput({
+    name: "Cu disc, three-electrode cell",
+    electrolyteBlockId: copperBath.blockId,
+    couple: "Cu2+/Cu",
+    workingElectrode: {
+      material: "copper disc (99.99 %)",
+      areaCm2: 0.196,
+      pretreatment: ["SiC 1200 then 2400 grit", "rinse in water and ethanol, dry under N₂"],
+    },
+    counterElectrode: { material: "Pt mesh", areaCm2: null, pretreatment: [] },
+    referenceElectrode: {
+      material: "saturated calomel",
+      areaCm2: null,
+      pretreatment: [],
+      type: "SCE",
+    },
+    purgeMinutes: 20,
+    instrument: "bench potentiostat A",
+    channel: "1",
+  });
+  const copperRun = await write(
     tobin,
     "Copper corrosion in chloride media",
-    "Cu disc in 0.1 m NaCl — polarisation run 1",
-    { template: "cell-preparation" },
+    "Cu disc in 0.1 m NaCl with 1 mM CuCl₂ — polarisation run 1",
+    [
+      heading("Electrolyte"),
+      solution(copperBath),
+      heading("Cell"),
+      { type: "cellBlock", attrs: copperCell },
+      paragraph(
+        "Open-circuit potential for 30 min, then a slow linear sweep from −250 mV to +250 mV about it at 0.167 mV/s.",
+      ),
+    ],
+    true,
   );
+  await returnEntry(odile, copperRun, {
+    revision: 1,
+    comment: "Record the grit paper lot and the drift you accepted before starting the sweep.",
+  });
 
   const mixed = defaultSolutionBlockInput({
     name: "Chloride–sulfate mix, I ≈ 0.3",
@@ -81,7 +123,7 @@ async function saltmarsh(labId: string) {
       { formula: "Na2SO4", amount: 0.0667, unit: "mol/kg" },
     ],
   });
-  await write(
+  const mixedEntry = await write(
     tobin,
     "Copper corrosion in chloride media",
     "Mixed chloride–sulfate electrolyte at I = 0.3 mol/kg",
@@ -95,6 +137,12 @@ async function saltmarsh(labId: string) {
     ],
     true,
   );
+  await countersignEntry(odile, mixedEntry, {
+    revision: 1,
+    password: DEMO_PASSWORD,
+    meaning: "approved",
+    comment: "Masses agree with the balance printout.",
+  });
 
   const redox = defaultSolutionBlockInput({
     name: "Ferri/ferro 5 mM in 1 M KCl",
@@ -133,13 +181,45 @@ async function saltmarsh(labId: string) {
       "Hexacyanoferrates release hydrogen cyanide with strong acid: keep acids away from these solutions.",
     ),
   ]);
-  await write(
+  const filling = defaultSolutionBlockInput({
+    name: "3 mol/L KCl filling solution",
+    temperatureC: 22,
+    components: [{ formula: "KCl", amount: 22.37, unit: "g", perAmount: 100, perUnit: "mL" }],
+  });
+  const fillingNodes = (flaskMl: number) => [
+    heading("Recipe"),
+    paragraph(
+      `22.37 g KCl (dried 2 h at 110 °C) made up to ${flaskMl} mL in a class A flask at 22 °C.`,
+    ),
+    solution({ ...filling, components: [{ ...filling.components[0], perAmount: flaskMl }] }),
+    heading("Use"),
+    paragraph(
+      "Fills the Ag/AgCl (3 mol/L KCl) reference electrodes of the ferrocyanide cells; replaced monthly.",
+    ),
+  ];
+  const stock = await write(
     mira,
     "Ferrocyanide kinetics",
     "KCl stock for the reference compartment",
-    { template: "electrolyte-stock" },
+    fillingNodes(100),
     true,
   );
+  await countersignEntry(odile, stock, {
+    revision: 1,
+    password: DEMO_PASSWORD,
+    meaning: "witnessed",
+    comment: "",
+  });
+  // Amended after countersignature: the flask was recalibrated; the amendment waits for review.
+  await startAmendment(mira, stock, {
+    reason: "The 100 mL flask was recalibrated at 99.82 mL; the concentration is corrected.",
+  });
+  await saveEntryContent(mira, stock, {
+    baseRevision: 1,
+    title: "KCl stock for the reference compartment",
+    content: { type: "doc", content: fillingNodes(99.82) },
+  });
+  await submitEntry(mira, stock);
 }
 
 async function ridgeback(labId: string) {

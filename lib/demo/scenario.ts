@@ -7,7 +7,7 @@ import type { Role } from "@/db/schema/enums";
  */
 export const DEMO_PASSWORD = "copper-sulfate-42";
 
-export interface DemoMember {
+interface DemoMember {
   email: string;
   name: string;
   role: Role;

@@ -6,8 +6,8 @@ import { z } from "zod";
  *
  * The limits here are about shape and size, not chemistry: a negative amount or a
  * temperature outside a solvent's range must still save, so the block can show the
- * engine's message in place while the rest of the entry keeps saving (DESIGN.md, "Bad
- * input"). Only values no chemist could mean (non-finite numbers, 10 MB strings, a
+ * engine's message in place while the rest of the entry keeps saving (bad input is a
+ * typed error, docs/architecture.md, "The computation contract"). Only values no chemist could mean (non-finite numbers, 10 MB strings, a
  * thousand rows) are refused here.
  */
 
@@ -27,12 +27,11 @@ export type AmountUnit = (typeof AMOUNT_UNITS)[number];
 
 /** Units of the `per` basis: a mass is the mass of solvent, a volume the final volume. */
 export const PER_UNITS = ["g", "kg", "mL", "L"] as const;
-export type PerUnit = (typeof PER_UNITS)[number];
 
 /** Units that need a `per` basis (an absolute quantity weighed out). */
 export const UNITS_NEEDING_PER: readonly AmountUnit[] = ["g", "mg"];
 
-export const MODEL_CHOICES = [
+const MODEL_CHOICES = [
   "auto",
   "dh-limiting",
   "dh-extended",
@@ -42,7 +41,6 @@ export const MODEL_CHOICES = [
   "pitzer",
   "sit",
 ] as const;
-export type ModelChoice = (typeof MODEL_CHOICES)[number];
 
 export const REFERENCE_ELECTRODE_IDS = [
   "SHE",
@@ -54,10 +52,9 @@ export const REFERENCE_ELECTRODE_IDS = [
   "Hg/Hg2SO4-satK2SO4",
   "RHE",
 ] as const;
-export type ReferenceElectrodeId = (typeof REFERENCE_ELECTRODE_IDS)[number];
 
 /** A stable block id: letters, digits, "-" and "_" (UUIDs fit). */
-export const blockIdSchema = z
+const blockIdSchema = z
   .string()
   .min(4)
   .max(64)
@@ -67,7 +64,7 @@ const shortText = (max: number) => z.string().max(max);
 /** A finite number inside generous physical bounds; null while a field is empty. */
 const boundedNumber = (min: number, max: number) => z.number().finite().min(min).max(max);
 
-export const solutionComponentSchema = z.strictObject({
+const solutionComponentSchema = z.strictObject({
   formula: shortText(80),
   amount: boundedNumber(-1e9, 1e9).nullable(),
   unit: z.enum(AMOUNT_UNITS),
@@ -87,7 +84,7 @@ export const solutionBlockInputSchema = z.strictObject({
 });
 export type SolutionBlockInput = z.infer<typeof solutionBlockInputSchema>;
 
-export const electrodeSchema = z.strictObject({
+const electrodeSchema = z.strictObject({
   material: shortText(80),
   areaCm2: boundedNumber(-1e6, 1e6).nullable(),
   pretreatment: z.array(shortText(300)).max(20),

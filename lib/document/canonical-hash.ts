@@ -42,7 +42,7 @@ function serialise(value: unknown, ancestors: Set<object>): string {
     default:
       throw new TypeError(`Canonical JSON cannot hold a ${typeof value}.`);
   }
-  const object = value as object;
+  const object = value;
   if (ancestors.has(object)) throw new TypeError("Canonical JSON cannot hold a cycle.");
   ancestors.add(object);
   let out: string;

@@ -1,13 +1,7 @@
 import { z } from "zod";
+import { checkJsonShape } from "@/lib/validation/json-shape";
 import { cellBlockInputSchema, solutionBlockInputSchema } from "./block-schemas";
 import { isSafeHref } from "./safe-href";
-
-export {
-  cellBlockInputSchema,
-  solutionBlockInputSchema,
-  type CellBlockInput,
-  type SolutionBlockInput,
-} from "./block-schemas";
 
 /**
  * The tiptap document as the server accepts it on save. The editor's ProseMirror schema
@@ -62,8 +56,8 @@ const NODE_ATTRS = {
   cellBlock: cellBlockInputSchema,
 } as const;
 
-export const ALLOWED_NODE_TYPES = Object.keys(NODE_ATTRS) as (keyof typeof NODE_ATTRS)[];
-export type EntryNodeType = keyof typeof NODE_ATTRS;
+const ALLOWED_NODE_TYPES = Object.keys(NODE_ATTRS) as (keyof typeof NODE_ATTRS)[];
+type EntryNodeType = keyof typeof NODE_ATTRS;
 
 const MARK_ATTRS = {
   bold: z.strictObject({}),
@@ -80,7 +74,7 @@ const MARK_ATTRS = {
   }),
 } as const;
 
-export const ALLOWED_MARK_TYPES = Object.keys(MARK_ATTRS) as (keyof typeof MARK_ATTRS)[];
+const ALLOWED_MARK_TYPES = Object.keys(MARK_ATTRS) as (keyof typeof MARK_ATTRS)[];
 
 const markSchema = z
   .strictObject({
@@ -152,7 +146,8 @@ function checkWholeDocument(doc: EntryNode, ctx: z.RefinementCtx) {
       return;
     }
     if (node.type === "solutionBlock" || node.type === "cellBlock") {
-      const id = String(node.attrs?.blockId ?? "");
+      const blockId = node.attrs?.blockId;
+      const id = typeof blockId === "string" ? blockId : "";
       if (seenIds.has(id))
         ctx.addIssue({ code: "custom", message: `Two blocks share the id "${id}".` });
       seenIds.add(id);
@@ -174,9 +169,39 @@ export const entryDocumentSchema = z
     attrs: z.record(z.string(), z.unknown()).optional(),
     content: z.array(nodeSchema).max(5000),
   })
-  .superRefine((doc, ctx) => checkWholeDocument(doc as EntryNode, ctx));
+  .superRefine((doc, ctx) => checkWholeDocument(doc, ctx));
 
 export type EntryDocument = z.infer<typeof entryDocumentSchema>;
+
+/**
+ * JSON nesting allowed before the schema runs: a document node sits two JSON levels below its
+ * parent (the node object and its content array), and attributes add a few more.
+ */
+const JSON_SHAPE_LIMITS = { maxDepth: LIMITS.maxDepth * 2 + 12, maxValues: LIMITS.maxNodes * 40 };
+
+/**
+ * Parses an untrusted document: its shape is measured without recursion first, so a tree
+ * nested thousands of levels deep is refused instead of overflowing the stack in zod.
+ */
+export function safeParseEntryDocument(
+  raw: unknown,
+): { success: true; data: EntryDocument } | { success: false; problems: string[] } {
+  const shape = checkJsonShape(raw, JSON_SHAPE_LIMITS);
+  if (shape) {
+    return {
+      success: false,
+      problems: [
+        shape.kind === "too_deep"
+          ? `document: The document nests deeper than ${LIMITS.maxDepth} levels.`
+          : `document: The document has more than ${LIMITS.maxNodes} nodes.`,
+      ],
+    };
+  }
+  const parsed = entryDocumentSchema.safeParse(raw);
+  return parsed.success
+    ? { success: true, data: parsed.data }
+    : { success: false, problems: describeDocumentErrors(parsed.error) };
+}
 
 /** Field-level messages for a refused save, e.g. "content.3.attrs.temperatureC: …". */
 export function describeDocumentErrors(error: z.ZodError): string[] {

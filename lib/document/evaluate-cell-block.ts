@@ -1,6 +1,9 @@
 import { convertPotentialDetailed, isChemInputError, nernstPotentialDetailed } from "@/lib/chem";
 import type { CellBlockInput, SolutionBlockInput } from "@/lib/document/block-schemas";
-import { evaluateSolutionBlockCached } from "@/lib/document/evaluate-solution-block";
+import {
+  evaluateSolutionBlockCached,
+  type SolutionEvaluation,
+} from "@/lib/document/evaluate-solution-block";
 
 export type CellPotentialResult =
   | { status: "idle"; message: string }
@@ -61,12 +64,14 @@ function freeIonActivities(result: SolutionResult): {
 export function computeCellPotential(
   cell: CellBlockInput,
   electrolyte: SolutionBlockInput | null,
+  /** The electrolyte's stored evaluation, for a saved revision; computed live otherwise. */
+  electrolyteEvaluation?: SolutionEvaluation,
 ): CellPotentialResult {
   if (!cell.couple)
     return { status: "idle", message: "Choose a couple to see its equilibrium potential." };
   if (!electrolyte)
     return { status: "idle", message: "Link the electrolyte to a solution block of this entry." };
-  const evaluation = evaluateSolutionBlockCached(electrolyte);
+  const evaluation = electrolyteEvaluation ?? evaluateSolutionBlockCached(electrolyte);
   if (evaluation.status === "empty")
     return { status: "idle", message: "The linked solution has no components yet." };
   if (evaluation.status === "error") {

@@ -20,7 +20,7 @@ export type SolutionEvaluation =
  * typed); `rowIndex` maps the engine's component index back to the row on screen, so its
  * message lands on the right input.
  */
-export function toChemInput(
+function toChemInput(
   block: SolutionBlockInput,
 ):
   | { input: ChemInput; rowIndex: number[] }
@@ -40,7 +40,7 @@ export function toChemInput(
       amount: row.amount,
       unit: row.unit,
       ...(hasPer ? { per: { amount: row.perAmount as number, unit: row.perUnit as string } } : {}),
-    } as ChemInput["components"][number]);
+    });
     rowIndex.push(index);
   }
   if (components.length === 0) return null;
@@ -54,6 +54,12 @@ export function toChemInput(
       : {}),
   } as ChemInput;
   return { input, rowIndex };
+}
+
+/** The engine input a block stands for, or null while it is incomplete. */
+export function chemInputOf(block: SolutionBlockInput): ChemInput | null {
+  const prepared = toChemInput(block);
+  return prepared && "input" in prepared ? prepared.input : null;
 }
 
 /** Evaluates a block: a pure function of its inputs, so callers may cache it freely. */
@@ -89,7 +95,9 @@ const CACHE_SIZE = 256;
  * transaction; only a change to this block's own inputs reaches computeSolution.
  */
 export function evaluateSolutionBlockCached(block: SolutionBlockInput): SolutionEvaluation {
-  const key = JSON.stringify(block, (k, v) => (k === "blockId" || k === "name" ? undefined : v));
+  const key = JSON.stringify(block, (k, v: unknown) =>
+    k === "blockId" || k === "name" ? undefined : v,
+  );
   const hit = cache.get(key);
   if (hit) {
     // Refresh recency: Map keeps insertion order, so the oldest entry is evicted first.

@@ -2,11 +2,11 @@ import { ACTIVITY_MODELS, computeSolution, isChemInputError } from "@/lib/chem";
 import type { ChemInput, SolutionResult } from "@/lib/document/evaluate-solution-block";
 
 /** Every model lib/chem offers (not "auto"), in its own order: newly registered ones appear too. */
-export const CHART_MODELS: readonly string[] = ACTIVITY_MODELS.map((model) => model.id).filter(
+const CHART_MODELS: readonly string[] = ACTIVITY_MODELS.map((model) => model.id).filter(
   (id) => id !== "auto",
 );
 
-export interface CurvePoint {
+interface CurvePoint {
   sqrtI: number;
   /** γ± inside the model's stated range, keyed by model id; `${id}:outside` beyond it. */
   [series: string]: number;

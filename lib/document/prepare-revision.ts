@@ -1,9 +1,10 @@
 import { AppError } from "@/lib/errors";
 import { canonicalHash } from "./canonical-hash";
-import { describeDocumentErrors, entryDocumentSchema, type EntryDocument } from "./document-schema";
+import { safeParseEntryDocument, type EntryDocument } from "./document-schema";
 import { extractSolutionBlocks } from "./extract-blocks";
 import { documentPlainText } from "./plain-text";
-import { solutionRecordFor, type SolutionRecord } from "./solution-record";
+import type { SolutionBlockInput } from "./block-schemas";
+import { solutionInputsHash } from "./solution-record";
 
 /** Everything a save stores for one document, computed once from the validated tree. */
 export interface PreparedRevision {
@@ -13,8 +14,11 @@ export interface PreparedRevision {
   contentHash: string;
   /** Plain text for full-text search. */
   contentText: string;
-  /** The server's own computation of every solution block, in document order. */
-  solutions: SolutionRecord[];
+  /**
+   * Every solution block in document order with the key of its computation. The server
+   * computes a block (solutionRecordFor) only when no stored result has that key yet.
+   */
+  solutionBlocks: { block: SolutionBlockInput; inputsHash: string }[];
 }
 
 /** The content hash a revision (and a signature) records: SHA-256 of canonical { title, content }. */
@@ -28,12 +32,12 @@ export function revisionHash(title: string, content: unknown): string {
  * previous revision is untouched because nothing has been written yet.
  */
 export function prepareRevision(title: string, rawContent: unknown): PreparedRevision {
-  const parsed = entryDocumentSchema.safeParse(rawContent);
+  const parsed = safeParseEntryDocument(rawContent);
   if (!parsed.success) {
     throw new AppError(
       "invalid_input",
       "The document was refused; the previous revision is unchanged.",
-      { details: { problems: describeDocumentErrors(parsed.error).slice(0, 20) } },
+      { details: { problems: parsed.problems.slice(0, 20) } },
     );
   }
   const content = parsed.data;
@@ -42,6 +46,9 @@ export function prepareRevision(title: string, rawContent: unknown): PreparedRev
     content,
     contentHash: revisionHash(title, content),
     contentText: documentPlainText(content),
-    solutions: extractSolutionBlocks(content).map(solutionRecordFor),
+    solutionBlocks: extractSolutionBlocks(content).map((block) => ({
+      block,
+      inputsHash: solutionInputsHash(block),
+    })),
   };
 }

@@ -1,13 +1,16 @@
-import type { SolutionBlockInput } from "@/lib/document/block-schemas";
-import { evaluateSolutionBlock } from "@/lib/document/evaluate-solution-block";
+import { ENGINE_VERSION } from "@/lib/chem";
+import type { SolutionBlockInput } from "./block-schemas";
+import { canonicalHash } from "./canonical-hash";
+import { evaluateSolutionBlock } from "./evaluate-solution-block";
 
 /**
- * What the server stores for one solution block of a revision: recomputed here with the
- * same lib/chem code the editor runs, never read from the client. A block whose inputs the
- * engine refuses is still recorded, with its error, so the record shows what was typed.
+ * What the server stores for one solution block's content: recomputed here with the same
+ * lib/chem code the editor runs, never read from the client. A block whose inputs the engine
+ * refuses is still recorded, with its error, so the record shows what was typed.
  */
 export interface SolutionRecord {
-  blockId: string;
+  inputsHash: string;
+  engineVersion: string;
   name: string;
   temperatureC: number;
   solvent: string;
@@ -17,22 +20,23 @@ export interface SolutionRecord {
   ionicStrengthMolar: number | null;
   debyeLengthNm: number | null;
   species: string[];
+  composition: Record<string, number>;
   results: Record<string, unknown>;
   inputs: Record<string, unknown>;
-  components: {
-    position: number;
-    formula: string;
-    amount: number;
-    unit: string;
-    perAmount: number | null;
-    perUnit: string | null;
-    molality: number | null;
-    molarity: number | null;
-  }[];
 }
 
 const finiteOrNull = (x: unknown): number | null =>
   typeof x === "number" && Number.isFinite(x) ? x : null;
+
+/**
+ * The key of a block's computation: its inputs without the block id (a copied block computes
+ * the same) and the engine version (a new engine computes afresh). Two saves of an unchanged
+ * block share one stored result.
+ */
+export function solutionInputsHash(block: SolutionBlockInput): string {
+  const { blockId: _blockId, ...inputs } = block;
+  return canonicalHash({ inputs, engineVersion: ENGINE_VERSION });
+}
 
 export function solutionRecordFor(block: SolutionBlockInput): SolutionRecord {
   const evaluation = evaluateSolutionBlock(block);
@@ -42,10 +46,16 @@ export function solutionRecordFor(block: SolutionBlockInput): SolutionRecord {
   for (const c of typedRows) species.add(c.formula.trim());
   for (const ion of ok?.ions ?? []) species.add(ion.formula);
   for (const salt of ok?.salts ?? []) species.add(salt.formula);
-  const componentResults = ok?.components ?? [];
+  const composition: Record<string, number> = {};
+  for (const ion of ok?.ions ?? []) {
+    const molality = finiteOrNull(ion.molality);
+    if (molality !== null) composition[ion.formula] = (composition[ion.formula] ?? 0) + molality;
+  }
+  const { blockId: _blockId, ...inputs } = block;
 
   return {
-    blockId: block.blockId,
+    inputsHash: solutionInputsHash(block),
+    engineVersion: ENGINE_VERSION,
     name: block.name,
     temperatureC: ok?.temperatureC ?? block.temperatureC ?? 25,
     solvent: ok?.solvent.id ?? (block.solvent || "water"),
@@ -55,21 +65,12 @@ export function solutionRecordFor(block: SolutionBlockInput): SolutionRecord {
     ionicStrengthMolar: finiteOrNull(ok?.ionicStrength.molar),
     debyeLengthNm: finiteOrNull(ok?.debyeLengthNm),
     species: [...species],
+    composition,
     results: ok
-      ? { status: "ok", ...JSON.parse(JSON.stringify(ok)) }
+      ? { status: "ok", ...(JSON.parse(JSON.stringify(ok)) as Record<string, unknown>) }
       : evaluation.status === "error"
         ? { status: "error", field: evaluation.field ?? null, message: evaluation.message }
         : { status: "empty" },
-    inputs: block as unknown as Record<string, unknown>,
-    components: typedRows.map((c, position) => ({
-      position,
-      formula: c.formula.trim(),
-      amount: c.amount as number,
-      unit: c.unit,
-      perAmount: c.perAmount ?? null,
-      perUnit: c.perUnit ?? null,
-      molality: finiteOrNull(componentResults[position]?.molality),
-      molarity: finiteOrNull(componentResults[position]?.molarity),
-    })),
+    inputs: inputs,
   };
 }

@@ -1,9 +1,9 @@
 import "server-only";
 import { unstable_rethrow } from "next/navigation";
 import { isAppError } from "@/lib/errors";
-import type { ActionState } from "./action-state";
+import type { ActionState } from "@/lib/contract/action-state";
 
-export type { ActionState } from "./action-state";
+export type { ActionState } from "@/lib/contract/action-state";
 
 /**
  * Runs a server action body and shapes its failure for the form: AppErrors become field

@@ -1,18 +1,13 @@
 import "server-only";
+import { insertAuditEvent } from "@/db/queries/audit";
 import { requireActor, type Actor } from "@/lib/access/actor";
+import type { ApiErrorBody } from "@/lib/contract/api-error";
+import { getEnv } from "@/lib/env";
 import { AppError, isAppError } from "@/lib/errors";
+import { appErrorFromDatabase } from "@/lib/errors/database";
+import { getDb } from "@/lib/server/database";
 
-/** The JSON body of every API error: a code a client can switch on and a message a person can read. */
-export interface ApiErrorBody {
-  error: {
-    code: string;
-    message: string;
-    fieldErrors?: Record<string, string[]>;
-    details?: Record<string, unknown>;
-  };
-}
-
-export function errorResponse(error: AppError): Response {
+function errorResponse(error: AppError): Response {
   const body: ApiErrorBody = {
     error: {
       code: error.code,
@@ -21,35 +16,58 @@ export function errorResponse(error: AppError): Response {
       details: error.details,
     },
   };
-  return Response.json(body, { status: error.status });
+  return Response.json(body, { status: error.status, headers: { "cache-control": "no-store" } });
 }
 
-/** Wraps a route handler: typed errors become their status, anything else a 500 without internals. */
-export function route<C>(handler: (request: Request, context: C) => Promise<Response>) {
+/**
+ * Wraps a route handler: typed errors become their status, database errors are translated
+ * in one place (lib/errors/database.ts), anything else is a 500 without internals. Lab data
+ * is never cached by a browser or a proxy.
+ */
+function route<C>(handler: (request: Request, context: C) => Promise<Response>) {
   return async (request: Request, context: C): Promise<Response> => {
     try {
-      return await handler(request, context);
+      const response = await handler(request, context);
+      if (!response.headers.has("cache-control")) response.headers.set("cache-control", "no-store");
+      return response;
     } catch (error) {
       if (isAppError(error)) return errorResponse(error);
-      console.error("[ionleaf] route failed", request.method, new URL(request.url).pathname, error);
+      const translated = appErrorFromDatabase(error);
+      if (translated) return errorResponse(translated);
+      console.error("[ionleaf] route failed", request.method, safePath(request), error);
       return Response.json(
         {
           error: {
             code: "internal",
             message: "Something went wrong on our side; nothing was changed.",
           },
-        },
-        { status: 500 },
+        } satisfies ApiErrorBody,
+        { status: 500, headers: { "cache-control": "no-store" } },
       );
     }
   };
 }
 
-/** Largest JSON body accepted (an entry document with many blocks is well under 1 MB). */
-export const MAX_JSON_BYTES = 4 * 1024 * 1024;
+function safePath(request: Request): string {
+  try {
+    return new URL(request.url).pathname;
+  } catch {
+    return "(unparsable url)";
+  }
+}
 
-/** Reads a JSON body: 413 when it is too large, 422 when it is not JSON. */
+/** Largest JSON body accepted (an entry document with many blocks is well under 1 MB). */
+const MAX_JSON_BYTES = 4 * 1024 * 1024;
+
+/**
+ * Reads a JSON body: 415 unless it is declared as JSON (a plain HTML form cannot send that
+ * without a CORS preflight), 413 when it is too large, 422 when it is not JSON.
+ */
 export async function readJson(request: Request, maxBytes = MAX_JSON_BYTES): Promise<unknown> {
+  const type = (request.headers.get("content-type") ?? "").split(";")[0].trim().toLowerCase();
+  if (type !== "application/json") {
+    throw new AppError("unsupported_media_type", "Send the request body as application/json.");
+  }
   const declared = Number(request.headers.get("content-length") ?? "0");
   if (declared > maxBytes) throw new AppError("payload_too_large", "The request is too large.");
   const text = await request.text();
@@ -61,12 +79,66 @@ export async function readJson(request: Request, maxBytes = MAX_JSON_BYTES): Pro
   }
 }
 
-/** A route handler that needs a signed-in member: resolves the actor first (401 otherwise). */
+const SAFE_METHODS = new Set(["GET", "HEAD", "OPTIONS"]);
+
+/**
+ * A state-changing request must come from one of Ionleaf's own pages: a browser marks a
+ * request from another site or port with its Origin and Sec-Fetch-Site headers. Clients that
+ * send neither (scripts, the tests' HTTP client) are not browsers a page could hijack.
+ */
+function isCrossOrigin(request: Request): boolean {
+  const site = request.headers.get("sec-fetch-site");
+  if (site && site !== "same-origin" && site !== "none") return true;
+  const origin = request.headers.get("origin");
+  if (!origin) return false;
+  const own = new Set<string>([new URL(getEnv().APP_URL).origin]);
+  try {
+    own.add(new URL(request.url).origin);
+  } catch {
+    // an unparsable URL cannot be our own origin
+  }
+  const host = request.headers.get("host");
+  if (host) {
+    const proto =
+      request.headers.get("x-forwarded-proto") ??
+      new URL(getEnv().APP_URL).protocol.replace(":", "");
+    own.add(`${proto}://${host}`);
+  }
+  return !own.has(origin);
+}
+
+/**
+ * A route handler that needs a signed-in member: resolves the actor first (401 otherwise) and
+ * refuses state-changing requests from another origin (403, recorded in the audit trail).
+ */
 export function authedRoute<P>(
   handler: (request: Request, actor: Actor, params: P) => Promise<Response>,
 ) {
   return route<{ params: Promise<P> }>(async (request, context) => {
     const actor = await requireActor();
+    if (!SAFE_METHODS.has(request.method) && isCrossOrigin(request)) {
+      await insertAuditEvent(getDb(), {
+        labId: actor.labId,
+        actorId: actor.userId,
+        action: "request.cross_origin_refused",
+        targetType: "route",
+        targetId: safePath(request).slice(0, 200),
+        details: {
+          method: request.method,
+          origin: (request.headers.get("origin") ?? "").slice(0, 200),
+        },
+      });
+      throw new AppError(
+        "forbidden",
+        "This request did not come from an Ionleaf page; nothing was changed.",
+      );
+    }
     return handler(request, actor, await context.params);
   });
+}
+
+/** A JSON body that may be absent (an empty POST reads as `{}`). */
+export async function readOptionalJson(request: Request): Promise<unknown> {
+  if (request.headers.get("content-length") === "0" || !request.body) return {};
+  return readJson(request);
 }

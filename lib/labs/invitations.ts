@@ -10,7 +10,7 @@ import {
 import { findLabById } from "@/db/queries/labs";
 import { findUserByEmail, insertUser } from "@/db/queries/users";
 import type { Role } from "@/db/schema/enums";
-import { assertCan, type Actor } from "@/lib/access/authorize";
+import { assertCan, type Actor } from "@/lib/rules/authorize";
 import { hashPassword } from "@/lib/auth/password";
 import { getEnv } from "@/lib/env";
 import { AppError } from "@/lib/errors";
@@ -21,7 +21,7 @@ import { acceptInvitationSchema, inviteMemberSchema } from "@/lib/validation/aut
 import { parseInput } from "@/lib/validation/parse";
 import { hashLinkToken, newLinkToken } from "./tokens";
 
-export const INVITATION_LIFETIME_MS = 7 * 24 * 60 * 60 * 1000;
+const INVITATION_LIFETIME_MS = 7 * 24 * 60 * 60 * 1000;
 
 /** Invites a person by e-mail; the link goes only into the mail, its hash into the database. */
 export async function inviteMember(
@@ -82,7 +82,7 @@ export async function inspectInvitation(token: string): Promise<InvitationState>
   if (invitation.acceptedAt) return { kind: "used" };
   if (invitation.revokedAt) return { kind: "revoked" };
   if (invitation.expiresAt.getTime() <= Date.now()) return { kind: "expired" };
-  return { kind: "open", email: invitation.email, role: invitation.role as Role, labName };
+  return { kind: "open", email: invitation.email, role: invitation.role, labName };
 }
 
 const STATE_MESSAGES = {

@@ -10,7 +10,7 @@ import {
 } from "@/db/queries/users";
 import { listOpenInvitations } from "@/db/queries/invitations";
 import type { Role } from "@/db/schema/enums";
-import { assertCan, type Actor } from "@/lib/access/authorize";
+import { assertCan, type Actor } from "@/lib/rules/authorize";
 import { AppError } from "@/lib/errors";
 import { getDb } from "@/lib/server/database";
 import { changeRoleSchema, memberIdSchema } from "@/lib/validation/auth";
@@ -41,6 +41,7 @@ function toMemberDto(row: {
 }
 
 export async function listMembers(actor: Actor): Promise<MemberDto[]> {
+  assertCan(actor, "lab.read");
   const rows = await listLabMembers(getDb(), actor.labId);
   return rows.map(toMemberDto);
 }
@@ -51,6 +52,7 @@ export async function listPendingInvitations(actor: Actor) {
 }
 
 export async function getLabName(actor: Actor): Promise<string> {
+  assertCan(actor, "lab.read");
   return (await findLabById(getDb(), actor.labId))?.name ?? "";
 }
 

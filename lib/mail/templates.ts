@@ -19,3 +19,54 @@ export function invitationMail(input: {
   ].join("\n");
   return { subject: `Join ${input.labName} on Ionleaf`, text };
 }
+
+const entryLink = (appUrl: string, path: string) => new URL(path, appUrl).toString();
+
+export function reviewRequestedMail(input: {
+  appUrl: string;
+  entryId: string;
+  entryTitle: string;
+  authorName: string;
+  revision: number;
+  amendment: boolean;
+}) {
+  const what = input.amendment ? "an amendment of a countersigned entry" : "an entry";
+  const text = [
+    `${input.authorName} has submitted ${what} for your countersignature:`,
+    "",
+    `  ${input.entryTitle} (revision ${input.revision})`,
+    "",
+    `Review it: ${entryLink(input.appUrl, `/review/${input.entryId}`)}`,
+    "",
+    "You can countersign it with your password, or return it to the author with a comment.",
+  ].join("\n");
+  return { subject: `Review requested: ${input.entryTitle}`, text };
+}
+
+export function reviewDecidedMail(input: {
+  appUrl: string;
+  entryId: string;
+  entryTitle: string;
+  reviewerName: string;
+  revision: number;
+  decision: "countersigned" | "returned";
+  comment: string;
+}) {
+  const head =
+    input.decision === "countersigned"
+      ? `${input.reviewerName} has countersigned revision ${input.revision} of your entry:`
+      : `${input.reviewerName} has returned revision ${input.revision} of your entry for changes:`;
+  const text = [
+    head,
+    "",
+    `  ${input.entryTitle}`,
+    "",
+    ...(input.comment ? [`Comment: ${input.comment}`, ""] : []),
+    `Open it: ${entryLink(input.appUrl, `/entries/${input.entryId}`)}`,
+  ].join("\n");
+  const subject =
+    input.decision === "countersigned"
+      ? `Countersigned: ${input.entryTitle}`
+      : `Returned for changes: ${input.entryTitle}`;
+  return { subject, text };
+}

@@ -1,16 +1,18 @@
 import "server-only";
+import type { EntryListItem } from "@/lib/contract/entries";
+import { assertEntryAllows, entryActions, entryFactsOf } from "@/lib/rules/entry-rules";
+import { roleCan } from "@/lib/rules/role-permissions";
+import { loadEntryFor } from "./entry-access";
 import { insertAuditEvent } from "@/db/queries/audit";
 import {
   countEntriesByStatus,
   findEntryHeader,
-  findLabEntry,
   insertEntry,
   listEntries as queryEntries,
   updateEntry,
 } from "@/db/queries/entries";
 import { findLabProject } from "@/db/queries/projects";
-import type { EntryStatus } from "@/db/schema/enums";
-import { assertCan, type Actor } from "@/lib/access/authorize";
+import { assertCan, type Actor } from "@/lib/rules/authorize";
 import { findTemplate } from "@/lib/document/templates";
 import { AppError } from "@/lib/errors";
 import { getDb } from "@/lib/server/database";
@@ -20,20 +22,6 @@ import { appendRevision } from "./append-revision";
 import { prepareRevision } from "@/lib/document/prepare-revision";
 
 export const EMPTY_DOCUMENT = { type: "doc", content: [{ type: "paragraph" }] };
-
-export interface EntryListItem {
-  id: string;
-  title: string;
-  status: EntryStatus;
-  revision: number;
-  projectId: string;
-  projectName: string;
-  authorId: string;
-  authorName: string;
-  createdAt: string;
-  updatedAt: string;
-  archived: boolean;
-}
 
 export async function listEntries(actor: Actor, rawQuery: unknown): Promise<EntryListItem[]> {
   assertCan(actor, "entry.read");
@@ -52,7 +40,7 @@ export async function listEntries(actor: Actor, rawQuery: unknown): Promise<Entr
   return rows.map((r) => ({
     id: r.id,
     title: r.title,
-    status: r.status as EntryStatus,
+    status: r.status,
     revision: r.revision,
     projectId: r.projectId,
     projectName: r.projectName,
@@ -65,7 +53,7 @@ export async function listEntries(actor: Actor, rawQuery: unknown): Promise<Entr
 }
 
 export async function countReviewQueue(actor: Actor): Promise<number> {
-  if (actor.role !== "supervisor") return 0;
+  if (!roleCan(actor.role, "review.read")) return 0;
   return countEntriesByStatus(getDb(), actor.labId, "submitted");
 }
 
@@ -120,11 +108,10 @@ export async function setEntryArchived(
 ): Promise<void> {
   assertCan(actor, "entry.write");
   await getDb().transaction(async (tx) => {
-    const entry = await findLabEntry(tx, actor.labId, parseRecordId(entryId, "Entry"), true);
-    if (!entry) throw new AppError("not_found", "Entry not found.");
-    if (entry.authorId !== actor.userId && actor.role !== "admin")
-      throw new AppError("forbidden", "Only the author or a lab admin can archive an entry.");
-    await updateEntry(tx, actor.labId, entryId, { archivedAt: archived ? new Date() : null });
+    const entry = await loadEntryFor(tx, actor, entryId, archived ? "archive" : "restore", {
+      forUpdate: true,
+    });
+    await updateEntry(tx, actor.labId, entry.id, { archivedAt: archived ? new Date() : null });
     await insertAuditEvent(tx, {
       labId: actor.labId,
       actorId: actor.userId,
@@ -135,39 +122,11 @@ export async function setEntryArchived(
   });
 }
 
-/** draft/returned → submitted: the author asks for a countersignature. */
-export async function submitEntry(actor: Actor, entryId: string): Promise<void> {
-  assertCan(actor, "entry.write");
-  await getDb().transaction(async (tx) => {
-    const entry = await findLabEntry(tx, actor.labId, parseRecordId(entryId, "Entry"), true);
-    if (!entry) throw new AppError("not_found", "Entry not found.");
-    if (entry.authorId !== actor.userId)
-      throw new AppError("forbidden", "Only the author submits an entry.");
-    if (entry.status !== "draft" && entry.status !== "returned")
-      throw new AppError(
-        "conflict",
-        `This entry is ${entry.status}; only a draft can be submitted.`,
-      );
-    if (entry.currentRevisionNumber === 0)
-      throw new AppError(
-        "conflict",
-        "Write something before submitting: the entry has no saved revision.",
-      );
-    await updateEntry(tx, actor.labId, entryId, { status: "submitted", updatedAt: new Date() });
-    await insertAuditEvent(tx, {
-      labId: actor.labId,
-      actorId: actor.userId,
-      action: "entry.submitted",
-      targetType: "entry",
-      targetId: entryId,
-      details: { revision: entry.currentRevisionNumber },
-    });
-  });
-}
-
 export async function getEntryHeader(actor: Actor, entryId: string) {
   assertCan(actor, "entry.read");
   const found = await findEntryHeader(getDb(), actor.labId, parseRecordId(entryId, "Entry"));
   if (!found) throw new AppError("not_found", "Entry not found.");
-  return found;
+  const facts = entryFactsOf(found.entry);
+  assertEntryAllows(actor, facts, "view");
+  return { ...found, actions: entryActions(actor, facts) };
 }

@@ -1,23 +1,15 @@
 import "server-only";
+import type { SaveResult } from "@/lib/contract/entries";
+import { loadEntryFor } from "./entry-access";
 import { insertAuditEvent } from "@/db/queries/audit";
-import { findLabEntry, findRevision } from "@/db/queries/entries";
-import { assertCan, type Actor } from "@/lib/access/authorize";
+import { findRevision } from "@/db/queries/entries";
+import { assertCan, type Actor } from "@/lib/rules/authorize";
 import { prepareRevision } from "@/lib/document/prepare-revision";
 import { AppError } from "@/lib/errors";
 import { getDb } from "@/lib/server/database";
 import { saveEntrySchema } from "@/lib/validation/entries";
-import { parseInput, parseRecordId } from "@/lib/validation/parse";
+import { parseInput } from "@/lib/validation/parse";
 import { appendRevision } from "./append-revision";
-
-export interface SaveResult {
-  revision: number;
-  contentHash: string;
-  /** False when the document was identical to the current revision: nothing was written. */
-  created: boolean;
-  solutions: number;
-}
-
-const EDITABLE = new Set(["draft", "returned"]);
 
 /**
  * Autosave. The editor sends the revision number it started from; a save against an older
@@ -36,14 +28,7 @@ export async function saveEntryContent(
   const { contentHash } = prepared;
 
   return getDb().transaction(async (tx) => {
-    const entry = await findLabEntry(tx, actor.labId, parseRecordId(entryId, "Entry"), true);
-    if (!entry) throw new AppError("not_found", "Entry not found.");
-    if (entry.authorId !== actor.userId)
-      throw new AppError("forbidden", "Only the author edits this entry.");
-    if (!EDITABLE.has(entry.status))
-      throw new AppError("conflict", `This entry is ${entry.status}; it cannot be edited now.`, {
-        details: { status: entry.status },
-      });
+    const entry = await loadEntryFor(tx, actor, entryId, "edit", { forUpdate: true });
     if (entry.currentRevisionNumber !== input.baseRevision) {
       throw new AppError("conflict", "This entry was saved elsewhere since you opened it.", {
         details: { currentRevision: entry.currentRevisionNumber, baseRevision: input.baseRevision },
@@ -52,25 +37,43 @@ export async function saveEntryContent(
     if (entry.currentRevisionNumber > 0) {
       const current = await findRevision(tx, entry.id, entry.currentRevisionNumber);
       if (current?.revision.contentHash === contentHash) {
-        return { revision: entry.currentRevisionNumber, contentHash, created: false, solutions: 0 };
+        return {
+          revision: entry.currentRevisionNumber,
+          contentHash,
+          created: false,
+          solutions: prepared.solutionBlocks.length,
+          solutionRowsWritten: 0,
+        };
       }
     }
     const number = entry.currentRevisionNumber + 1;
-    const { solutions } = await appendRevision(tx, {
+    // While an amendment is in progress, every revision is marked as part of it.
+    const amendment =
+      entry.status === "amended" && entry.signedRevisionNumber !== null
+        ? { amendsRevisionNumber: entry.signedRevisionNumber, reason: entry.amendmentReason ?? "" }
+        : null;
+    const appended = await appendRevision(tx, {
       labId: actor.labId,
       entryId: entry.id,
       number,
       authorId: actor.userId,
       prepared,
+      amendment,
     });
-    if (number === 1)
-      await insertAuditEvent(tx, {
-        labId: actor.labId,
-        actorId: actor.userId,
-        action: "entry.first_saved",
-        targetType: "entry",
-        targetId: entry.id,
-      });
-    return { revision: number, contentHash, created: true, solutions };
+    await insertAuditEvent(tx, {
+      labId: actor.labId,
+      actorId: actor.userId,
+      action: "entry.saved",
+      targetType: "entry",
+      targetId: entry.id,
+      details: { revision: number, contentHash, amendment: amendment !== null },
+    });
+    return {
+      revision: number,
+      contentHash,
+      created: true,
+      solutions: appended.solutions,
+      solutionRowsWritten: appended.solutionRowsWritten,
+    };
   });
 }

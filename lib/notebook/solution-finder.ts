@@ -1,6 +1,6 @@
 import "server-only";
 import { findSolutions } from "@/db/queries/solution-finder";
-import { assertCan, type Actor } from "@/lib/access/authorize";
+import { assertCan, type Actor } from "@/lib/rules/authorize";
 import { getDb } from "@/lib/server/database";
 import { solutionFinderQuerySchema } from "@/lib/validation/solution-finder";
 import { parseInput } from "@/lib/validation/parse";

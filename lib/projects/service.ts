@@ -1,7 +1,7 @@
 import "server-only";
 import { insertAuditEvent } from "@/db/queries/audit";
 import { listLabProjects, insertProject } from "@/db/queries/projects";
-import { assertCan, type Actor } from "@/lib/access/authorize";
+import { assertCan, type Actor } from "@/lib/rules/authorize";
 import { AppError } from "@/lib/errors";
 import { getDb } from "@/lib/server/database";
 import { createProjectSchema } from "@/lib/validation/projects";

@@ -1,5 +1,5 @@
 import type { Role } from "@/db/schema/enums";
-import { roleCan } from "@/lib/access/policy";
+import { roleCan } from "@/lib/rules/role-permissions";
 
 export interface NavEntry {
   href: string;

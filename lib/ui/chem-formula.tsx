@@ -7,13 +7,14 @@ import { Fragment, type ReactNode } from "react";
  */
 export function ChemFormula({ formula, className }: { formula: string; className?: string }) {
   return (
-    <span className={className} aria-label={formula}>
+    <span className={className}>
       <span aria-hidden>{renderFormula(formula)}</span>
+      <span className="sr-only">{formula}</span>
     </span>
   );
 }
 
-export function renderFormula(formula: string): ReactNode[] {
+function renderFormula(formula: string): ReactNode[] {
   // lib/chem's spelling: "^" before a multiple charge ("SO4^2-", "Fe^3+"); a single charge is
   // a bare sign ("Na+", "NO3-"), so the digit before it is still a count.
   const caret = /\^(\d*)([+-])$/.exec(formula);

@@ -2,7 +2,7 @@ import { z } from "zod";
 import { ROLES } from "@/db/schema/enums";
 
 /** Shared by the sign-in form, the server action and the credentials provider. */
-export const emailSchema = z
+const emailSchema = z
   .string({ error: "Enter your e-mail address." })
   .trim()
   .toLowerCase()
@@ -17,15 +17,14 @@ export const signInSchema = z.object({
     .min(1, "Enter your password.")
     .max(200, "That password is too long."),
 });
-export type SignInInput = z.infer<typeof signInSchema>;
 
-export const newPasswordSchema = z
+const newPasswordSchema = z
   .string({ error: "Choose a password." })
   .min(10, "Use at least 10 characters.")
   .max(200, "Use at most 200 characters.")
   .refine((p) => /[A-Za-z]/.test(p) && /[^A-Za-z]/.test(p), "Mix letters with digits or symbols.");
 
-export const roleSchema = z.enum(ROLES, {
+const roleSchema = z.enum(ROLES, {
   error: "Choose a role: researcher, supervisor or admin.",
 });
 
@@ -33,7 +32,6 @@ export const inviteMemberSchema = z.object({
   email: emailSchema,
   role: roleSchema,
 });
-export type InviteMemberInput = z.infer<typeof inviteMemberSchema>;
 
 export const acceptInvitationSchema = z
   .object({
@@ -50,7 +48,6 @@ export const acceptInvitationSchema = z
     path: ["confirmPassword"],
     message: "The two passwords differ.",
   });
-export type AcceptInvitationInput = z.infer<typeof acceptInvitationSchema>;
 
 export const changeRoleSchema = z.object({
   userId: z.string().uuid("Unknown member."),

@@ -1,7 +1,7 @@
 import { z } from "zod";
 import { ENTRY_STATUSES } from "@/db/schema/enums";
 
-export const entryTitleSchema = z
+const entryTitleSchema = z
   .string()
   .trim()
   .min(1, "Give the entry a title.")
@@ -12,7 +12,6 @@ export const createEntrySchema = z.object({
   title: entryTitleSchema,
   template: z.string().max(60).optional().nullable(),
 });
-export type CreateEntryInput = z.infer<typeof createEntrySchema>;
 
 /** An autosave: the revision the editor started from, and the whole document. */
 export const saveEntrySchema = z.object({
@@ -20,7 +19,6 @@ export const saveEntrySchema = z.object({
   title: entryTitleSchema,
   content: z.unknown(),
 });
-export type SaveEntryInput = z.infer<typeof saveEntrySchema>;
 
 export const entryListQuerySchema = z.object({
   projectId: z.string().uuid().optional(),
@@ -35,6 +33,5 @@ export const entryListQuerySchema = z.object({
   order: z.enum(["asc", "desc"]).default("desc"),
   limit: z.coerce.number().int().min(1).max(200).default(100),
 });
-export type EntryListQuery = z.infer<typeof entryListQuerySchema>;
 
 export const archiveEntrySchema = z.object({ archived: z.boolean() });

@@ -28,3 +28,11 @@ export function parseRecordId(id: string, what = "Record"): string {
   if (!UUID.test(id)) throw new AppError("not_found", `${what} not found.`);
   return id;
 }
+
+/** A revision number from a URL: digits only and within PostgreSQL's integer range. */
+export function parseRevisionNumber(raw: string): number {
+  if (!/^\d{1,9}$/.test(raw)) throw new AppError("not_found", "Revision not found.");
+  const number = Number(raw);
+  if (number < 1) throw new AppError("not_found", "Revision not found.");
+  return number;
+}

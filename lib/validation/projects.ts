@@ -8,4 +8,3 @@ export const createProjectSchema = z.object({
     .max(120, "Use at most 120 characters."),
   description: z.string().trim().max(2000, "Use at most 2000 characters.").default(""),
 });
-export type CreateProjectInput = z.infer<typeof createProjectSchema>;

@@ -1,12 +1,18 @@
 // @vitest-environment node
 import { eq } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
-import { entries, labs, solutions } from "@/db/schema";
+import { blockResults, entries, labs } from "@/db/schema";
 import { demoContent } from "@/lib/demo/content";
 import { DEMO_LABS, DEMO_PASSWORD } from "@/lib/demo/scenario";
 import { seedDemo } from "@/lib/demo/seed";
 import { verifyCredentials } from "@/lib/auth/verify-credentials";
 import { getDb } from "@/lib/server/database";
+
+/** What lib/demo/content.ts writes for each lab: entries, and solution block rows over all revisions. */
+const EXPECTED: Record<string, { entries: number; solutions: number }> = {
+  "saltmarsh-interfaces": { entries: 4, solutions: 5 },
+  "ridgeback-cells": { entries: 1, solutions: 1 },
+};
 
 describe("demo scenario seed", () => {
   it("creates two labs with members in every role and notebook content, once", async () => {
@@ -27,12 +33,30 @@ describe("demo scenario seed", () => {
       expect(signIn.kind).toBe("ok");
       const [row] = await getDb().select().from(labs).where(eq(labs.slug, lab.slug));
       const labEntries = await getDb().select().from(entries).where(eq(entries.labId, row.id));
-      expect(labEntries.length).toBeGreaterThan(0);
+      expect(labEntries).toHaveLength(EXPECTED[lab.slug].entries);
       const labSolutions = await getDb()
         .select()
-        .from(solutions)
-        .where(eq(solutions.labId, row.id));
-      expect(labSolutions.length).toBeGreaterThan(0);
+        .from(blockResults)
+        .where(eq(blockResults.labId, row.id));
+      expect(labSolutions).toHaveLength(EXPECTED[lab.slug].solutions);
+      if (lab.slug === "saltmarsh-interfaces") {
+        // The review states a new user should see: signed, returned, an amendment under
+        // review, and a draft.
+        const byTitle = Object.fromEntries(labEntries.map((e) => [e.title, e]));
+        expect(byTitle["Mixed chloride–sulfate electrolyte at I = 0.3 mol/kg"]).toMatchObject({
+          status: "countersigned",
+          signedRevisionNumber: 1,
+        });
+        expect(byTitle["Cu disc in 0.1 m NaCl with 1 mM CuCl₂ — polarisation run 1"].status).toBe(
+          "returned",
+        );
+        expect(byTitle["KCl stock for the reference compartment"]).toMatchObject({
+          status: "submitted",
+          signedRevisionNumber: 1,
+          currentRevisionNumber: 2,
+        });
+        expect(byTitle["Hexacyanoferrate couple on glassy carbon, 5 mM"].status).toBe("draft");
+      }
     }
   });
 });

@@ -2,14 +2,21 @@
 import { eq, sql } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
 import { insertProject } from "@/db/queries/projects";
-import { revisions, solutionComponents, solutions } from "@/db/schema";
+import { blockResults, solutionResults } from "@/db/schema";
 import type { Actor } from "@/lib/access/actor";
-import { computeSolution } from "@/lib/chem";
+import { computeSolution, ENGINE_VERSION } from "@/lib/chem";
 import { defaultSolutionBlockInput } from "@/lib/document/block-defaults";
 import { canonicalHash } from "@/lib/document/canonical-hash";
+import { extractSolutionBlocks } from "@/lib/document/extract-blocks";
+import { findTemplate } from "@/lib/document/templates";
 import { AppError } from "@/lib/errors";
-import { createEntry, listEntries, submitEntry } from "@/lib/notebook/entries";
-import { getCurrentContent, getRevisionHistory } from "@/lib/notebook/revisions";
+import { createEntry, listEntries, setEntryArchived } from "@/lib/notebook/entries";
+import { submitEntry } from "@/lib/notebook/review";
+import {
+  getCurrentContent,
+  getRevisionHistory,
+  getRevisionWithSolutions,
+} from "@/lib/notebook/revisions";
 import { saveEntryContent } from "@/lib/notebook/save-entry";
 import { getDb } from "@/lib/server/database";
 import { createLabWithMembers } from "../support/db";
@@ -149,7 +156,7 @@ describe("entries, revisions and server-computed solutions", () => {
     expect(current.content).toEqual(docWith(paragraph("good")));
   });
 
-  it("recomputes every solution block on the server and stores one row per block per revision", async () => {
+  it("recomputes every solution block on the server and stores its result once", async () => {
     const { id } = await createEntry(researcher, { projectId, title: "NaCl 0.1 m" });
     const block = nacl(0.1);
     const saved = await saveEntryContent(researcher, id, {
@@ -158,12 +165,14 @@ describe("entries, revisions and server-computed solutions", () => {
       content: docWith(paragraph("Electrolyte:"), { type: "solutionBlock", attrs: block }),
     });
     expect(saved.solutions).toBe(1);
-    const [revision] = await getDb().select().from(revisions).where(eq(revisions.entryId, id));
     const rows = await getDb()
-      .select()
-      .from(solutions)
-      .where(eq(solutions.revisionId, revision.id));
+      .select({ block: blockResults, result: solutionResults })
+      .from(blockResults)
+      .innerJoin(solutionResults, eq(solutionResults.id, blockResults.resultId))
+      .where(eq(blockResults.entryId, id));
     expect(rows).toHaveLength(1);
+    const [{ block: row, result }] = rows;
+    expect(row).toMatchObject({ blockId: block.blockId, fromRevision: 1, toRevision: null });
     // The browser runs the same engine on the same inputs: the stored numbers must equal it.
     const client = computeSolution({
       temperatureC: 25,
@@ -171,17 +180,65 @@ describe("entries, revisions and server-computed solutions", () => {
       model: "auto",
       components: [{ formula: "NaCl", amount: 0.1, unit: "mol/kg" }],
     });
-    expect(rows[0].ionicStrengthMolal).toBeCloseTo(client.ionicStrength.molal, 12);
-    expect(rows[0].ionicStrengthMolal).toBeCloseTo(0.1, 12); // I = ½ Σ m z² = 0.1 for a 1:1 salt (definition)
-    expect(rows[0].debyeLengthNm).toBeCloseTo(client.debyeLengthNm ?? NaN, 12);
-    expect(rows[0].modelUsed).toBe(client.model.used);
-    expect(rows[0].species).toEqual(expect.arrayContaining(["NaCl", "Na+", "Cl-"]));
-    const components = await getDb()
-      .select()
-      .from(solutionComponents)
-      .where(eq(solutionComponents.solutionId, rows[0].id));
-    expect(components).toHaveLength(1);
-    expect(components[0].molality).toBeCloseTo(0.1, 12);
+    expect(result.ionicStrengthMolal).toBeCloseTo(client.ionicStrength.molal, 12);
+    expect(result.ionicStrengthMolal).toBeCloseTo(0.1, 12); // I = ½ Σ m z² = 0.1 for a 1:1 salt (definition)
+    expect(row.ionicStrengthMolal).toBe(result.ionicStrengthMolal);
+    expect(result.debyeLengthNm).toBeCloseTo(client.debyeLengthNm ?? NaN, 12);
+    expect(result.modelUsed).toBe(client.model.used);
+    expect(result.engineVersion).toBe(ENGINE_VERSION);
+    expect(result.species).toEqual(expect.arrayContaining(["NaCl", "Na+", "Cl-"]));
+    expect(result.composition).toEqual({ "Na+": 0.1, "Cl-": 0.1 });
+    const stored = result.results as { components: { molality: number }[] };
+    expect(stored.components[0].molality).toBeCloseTo(0.1, 12);
+  });
+
+  it("writes nothing for an unchanged block, closes a changed or removed one, and each revision keeps its own numbers", async () => {
+    const { id } = await createEntry(researcher, { projectId, title: "Three blocks" });
+    // Amounts no other test of this lab uses, so no stored result is shared with them.
+    const a = nacl(0.101);
+    const b = { ...nacl(0.202), blockId: "blk-nacl-b" };
+    const c = { ...nacl(0.303), blockId: "blk-nacl-c" };
+    const solution = (attrs: unknown) => ({ type: "solutionBlock", attrs });
+    const first = await saveEntryContent(researcher, id, {
+      baseRevision: 0,
+      title: "Three blocks",
+      content: docWith(solution(a), solution(b), solution(c)),
+    });
+    expect(first.solutionRowsWritten).toBe(6); // three block rows, three computed results
+    // Text changes only: no solution row at all.
+    const second = await saveEntryContent(researcher, id, {
+      baseRevision: 1,
+      title: "Three blocks",
+      content: docWith(paragraph("note"), solution(a), solution(b), solution(c)),
+    });
+    expect(second.solutionRowsWritten).toBe(0);
+    // Block b changes, block c is removed: one new result, one new block row, two rows closed.
+    const bChanged = { ...b, components: [{ ...b.components[0], amount: 0.252 }] };
+    const third = await saveEntryContent(researcher, id, {
+      baseRevision: 2,
+      title: "Three blocks",
+      content: docWith(solution(a), solution(bChanged)),
+    });
+    expect(third.solutionRowsWritten).toBe(2);
+    const rows = await getDb().select().from(blockResults).where(eq(blockResults.entryId, id));
+    const interval = (blockId: string) =>
+      rows
+        .filter((r) => r.blockId === blockId)
+        .map((r) => [r.fromRevision, r.toRevision])
+        .sort();
+    expect(interval("blk-nacl-a")).toEqual([[1, null]]);
+    expect(interval("blk-nacl-b")).toEqual([
+      [1, 3],
+      [3, null],
+    ]);
+    expect(interval("blk-nacl-c")).toEqual([[1, 3]]);
+    // I = m for a 1:1 salt (definition of ionic strength); 4 decimals hide float rounding.
+    const ionic = async (n: number) =>
+      (await getRevisionWithSolutions(researcher, id, n)).solutions
+        .map((s) => `${s.blockId} ${s.ionicStrengthMolal?.toFixed(4)}`)
+        .sort();
+    expect(await ionic(2)).toEqual(["blk-nacl-a 0.1010", "blk-nacl-b 0.2020", "blk-nacl-c 0.3030"]);
+    expect(await ionic(3)).toEqual(["blk-nacl-a 0.1010", "blk-nacl-b 0.2520"]);
   });
 
   it("ignores numbers a client put into the document: only inputs are read", async () => {
@@ -213,7 +270,11 @@ describe("entries, revisions and server-computed solutions", () => {
       content: docWith({ type: "solutionBlock", attrs: bad }),
     });
     expect(saved.created).toBe(true);
-    const [row] = await getDb().select().from(solutions).where(eq(solutions.entryId, id));
+    const [{ row }] = await getDb()
+      .select({ row: solutionResults })
+      .from(blockResults)
+      .innerJoin(solutionResults, eq(solutionResults.id, blockResults.resultId))
+      .where(eq(blockResults.entryId, id));
     expect(row.ionicStrengthMolal).toBeNull();
     expect(row.results).toMatchObject({ status: "error" });
   });
@@ -226,7 +287,9 @@ describe("entries, revisions and server-computed solutions", () => {
     });
     const current = await getCurrentContent(researcher, id);
     expect(current.number).toBe(1);
-    const rows = await getDb().select().from(solutions).where(eq(solutions.entryId, id));
+    const rows = await getDb().select().from(blockResults).where(eq(blockResults.entryId, id));
+    const template = findTemplate("cell-preparation")!;
+    expect(rows).toHaveLength(extractSolutionBlocks(template.build()).length);
     expect(rows.length).toBeGreaterThanOrEqual(1);
   });
 
@@ -264,6 +327,37 @@ describe("entries, revisions and server-computed solutions", () => {
     expect(mine.map((e) => e.id)).toContain(id);
   });
 
+  it("refuses to save or submit an archived entry (409) and never archives one under review", async () => {
+    const { id } = await createEntry(researcher, { projectId, title: "Archived draft" });
+    await saveEntryContent(researcher, id, {
+      baseRevision: 0,
+      title: "Archived draft",
+      content: docWith(paragraph("before archiving")),
+    });
+    await setEntryArchived(researcher, id, true);
+    const save = await errorOf(
+      saveEntryContent(researcher, id, {
+        baseRevision: 1,
+        title: "Archived draft",
+        content: docWith(paragraph("after archiving")),
+      }),
+    );
+    expect(save.status).toBe(409);
+    expect(save.message).toBe("This entry is archived; restore it before you edit it.");
+    const submit = await errorOf(submitEntry(researcher, id));
+    expect(submit.status).toBe(409);
+    expect(submit.message).toBe("This entry is archived; restore it before you submit it.");
+    expect((await getCurrentContent(researcher, id)).number).toBe(1);
+
+    await setEntryArchived(researcher, id, false);
+    await submitEntry(researcher, id);
+    const archive = await errorOf(setEntryArchived(researcher, id, true));
+    expect(archive.status).toBe(409);
+    expect(archive.message).toMatch(/stays in the review queue/);
+    const queue = await listEntries(supervisor, { status: "submitted" });
+    expect(queue.map((e) => e.id)).toContain(id);
+  });
+
   it("the database itself refuses to change or delete a revision", async () => {
     const { id } = await createEntry(researcher, { projectId, title: "Immutable" });
     await saveEntryContent(researcher, id, {
@@ -282,6 +376,41 @@ describe("entries, revisions and server-computed solutions", () => {
       .execute(sql`delete from revisions where entry_id = ${id}`)
       .then(() => "applied", serverMessage);
     expect(del).toMatch(/revisions rows are immutable \(DELETE refused\)/);
+  });
+
+  it("the database refuses to change stored results and allows only closing a block row", async () => {
+    const { id } = await createEntry(researcher, { projectId, title: "Guarded results" });
+    await saveEntryContent(researcher, id, {
+      baseRevision: 0,
+      title: "Guarded results",
+      content: docWith({ type: "solutionBlock", attrs: nacl(0.1) }),
+    });
+    const serverMessage = (e: unknown) =>
+      String((e as { cause?: Error }).cause?.message ?? (e as Error).message);
+    const attempt = (statement: ReturnType<typeof sql>) =>
+      getDb()
+        .execute(statement)
+        .then(() => "applied", serverMessage);
+    expect(
+      await attempt(
+        sql`update solution_results set ionic_strength_molal = 9 where lab_id = ${researcher.labId}`,
+      ),
+    ).toMatch(/solution_results rows are immutable/);
+    expect(
+      await attempt(sql`delete from solution_results where lab_id = ${researcher.labId}`),
+    ).toMatch(/solution_results rows are immutable/);
+    expect(
+      await attempt(sql`update block_results set ionic_strength_molal = 9 where entry_id = ${id}`),
+    ).toMatch(/immutable except closing/);
+    expect(await attempt(sql`delete from block_results where entry_id = ${id}`)).toMatch(
+      /immutable except closing/,
+    );
+    expect(
+      await attempt(sql`update block_results set to_revision = 2 where entry_id = ${id}`),
+    ).toBe("applied");
+    expect(
+      await attempt(sql`update block_results set to_revision = 3 where entry_id = ${id}`),
+    ).toMatch(/immutable except closing/);
   });
 
   it("never shows or saves another lab's entry", async () => {

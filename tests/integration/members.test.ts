@@ -1,5 +1,6 @@
 // @vitest-environment node
 import { describe, expect, it } from "vitest";
+import { listAuditEvents } from "@/db/queries/audit";
 import { findUserById } from "@/db/queries/users";
 import { actorForUserId } from "@/lib/access/actor";
 import { AppError } from "@/lib/errors";
@@ -26,6 +27,15 @@ describe("role changes and deactivation", () => {
     expect(updated.role).toBe("supervisor");
     // The next request sees the new role: the actor is reloaded from the database.
     expect((await actorForUserId(members.researcher.userId))?.role).toBe("supervisor");
+    const events = await listAuditEvents(getDb(), members.admin.labId);
+    const change = events.filter((e) => e.action === "member.role_changed");
+    expect(change).toHaveLength(1);
+    expect(change[0]).toMatchObject({
+      actorName: members.admin.name,
+      targetType: "user",
+      targetId: members.researcher.userId,
+      details: { from: "researcher", to: "supervisor" },
+    });
   });
 
   it("refuses role changes by researchers and supervisors", async () => {

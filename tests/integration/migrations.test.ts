@@ -1,7 +1,10 @@
 // @vitest-environment node
 import { Client } from "pg";
 import { afterAll, describe, expect, it } from "vitest";
-import { runMigrations } from "@/scripts/migrate";
+import { cpSync, mkdirSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
+import { MIGRATIONS_FOLDER, runMigrations } from "@/scripts/migrate";
 
 // Runs the committed migrations on a brand-new, empty database and checks what they made.
 const superuserUrl = process.env.TEST_SUPERUSER_URL;
@@ -35,31 +38,37 @@ describe("migrations on an empty database", () => {
         "select tablename from pg_tables where schemaname='public' order by 1",
       ),
     );
-    expect(tables.rows.map((r) => r.tablename)).toEqual(
-      expect.arrayContaining([
-        "labs",
-        "users",
-        "invitations",
-        "audit_events",
-        "sign_in_attempts",
-        "projects",
-        "entries",
-        "revisions",
-        "solutions",
-        "solution_components",
-        "signatures",
-        "attachments",
-        "species",
-      ]),
-    );
+    expect(tables.rows.map((r) => r.tablename)).toEqual([
+      "attachments",
+      "audit_events",
+      "block_results",
+      "entries",
+      "invitations",
+      "labs",
+      "mail_outbox",
+      "projects",
+      "review_requests",
+      "revisions",
+      "sign_in_attempts",
+      "signatures",
+      "solution_results",
+      "species",
+      "users",
+    ]);
     const triggers = await withClient(targetUrl, (c) =>
       c.query<{ tgname: string }>(
         "select tgname from pg_trigger where not tgisinternal order by 1",
       ),
     );
-    expect(triggers.rows.map((r) => r.tgname)).toEqual(
-      expect.arrayContaining(["revisions_immutable", "signatures_immutable"]),
-    );
+    expect(triggers.rows.map((r) => r.tgname)).toEqual([
+      "audit_events_append_only",
+      "block_results_guard",
+      "entries_guard",
+      "entries_no_delete",
+      "revisions_immutable",
+      "signatures_immutable",
+      "solution_results_immutable",
+    ]);
   });
 
   it("enforces the role check constraint", async () => {
@@ -78,5 +87,99 @@ describe("migrations on an empty database", () => {
         );
     });
     expect(error?.message).toMatch(/users_role_valid/);
+  });
+});
+
+describe("migration 0003 carries solutions saved before it into the new tables", () => {
+  const superuser = process.env.TEST_SUPERUSER_URL!;
+  const legacyDb = `ionleaf_legacy_${process.pid}`;
+  const legacyUrl = superuser.replace(/\/[^/]+$/, `/${legacyDb}`);
+  const partial = mkdtempSync(join(tmpdir(), "ionleaf-migrations-"));
+
+  afterAll(async () => {
+    await withClient(superuser, (c) => c.query(`drop database if exists ${legacyDb}`));
+    rmSync(partial, { recursive: true, force: true });
+  });
+
+  it("keeps every revision's numbers and leaves the current revision's blocks open", async () => {
+    // The migrations up to 0002, as a database saved before 0003 had them.
+    const journal = JSON.parse(
+      readFileSync(join(MIGRATIONS_FOLDER, "meta/_journal.json"), "utf8"),
+    ) as {
+      entries: { tag: string }[];
+    };
+    const before = journal.entries.slice(0, 3);
+    expect(before.map((e) => e.tag)).toEqual([
+      "0000_init",
+      "0001_immutable_revisions",
+      "0002_entry_status_amended",
+    ]);
+    mkdirSync(join(partial, "meta"));
+    writeFileSync(
+      join(partial, "meta/_journal.json"),
+      JSON.stringify({ ...journal, entries: before }),
+    );
+    for (const e of before)
+      cpSync(join(MIGRATIONS_FOLDER, `${e.tag}.sql`), join(partial, `${e.tag}.sql`));
+
+    await withClient(superuser, (c) => c.query(`create database ${legacyDb}`));
+    await runMigrations(legacyUrl, partial);
+    await withClient(legacyUrl, async (c) => {
+      const lab = (
+        await c.query<{ id: string }>(
+          "insert into labs (name, slug) values ('L', 'l') returning id",
+        )
+      ).rows[0].id;
+      const user = (
+        await c.query<{ id: string }>(
+          "insert into users (lab_id, email, name, password_hash, role) values ($1, 'a@b.example', 'A', 'h', 'researcher') returning id",
+          [lab],
+        )
+      ).rows[0].id;
+      const project = (
+        await c.query<{ id: string }>(
+          "insert into projects (lab_id, name, created_by_id) values ($1, 'P', $2) returning id",
+          [lab, user],
+        )
+      ).rows[0].id;
+      const entry = (
+        await c.query<{ id: string }>(
+          "insert into entries (lab_id, project_id, title, author_id, current_revision_number) values ($1, $2, 'E', $3, 2) returning id",
+          [lab, project, user],
+        )
+      ).rows[0].id;
+      for (const [number, molality] of [
+        [1, 0.1],
+        [2, 0.2],
+      ] as const) {
+        const revision = (
+          await c.query<{ id: string }>(
+            "insert into revisions (entry_id, number, title, content, content_hash, author_id) values ($1, $2, 'E', '{}', $3, $4) returning id",
+            [entry, number, "a".repeat(64), user],
+          )
+        ).rows[0].id;
+        await c.query(
+          `insert into solutions (lab_id, entry_id, revision_id, block_id, name, temperature_c, solvent, model_requested, model_used, ionic_strength_molal, species, results, inputs)
+           values ($1, $2, $3, 'blk-1', 'S', 25, 'water', 'auto', 'pitzer', $4, '{NaCl}', '{"status":"ok"}', $5)`,
+          [lab, entry, revision, molality, JSON.stringify({ blockId: "blk-1", molality })],
+        );
+      }
+    });
+    await runMigrations(legacyUrl);
+    const rows = await withClient(legacyUrl, (c) =>
+      c.query<{
+        from_revision: number;
+        to_revision: number | null;
+        ionic_strength_molal: number;
+        engine_version: string;
+      }>(
+        `select b.from_revision, b.to_revision, r.ionic_strength_molal, r.engine_version
+           from block_results b join solution_results r on r.id = b.result_id order by b.from_revision`,
+      ),
+    );
+    expect(rows.rows).toEqual([
+      { from_revision: 1, to_revision: 2, ionic_strength_molal: 0.1, engine_version: "legacy" },
+      { from_revision: 2, to_revision: null, ionic_strength_molal: 0.2, engine_version: "legacy" },
+    ]);
   });
 });

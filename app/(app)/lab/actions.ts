@@ -5,6 +5,7 @@ import { runAction, type ActionState } from "@/lib/http/action";
 import { inviteMember, withdrawInvitation } from "@/lib/labs/invitations";
 import { changeMemberRole, setMemberActivation } from "@/lib/labs/members";
 import { formDataToObject } from "@/lib/validation/parse";
+import { retryLabOutbox } from "@/lib/labs/outbox";
 
 // Every action is a public POST endpoint: each one resolves the actor itself, and the
 // service it calls checks the role and the lab.
@@ -57,5 +58,13 @@ export async function withdrawInvitationAction(
     await withdrawInvitation(actor, values.invitationId ?? "");
     revalidatePath("/lab");
     return { ok: true, message: "Invitation withdrawn." };
+  });
+}
+
+export async function retryOutboxAction(_prev: ActionState, _form: FormData): Promise<ActionState> {
+  return runAction(async () => {
+    const count = await retryLabOutbox(await requireActor());
+    revalidatePath("/lab");
+    return { ok: true, message: count ? `Sending ${count} mail(s) again.` : "Nothing to resend." };
   });
 }

@@ -3,23 +3,34 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { InviteForm } from "@/components/lab/invite-form";
 import { MemberRow } from "@/components/lab/member-row";
+import { WithdrawInvitation } from "@/components/lab/withdraw-invitation";
 import { requireActor } from "@/lib/access/actor";
-import { roleCan } from "@/lib/access/policy";
+import { roleCan } from "@/lib/rules/role-permissions";
 import { listRecentAudit } from "@/lib/labs/audit";
 import { listMembers, listPendingInvitations } from "@/lib/labs/members";
 import { mailCatcherConfigured } from "@/lib/mail/catcher";
-import { changeRoleAction, inviteMemberAction, setActivationAction } from "./actions";
+import { getLabOutbox } from "@/lib/labs/outbox";
+import { ActionButton } from "@/components/ui/action-button";
+import {
+  changeRoleAction,
+  inviteMemberAction,
+  setActivationAction,
+  retryOutboxAction,
+  withdrawInvitationAction,
+} from "./actions";
 
 export const metadata: Metadata = { title: "Lab settings" };
 
 export default async function LabSettingsPage() {
   const actor = await requireActor();
   if (!roleCan(actor.role, "lab.manage")) notFound();
-  const [members, invitations, audit] = await Promise.all([
+  const [members, invitations, audit, outbox] = await Promise.all([
     listMembers(actor),
     listPendingInvitations(actor),
-    listRecentAudit(actor),
+    listRecentAudit(actor, 10),
+    getLabOutbox(actor),
   ]);
+  const unsent = outbox.filter((m) => m.state !== "sent").length;
   return (
     <div className="space-y-8">
       <div className="flex flex-wrap items-end justify-between gap-4">
@@ -43,12 +54,17 @@ export default async function LabSettingsPage() {
         {invitations.length ? (
           <ul className="mt-5 divide-y divide-ink/5 text-sm" aria-label="Open invitations">
             {invitations.map((i) => (
-              <li key={i.id} className="flex justify-between py-2">
+              <li key={i.id} className="flex flex-wrap items-center justify-between gap-2 py-2">
                 <span>
                   {i.email} <span className="text-ink-soft">as {i.role}</span>
                 </span>
-                <span className="text-xs text-ink-soft">
+                <span className="flex items-center gap-3 text-xs text-ink-soft">
                   sent by {i.invitedBy}, expires {i.expiresAt.toISOString().slice(0, 10)}
+                  <WithdrawInvitation
+                    invitationId={i.id}
+                    email={i.email}
+                    withdraw={withdrawInvitationAction}
+                  />
                 </span>
               </li>
             ))}
@@ -81,8 +97,45 @@ export default async function LabSettingsPage() {
         </table>
       </section>
 
+      <section className="card p-6" aria-labelledby="outbox-heading">
+        <div className="mb-3 flex flex-wrap items-center justify-between gap-3">
+          <h2 id="outbox-heading" className="text-base font-semibold">
+            Notification mails
+          </h2>
+          {unsent > 0 ? <ActionButton action={retryOutboxAction} label="Retry unsent now" /> : null}
+        </div>
+        <p className="mb-3 text-xs text-ink-soft">
+          Review requests and decisions are mailed after the action is saved; a failed send is
+          retried with growing delays and shown here.
+        </p>
+        {outbox.length === 0 ? (
+          <p className="text-sm text-ink-soft">No notification mails yet.</p>
+        ) : (
+          <ul className="divide-y divide-ink/5 text-sm" aria-label="Notification mails">
+            {outbox.map((m) => (
+              <li key={m.id} className="flex flex-wrap items-center justify-between gap-2 py-2">
+                <span>
+                  {m.subject} <span className="text-ink-soft">to {m.to}</span>
+                </span>
+                <span
+                  className={`chip ${m.state === "sent" ? "bg-lagoon-50 text-lagoon-700" : m.state === "failing" ? "bg-red-50 text-red-800" : "bg-ink/5 text-ink-soft"}`}
+                  title={m.lastError ?? undefined}
+                >
+                  {m.state === "failing" ? `failing after ${m.attempts} attempt(s)` : m.state}
+                </span>
+              </li>
+            ))}
+          </ul>
+        )}
+      </section>
+
       <section className="card p-6">
-        <h2 className="mb-3 text-base font-semibold">Recent lab activity</h2>
+        <div className="mb-3 flex flex-wrap items-center justify-between gap-3">
+          <h2 className="text-base font-semibold">Recent lab activity</h2>
+          <Link href="/lab/audit" className="text-sm text-copper-700 hover:underline">
+            Full audit trail →
+          </Link>
+        </div>
         <ol className="space-y-1.5 text-sm">
           {audit.map((e) => (
             <li key={e.id} className="flex gap-3">

@@ -1,41 +1,37 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
-import { StatusChip } from "@/components/entries/status-chip";
 import { requireActor } from "@/lib/access/actor";
-import { roleCan } from "@/lib/access/policy";
-import { listEntries } from "@/lib/notebook/entries";
+import { getReviewQueue } from "@/lib/notebook/review";
+import { roleCan } from "@/lib/rules/role-permissions";
 
 export const metadata: Metadata = { title: "Review queue" };
 
 export default async function ReviewQueuePage() {
   const actor = await requireActor();
   if (!roleCan(actor.role, "review.read")) notFound();
-  const submitted = await listEntries(actor, {
-    status: "submitted",
-    sort: "updatedAt",
-    order: "asc",
-  });
+  const queue = await getReviewQueue(actor);
   return (
     <div className="space-y-6">
       <div>
         <h1 className="text-2xl font-semibold tracking-tight">Review queue</h1>
         <p className="text-sm text-ink-soft">
-          Entries submitted for countersignature, oldest first.
+          Entries submitted for your countersignature, oldest first. Your own entries go to another
+          supervisor.
         </p>
       </div>
       <ul className="divide-y divide-ink/5 card" aria-label="Submitted entries">
-        {submitted.length === 0 ? (
+        {queue.length === 0 ? (
           <li className="px-5 py-4 text-sm text-ink-soft">The queue is empty.</li>
         ) : null}
-        {submitted.map((e) => (
+        {queue.map((e) => (
           <li
-            key={e.id}
+            key={e.entryId}
             className="flex flex-wrap items-center justify-between gap-3 px-5 py-3 text-sm"
           >
             <span>
               <Link
-                href={`/entries/${e.id}`}
+                href={`/review/${e.entryId}`}
                 className="font-medium hover:text-copper-700 hover:underline"
               >
                 {e.title}
@@ -46,12 +42,17 @@ export default async function ReviewQueuePage() {
               </span>
             </span>
             <span className="flex items-center gap-3 text-xs text-ink-soft">
-              submitted revision {e.revision},{" "}
-              {new Date(e.updatedAt).toLocaleString("en-GB", {
+              {e.amendment ? (
+                <span className="chip bg-amber-50 text-amber-800">amendment</span>
+              ) : null}
+              {e.addressedToMe ? (
+                <span className="chip bg-copper-50 text-copper-700">asked of you</span>
+              ) : null}
+              revision {e.revision}, submitted{" "}
+              {new Date(e.submittedAt).toLocaleString("en-GB", {
                 dateStyle: "medium",
                 timeStyle: "short",
               })}
-              <StatusChip status={e.status} />
             </span>
           </li>
         ))}

@@ -3,7 +3,7 @@ import { useActionState } from "react";
 import { Field } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
 import { SubmitButton } from "@/components/ui/submit-button";
-import { initialActionState } from "@/lib/http/action-state";
+import { initialActionState } from "@/lib/contract/action-state";
 import { signInAction } from "./actions";
 
 export function SignInForm({ next }: { next?: string }) {

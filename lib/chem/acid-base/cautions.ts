@@ -3,7 +3,7 @@
  * plus each reagent's special hazard. Hazard statements are common knowledge of the reagents'
  * GHS classifications, not a substitute for the safety data sheet.
  */
-export const GENERAL_CAUTIONS: readonly string[] = [
+const GENERAL_CAUTIONS: readonly string[] = [
   "Computed pH is a model estimate: check it with a pH meter calibrated at the working temperature and adjust.",
   "Read the safety data sheet of every reagent and follow your institution's chemical hygiene plan and local rules.",
 ];

@@ -8,7 +8,6 @@ import { ChemInputError } from "../errors";
 import { waterDensityGPerMl } from "../solvents/water";
 import { type ActivityConvention, CONVENTION_LIMIT_I, log10GammaFactory } from "./activity";
 import {
-  ACID_SYSTEMS,
   type AcidSystemData,
   type BufferSystemId,
   WATER_IONIZATION,
@@ -84,5 +83,3 @@ export function ionicStrengthWarning(
   if (ionicStrengthMolal <= limit) return null;
   return `I = ${Number(ionicStrengthMolal.toPrecision(3))} mol/kg is beyond the range of the ${conditions.convention} activity convention (I ≤ ${limit} mol/kg): the pH is less certain.`;
 }
-
-export { ACID_SYSTEMS };

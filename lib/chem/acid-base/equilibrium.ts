@@ -64,7 +64,7 @@ export function waterIons(pH: number, pKw: number, log10Gamma: Log10Gamma): IonA
   ];
 }
 
-export function speciesAt(
+function speciesAt(
   systems: readonly SystemAtT[],
   fixedIons: readonly IonAmount[],
   pH: number,
@@ -88,7 +88,7 @@ const PH_HIGH = 16;
 const BOUND_MARGIN = 1e-6;
 
 /** The pH at which the solution is electrically neutral, for fixed γ. */
-export function neutralPH(
+function neutralPH(
   systems: readonly SystemAtT[],
   fixedIons: readonly IonAmount[],
   pKw: number,

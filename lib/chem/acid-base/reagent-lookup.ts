@@ -35,7 +35,7 @@ for (const reagent of BUFFER_REAGENTS) {
   BY_KEY.set(`name:${reagent.name.toLowerCase()}`, { kind: "buffer", reagent });
 }
 
-export function findReagent(text: string): ResolvedReagent | undefined {
+function findReagent(text: string): ResolvedReagent | undefined {
   if (typeof text !== "string" || text.length > 200) return undefined;
   const lower = text.trim().toLowerCase();
   const byName = BY_KEY.get(`name:${lower}`);

@@ -23,7 +23,7 @@ function positive(value: number | undefined, field: string, what: string): numbe
   return value;
 }
 
-export function componentAmountMol(c: SpeciateComponent, i: number): number {
+function componentAmountMol(c: SpeciateComponent, i: number): number {
   const field = `components[${i}]`;
   if (c.massG !== undefined)
     return positive(c.massG, `${field}.massG`, `Mass of ${c.formula}`) / molarMass(c.formula);
@@ -50,7 +50,7 @@ export function componentAmountMol(c: SpeciateComponent, i: number): number {
 }
 
 /** Totals per buffer system and the fixed (non-H+/OH−) ions, in mol, from the components. */
-export function tallyComponents(components: readonly SpeciateComponent[]) {
+function tallyComponents(components: readonly SpeciateComponent[]) {
   const systemMol = new Map<BufferSystemId, number>();
   const ionMol = new Map<string, { charge: number; mol: number }>();
   const hazards: (string | undefined)[] = [];
@@ -90,7 +90,7 @@ export function equilibrate(
     const data = acidSystem(id)!;
     systems.push({ data, pKa: conditions.pKaOf(data), totalMolal: total });
   }
-  const state = solveEquilibrium(systems, fixedIons, conditions.pKw, conditions.gammaAt);
+  const state = solveEquilibrium(systems, fixedIons, conditions.pKw, (i) => conditions.gammaAt(i));
   const log10Gamma = conditions.gammaAt(state.ionicStrengthMolal);
   const systemOf = new Map<string, { id: BufferSystemId; total: number }>();
   for (const s of systems)

@@ -36,7 +36,7 @@ export interface SpeciesResult {
   fraction?: number;
 }
 
-export interface SystemResult {
+interface SystemResult {
   id: BufferSystemId;
   name: string;
   totalMolar: number;

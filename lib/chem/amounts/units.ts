@@ -7,8 +7,7 @@ import { ChemInputError } from "../errors";
 
 const math = create({ unitDependencies });
 
-export type UnitKind =
-  "molal" | "molar" | "mass" | "volume" | "mass-concentration" | "mass-fraction";
+type UnitKind = "molal" | "molar" | "mass" | "volume" | "mass-concentration" | "mass-fraction";
 
 export interface UnitInfo {
   kind: UnitKind;

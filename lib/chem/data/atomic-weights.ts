@@ -149,7 +149,3 @@ export const ELEMENTS: ReadonlyMap<string, ElementData> = new Map(
       : { symbol, name, atomicWeight, atomicNumber: index + 1 },
   ]),
 );
-
-export function atomicWeight(symbol: string): number | undefined {
-  return ELEMENTS.get(symbol)?.atomicWeight;
-}

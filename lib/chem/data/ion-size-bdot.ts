@@ -7,11 +7,10 @@
  */
 import { interpolate } from "../interpolate";
 
-export const BDOT_SOURCE =
-  "Helgeson (1969) Am. J. Sci. 267, 729; ion sizes and Ḃ of EQ3/6 llnl.dat";
+// Source: Helgeson (1969) Am. J. Sci. 267, 729; ion sizes and Ḃ of EQ3/6 llnl.dat
 
 /** Ḃ (kg/mol) against temperature (°C), EQ3/6 llnl.dat. */
-export const BDOT_BY_TEMPERATURE: readonly [number, number][] = [
+const BDOT_BY_TEMPERATURE: readonly [number, number][] = [
   [0.01, 0.0374],
   [25, 0.041],
   [60, 0.0438],

@@ -5,7 +5,7 @@
  * llnl.dat database). Kielland's "4.0–4.5" class is entered as 4.0, as Freeze & Cherry (1979)
  * App. IV reproduce it. Tetraalkylammonium sizes are Kielland's as recalled (memory).
  */
-export const KIELLAND_ION_SIZE_SOURCE = "Kielland (1937) J. Am. Chem. Soc. 59, 1675–1678";
+// Source: Kielland (1937) J. Am. Chem. Soc. 59, 1675–1678
 
 export const KIELLAND_ION_SIZE_ANGSTROM: Readonly<Record<string, number>> = {
   "H+": 9,

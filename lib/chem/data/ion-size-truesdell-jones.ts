@@ -6,8 +6,7 @@
  * (tests/fixtures/reference/ion-size.csv, confirmed). b = 0 marks ions for which WATEQ4F uses the
  * plain extended equation with its own å.
  */
-export const TRUESDELL_JONES_SOURCE =
-  "Truesdell & Jones (1974) J. Res. USGS 2, 233–248; parameters of WATEQ4F (Ball & Nordstrom 1991)";
+// Source: Truesdell & Jones (1974) J. Res. USGS 2, 233–248; parameters of WATEQ4F (Ball & Nordstrom 1991)
 
 export const TRUESDELL_JONES_PARAMETERS: Readonly<
   Record<string, { aAngstrom: number; b: number }>

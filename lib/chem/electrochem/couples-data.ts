@@ -22,8 +22,7 @@ export interface CoupleData {
   note?: string;
 }
 
-export const COUPLES_SOURCE =
-  "CRC Handbook of Chemistry and Physics, 92nd ed. (2011), Vanýsek, Electrochemical Series";
+// Source: CRC Handbook of Chemistry and Physics, 92nd ed. (2011), Vanýsek, Electrochemical Series
 
 const c = (
   id: string,

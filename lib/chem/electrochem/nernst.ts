@@ -50,7 +50,7 @@ export function nernstSlopeV(temperatureC: number, n = 1): number {
 
 const BY_ID = new Map(COUPLES.map((couple) => [couple.id.toLowerCase(), couple]));
 
-export function findCouple(id: string): CoupleData {
+function findCouple(id: string): CoupleData {
   const couple = BY_ID.get(
     String(id ?? "")
       .trim()

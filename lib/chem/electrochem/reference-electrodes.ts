@@ -36,7 +36,7 @@ const BF = "Bard & Faulkner (2001) Electrochemical Methods, 2nd ed.";
 const SSR =
   "Sawyer, Sobkowiak & Roberts (1995) Electrochemistry for Chemists, 2nd ed., §5.2 (from memory)";
 
-export const REFERENCE_ELECTRODES: readonly ReferenceData[] = [
+const REFERENCE_ELECTRODES: readonly ReferenceData[] = [
   {
     id: "SHE",
     name: "standard hydrogen electrode",

@@ -75,13 +75,15 @@ export interface AutoChoice {
 function checkContext(c: AutoContext): void {
   const bad = (field: string, message: string) =>
     new ChemInputError(message, { field, code: "invalid_input" });
-  if (!c || !Array.isArray(c.ions)) throw bad("ions", "The ions must be a list.");
-  c.ions.forEach((ion, i) => {
+  const ions: unknown = c?.ions;
+  if (!Array.isArray(ions)) throw bad("ions", "The ions must be a list.");
+  (ions as readonly (Partial<ModelIon> | null | undefined)[]).forEach((ion, i) => {
     if (!ion || typeof ion.formula !== "string")
       throw bad(`ions[${i}].formula`, "Each ion needs a formula.");
-    if (!(Number.isInteger(ion.charge) && Math.abs(ion.charge) <= 12))
+    const { charge, molality } = ion;
+    if (!(typeof charge === "number" && Number.isInteger(charge) && Math.abs(charge) <= 12))
       throw bad(`ions[${i}].charge`, "An ion's charge must be a whole number from −12 to 12.");
-    if (!(Number.isFinite(ion.molality) && ion.molality >= 0))
+    if (!(typeof molality === "number" && Number.isFinite(molality) && molality >= 0))
       throw bad(`ions[${i}].molality`, "A molality must be a finite, non-negative number.");
   });
   if (!(Number.isFinite(c.ionicStrengthMolal) && c.ionicStrengthMolal >= 0))

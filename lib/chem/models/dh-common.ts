@@ -22,7 +22,7 @@ function formatTexNumber(value: number): string {
   return `${Number(mantissa)}\\times10^{${Number(exponent)}}`;
 }
 
-export function waterOnlyNote(label: string, what: string, solvent: string): string[] {
+function waterOnlyNote(label: string, what: string, solvent: string): string[] {
   return solvent === "water"
     ? []
     : [`${label}: ${what} were fitted for water; for ${solvent} they are an extrapolation.`];
@@ -96,7 +96,7 @@ export function commonFormLnGamma(
   return out;
 }
 
-export function evaluateExtendedForm(
+function evaluateExtendedForm(
   input: ActivityModelInput,
   beta: ArrayLike<number>,
   b: ArrayLike<number>,

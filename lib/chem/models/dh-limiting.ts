@@ -10,7 +10,7 @@ import type { ModelRange } from "./range";
 import type { ActivityModel, ActivityModelInput } from "./types";
 import { chargeProductMagnitude, dhFamilyOutput, substitutedCore, texNumber } from "./dh-common";
 
-export const DH_LIMITING_SQRT_I_MAX_1_1 = 0.1;
+const DH_LIMITING_SQRT_I_MAX_1_1 = 0.1;
 
 export function limitingLawSqrtIMax(chargeProduct: number): number {
   return DH_LIMITING_SQRT_I_MAX_1_1 / chargeProduct;

@@ -43,7 +43,7 @@ export function listActivityModels(): ActivityModelSummary[] {
   return [
     {
       id: "auto",
-      label: "Automatic (most accurate model available)",
+      label: "Automatic (best model in range)",
       formulaTex: "",
       validityNote: "Chooses by composition, ionic strength and solvent, and says why.",
     },

@@ -42,7 +42,7 @@ export function validateSolutionInput(input: SolutionInput): {
       { field: "densityGPerMl", code: "bad_density" },
     );
   }
-  const requested = (input.model ?? "auto") as ActivityModelId | "auto";
+  const requested = input.model ?? "auto";
   if (typeof requested !== "string")
     throw new ChemInputError('The model must be a model id or "auto".', {
       field: "model",

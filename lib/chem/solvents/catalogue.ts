@@ -67,7 +67,7 @@ const WATER: SolventData = {
   aliases: ["H2O", "aqueous"],
 };
 
-export const SOLVENTS: readonly SolventData[] = [
+const SOLVENTS: readonly SolventData[] = [
   WATER,
   ...NON_AQUEOUS.map(([id, name, formula, min, max, eps, rho, aliases]) => ({
     id,
@@ -86,7 +86,7 @@ const BY_NAME = new Map<string, SolventData>();
 for (const s of SOLVENTS)
   for (const n of [s.id, s.name, s.formula, ...s.aliases]) BY_NAME.set(n.toLowerCase(), s);
 
-export function findSolvent(idOrName: string): SolventData | undefined {
+function findSolvent(idOrName: string): SolventData | undefined {
   return BY_NAME.get(String(idOrName).trim().toLowerCase());
 }
 

@@ -26,7 +26,7 @@ function polynomial(coefficients: readonly number[], x: number): number {
   return value;
 }
 
-export function assertWaterTemperature(temperatureC: number): void {
+function assertWaterTemperature(temperatureC: number): void {
   const { min, max } = WATER_TEMPERATURE_RANGE_C;
   if (!Number.isFinite(temperatureC) || temperatureC < min || temperatureC > max) {
     throw new ChemInputError(

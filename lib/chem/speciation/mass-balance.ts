@@ -129,11 +129,15 @@ export function solveMassBalance(
   const { coupling: C, matrix: M, rhs } = system;
   const nS = small.length;
   const nL = large.length;
+  const sides = [small, large];
   for (let i = 0; i < totals.length; i++) if (position[i] < 0) free[i] = totals[i];
   for (let step = 0; step < MAX_NEWTON_STEPS; step++) {
     // Residual f_i = m_i + Σ m_p − T_i and the Jacobian's diagonal and coupling blocks.
-    for (const i of small) ((D[i] = free[i]), (r[i] = free[i] - totals[i]));
-    for (const i of large) ((D[i] = free[i]), (r[i] = free[i] - totals[i]));
+    for (const side of sides)
+      for (const i of side) {
+        D[i] = free[i];
+        r[i] = free[i] - totals[i];
+      }
     C.fill(0);
     for (let p = 0; p < links.length; p++) {
       const { cation: c, anion: a } = links[p];

@@ -59,7 +59,7 @@ export function dissociationBalance(ions: IonCount[]): { key: string; charge: nu
   return { key: compositionKey(total, 0), charge };
 }
 
-export interface SpeciesSummary {
+interface SpeciesSummary {
   formula: string;
   name: string;
   kind: SpeciesKind;

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { roleCan } from "@/lib/access/policy";
+import { roleCan } from "@/lib/rules/role-permissions";
 import { navigationFor } from "@/lib/shell/navigation";
 
 describe("role permissions", () => {

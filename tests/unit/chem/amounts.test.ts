@@ -170,7 +170,7 @@ describe("amounts that cannot be right are typed errors", () => {
     [{ formula: "NaCl", amount: 120, unit: "wt%" }, "components[0].amount", /below 1/],
     [{ formula: "NaCl", amount: 1, unit: "" }, "components[0].unit", /missing/],
   ])("%j → %s", (component, field, message) => {
-    const error = errorOf(() => solve([component as SolutionComponentInput]));
+    const error = errorOf(() => solve([component]));
     expect(error.field).toBe(field);
     expect(error.message).toMatch(message);
   });

@@ -144,6 +144,7 @@ interface Property {
 }
 
 const couples = chem.listCouples().map((c) => c.id);
+const probes = chem.listRedoxProbes().map((p) => p.id);
 const references = chem.listReferenceElectrodes().map((r) => r.id);
 const buffers = [
   "phosphate",
@@ -334,6 +335,172 @@ const PROPERTIES: Property[] = [
     }),
     call: (i: never) => chem.speciate(i),
   },
+  // Electrochemistry of the traces work (conductivity, junctions, peaks): the same contract.
+  {
+    name: "waterViscosityMPaS",
+    runs: 100,
+    arbitrary: mostly(plausible(-10, 120)),
+    call: (t: number) => chem.waterViscosityMPaS(t),
+  },
+  {
+    name: "conductivityTemperatureRatio",
+    runs: 100,
+    arbitrary: mostly(plausible(-10, 120)),
+    call: (t: number) => chem.conductivityTemperatureRatio(t),
+  },
+  {
+    name: "limitingIonicConductivity",
+    runs: 150,
+    arbitrary: fc.tuple(
+      fc.oneof(fc.constantFrom(...ionFormulas), formulaText),
+      mostly(plausible(0, 100)),
+    ),
+    call: ([ion, t]: [string, number]) => chem.limitingIonicConductivity(ion, t),
+  },
+  {
+    name: "onsagerCoefficients",
+    runs: 100,
+    arbitrary: mostly(plausible(0, 100)),
+    call: (t: number) => chem.onsagerCoefficients(t),
+  },
+  {
+    name: "electrolyteConductivity",
+    runs: 200,
+    arbitrary: fc.record({
+      ions: fc.array(
+        fc.record({
+          formula: fc.oneof(fc.constantFrom(...ionFormulas), formulaText),
+          concentrationMolPerL: mostly(plausible(0, 2)),
+        }),
+        { maxLength: 5 },
+      ),
+      temperatureC: fc.option(mostly(plausible(0, 100)), { nil: undefined }),
+    }),
+    call: (i: never) => chem.electrolyteConductivity(i),
+  },
+  {
+    name: "liquidJunctionPotential",
+    runs: 200,
+    arbitrary: fc.record({
+      fillingSolution: fc.array(
+        fc.record({
+          formula: fc.oneof(fc.constantFrom(...ionFormulas), formulaText),
+          concentrationMolPerL: mostly(plausible(0, 4)),
+        }),
+        { maxLength: 4 },
+      ),
+      cellElectrolyte: fc.array(
+        fc.record({
+          formula: fc.oneof(fc.constantFrom(...ionFormulas), formulaText),
+          concentrationMolPerL: mostly(plausible(0, 2)),
+        }),
+        { maxLength: 4 },
+      ),
+      temperatureC: fc.option(mostly(plausible(0, 100)), { nil: undefined }),
+    }),
+    call: (i: never) => chem.liquidJunctionPotential(i),
+  },
+  {
+    name: "junctionCorrectedPotential",
+    runs: 100,
+    arbitrary: fc.tuple(oddNumber, oddNumber),
+    call: ([e, j]: [number, number]) => chem.junctionCorrectedPotential(e, j),
+  },
+  {
+    name: "referenceFillingSolution",
+    runs: 50,
+    arbitrary: fc.oneof(fc.constantFrom(...references), fc.string({ maxLength: 8 })),
+    call: (id: never) => chem.referenceFillingSolution(id),
+  },
+  {
+    name: "uncompensatedResistanceDisk",
+    runs: 100,
+    arbitrary: fc.record({
+      radiusM: mostly(plausible(0.0001, 0.01)),
+      conductivitySPerM: mostly(plausible(0.001, 20)),
+    }),
+    call: (i: never) => chem.uncompensatedResistanceDisk(i),
+  },
+  {
+    name: "iRDrop",
+    runs: 100,
+    arbitrary: fc.record({ currentA: oddNumber, resistanceOhm: oddNumber }),
+    call: (i: never) => chem.iRDrop(i),
+  },
+  {
+    name: "findRedoxProbe",
+    runs: 50,
+    arbitrary: fc.oneof(fc.constantFrom(...probes), fc.string({ maxLength: 10 })),
+    call: (id: string) => chem.findRedoxProbe(id),
+  },
+  {
+    name: "diffusionCoefficient",
+    runs: 150,
+    arbitrary: fc.tuple(
+      fc.oneof(fc.constantFrom(...probes), fc.string({ maxLength: 10 })),
+      fc.constantFrom("oxidized", "reduced", "neither"),
+      mostly(plausible(0, 100)),
+    ),
+    call: ([id, form, t]: [string, never, number]) => chem.diffusionCoefficient(id, form, t),
+  },
+  {
+    name: "randlesSevcikPeakCurrent",
+    runs: 150,
+    arbitrary: fc.record({
+      electrons: fc.option(fc.oneof(fc.integer({ min: -1, max: 4 }), oddNumber), {
+        nil: undefined,
+      }),
+      electrodeAreaCm2: mostly(plausible(0.001, 2)),
+      concentrationMolPerL: mostly(plausible(0.0001, 0.1)),
+      diffusionCoefficientCm2PerS: mostly(plausible(0.000001, 0.0001)),
+      scanRateVPerS: mostly(plausible(0.001, 10)),
+      temperatureC: fc.option(mostly(plausible(0, 100)), { nil: undefined }),
+    }),
+    call: (i: never) => chem.randlesSevcikPeakCurrent(i),
+  },
+  {
+    name: "reversiblePeakSeparationV",
+    runs: 100,
+    arbitrary: fc.tuple(fc.oneof(fc.integer({ min: -1, max: 4 }), oddNumber), oddNumber),
+    call: ([n, t]: [number, number]) => chem.reversiblePeakSeparationV(n, t),
+  },
+  {
+    name: "expectedPeakCurrent",
+    runs: 150,
+    arbitrary: fc.record({
+      probe: fc.oneof(fc.constantFrom(...probes), fc.string({ maxLength: 10 })),
+      formInSolution: fc.constantFrom("oxidized", "reduced"),
+      electrodeAreaCm2: mostly(plausible(0.001, 2)),
+      concentrationMolPerL: mostly(plausible(0.0001, 0.1)),
+      scanRateVPerS: mostly(plausible(0.001, 10)),
+      temperatureC: fc.option(mostly(plausible(0, 100)), { nil: undefined }),
+    }),
+    call: (i: never) => chem.expectedPeakCurrent(i),
+  },
+  {
+    name: "judgeVoltammogram",
+    runs: 200,
+    arbitrary: fc.record({
+      measured: fc.record({
+        deltaEpV: fc.option(mostly(plausible(0, 0.5)), { nil: null }),
+        anodicPeakCurrentA: fc.option(mostly(plausible(-0.001, 0.001)), { nil: null }),
+        cathodicPeakCurrentA: fc.option(mostly(plausible(-0.001, 0.001)), { nil: null }),
+      }),
+      expected: fc.option(
+        fc.record({
+          peakCurrentA: mostly(plausible(0, 0.001)),
+          forwardPeak: fc.constantFrom("anodic", "cathodic"),
+        }),
+        { nil: undefined },
+      ),
+      electrons: fc.option(fc.oneof(fc.integer({ min: -1, max: 4 }), oddNumber), {
+        nil: undefined,
+      }),
+      temperatureC: fc.option(mostly(plausible(0, 100)), { nil: undefined }),
+      uncompensatedResistanceOhm: fc.option(mostly(plausible(0, 1000)), { nil: undefined }),
+    }),
+    call: (i: never) => chem.judgeVoltammogram(i),
+  },
 ];
 
 // Functions without arguments: each returns finite data.
@@ -345,6 +512,8 @@ const CONSTANTS: [string, () => unknown][] = [
   ["ACTIVITY_MODELS", () => chem.ACTIVITY_MODELS],
   ["AUTO_CANDIDATES", () => chem.AUTO_CANDIDATES.map((c) => c.id)],
   ["MODEL_REGISTRY", () => Object.keys(chem.MODEL_REGISTRY)],
+  ["listIonicConductivities", () => chem.listIonicConductivities()],
+  ["listRedoxProbes", () => chem.listRedoxProbes()],
 ];
 
 describe("every exported function of lib/chem: finite results or typed errors, each call under 10 ms", () => {
@@ -382,7 +551,7 @@ describe("every exported function of lib/chem: finite results or typed errors, e
 
   it("functions without arguments return finite data", () => {
     for (const [name, call] of CONSTANTS) expect(check(name, call).kind, name).toBe("value");
-    expect(CONSTANTS).toHaveLength(7);
+    expect(CONSTANTS).toHaveLength(9);
   });
 
   it("covers every function exported from lib/chem/index.ts", () => {

@@ -48,8 +48,8 @@ describe("Debye screening length from εr (general expression)", () => {
   ])(
     "%s %f M: %f nm within 3 % (Hu & Mi 2013, Environ. Sci. Technol. 47, 3715, as tested in pyEQL)",
     (salt, c, nm) => {
-      const r = solve([{ formula: salt as string, amount: c as number, unit: "mol/L" }]);
-      expect(Math.abs(r.debyeLengthNm! / (nm as number) - 1)).toBeLessThan(0.03);
+      const r = solve([{ formula: salt, amount: c, unit: "mol/L" }]);
+      expect(Math.abs(r.debyeLengthNm! / nm - 1)).toBeLessThan(0.03);
     },
   );
 

@@ -9,10 +9,7 @@ import { computeSolution } from "@/lib/chem";
 const solve = (
   components: { formula: string; amount: number; unit: string }[],
   temperatureC = 25,
-) =>
-  computeSolution({ temperatureC, solvent: "water", model: "auto", components } as Parameters<
-    typeof computeSolution
-  >[0]);
+) => computeSolution({ temperatureC, solvent: "water", model: "auto", components });
 
 describe("auto model choice with Pitzer and SIT", () => {
   it("1 mol/kg NaCl: Pitzer, γ± 0.657 (Pitzer, Peiper & Busey 1984 table) within 0.5 %", () => {

@@ -35,10 +35,10 @@ describe("solvent catalogue", () => {
     ["dichloromethane", 8.8, 9.2, 1.31, 1.33],
   ])("%s: εr in [%f, %f], ρ in [%f, %f] g/mL at 25 °C", (id, epsLow, epsHigh, rhoLow, rhoHigh) => {
     const s = solvents.find((x) => x.id === id)!;
-    expect(s.relativePermittivity25C).toBeGreaterThanOrEqual(epsLow as number);
-    expect(s.relativePermittivity25C).toBeLessThanOrEqual(epsHigh as number);
-    expect(s.densityGPerMl25C).toBeGreaterThanOrEqual(rhoLow as number);
-    expect(s.densityGPerMl25C).toBeLessThanOrEqual(rhoHigh as number);
+    expect(s.relativePermittivity25C).toBeGreaterThanOrEqual(epsLow);
+    expect(s.relativePermittivity25C).toBeLessThanOrEqual(epsHigh);
+    expect(s.densityGPerMl25C).toBeGreaterThanOrEqual(rhoLow);
+    expect(s.densityGPerMl25C).toBeLessThanOrEqual(rhoHigh);
   });
 
   it("finds solvents by abbreviation", () => {

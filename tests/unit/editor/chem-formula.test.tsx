@@ -19,8 +19,9 @@ describe("ChemFormula", () => {
     expect(html(formula)).toBe(expected);
   });
 
-  it("keeps the plain formula as the accessible name", () => {
-    const { getByLabelText } = render(<ChemFormula formula="SO4^2-" />);
-    expect(getByLabelText("SO4^2-")).toBeInTheDocument();
+  it("gives screen readers the plain formula and hides the typeset copy from them", () => {
+    const { container } = render(<ChemFormula formula="SO4^2-" />);
+    expect(container.querySelector(".sr-only")?.textContent).toBe("SO4^2-");
+    expect(container.querySelector("[aria-hidden]")?.textContent).toBe("SO42−");
   });
 });

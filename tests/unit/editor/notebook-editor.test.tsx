@@ -104,8 +104,8 @@ describe("NotebookEditor", () => {
       expect(typesIn(doc)).toContain(type);
     }
     // A new cell block links to the entry's last solution block.
-    const solution = doc.content!.find((n) => n.type === "solutionBlock")!;
-    const cell = doc.content!.find((n) => n.type === "cellBlock")!;
+    const solution = doc.content.find((n) => n.type === "solutionBlock")!;
+    const cell = doc.content.find((n) => n.type === "cellBlock")!;
     expect(cell.attrs!.electrolyteBlockId).toBe(solution.attrs!.blockId);
     const parsed = entryDocumentSchema.safeParse(doc);
     expect(parsed.success ? [] : describeDocumentErrors(parsed.error)).toEqual([]);
@@ -176,13 +176,13 @@ describe("NotebookEditor", () => {
     act(() => {
       editor.commands.insertSolutionBlock({ name: "Stock" });
     });
-    const original = editor.getJSON().content!.find((n) => n.type === "solutionBlock")!;
+    const original = editor.getJSON().content.find((n) => n.type === "solutionBlock")!;
     act(() => {
       editor.commands.insertContentAt(editor.state.doc.content.size, original);
     });
     const ids = editor
       .getJSON()
-      .content!.filter((n) => n.type === "solutionBlock")
+      .content.filter((n) => n.type === "solutionBlock")
       .map((n) => n.attrs!.blockId);
     expect(ids).toHaveLength(2);
     expect(new Set(ids).size).toBe(2);
@@ -210,20 +210,20 @@ describe("copy and paste of live blocks", () => {
     const { editor } = await mountEditor({
       initialContent: findTemplate("electrolyte-stock")!.build(),
     });
-    const original = editor.getJSON().content!.find((n) => n.type === "solutionBlock")!;
+    const original = editor.getJSON().content.find((n) => n.type === "solutionBlock")!;
     let clipboardHtml = "";
     editor.state.doc.descendants((node, pos) => {
       if (node.type.name !== "solutionBlock") return true;
       const slice = editor.state.doc.slice(pos, pos + node.nodeSize);
       const serialised = editor.view.serializeForClipboard(slice);
-      clipboardHtml = (serialised.dom as HTMLElement).innerHTML;
+      clipboardHtml = serialised.dom.innerHTML;
       return false;
     });
     act(() => {
       editor.commands.focus("end");
       editor.view.pasteHTML(clipboardHtml, pasteEvent());
     });
-    const blocks = editor.getJSON().content!.filter((n) => n.type === "solutionBlock");
+    const blocks = editor.getJSON().content.filter((n) => n.type === "solutionBlock");
     expect(blocks).toHaveLength(2);
     expect(blocks[1].attrs!.components).toEqual(original.attrs!.components);
     expect(blocks[1].attrs!.name).toBe(original.attrs!.name);
@@ -247,7 +247,7 @@ describe("copy and paste of live blocks", () => {
         pasteEvent(),
       );
     });
-    const block = editor.getJSON().content!.find((n) => n.type === "solutionBlock")!;
+    const block = editor.getJSON().content.find((n) => n.type === "solutionBlock")!;
     expect(block.attrs).not.toHaveProperty("computedIonicStrength");
     // The forged inputs fail the block schema as a whole, so the pasted block starts empty.
     expect(block.attrs!.name).toBe("");

@@ -3,10 +3,14 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { EntryWorkspace } from "@/components/entries/entry-workspace";
 import { StatusChip } from "@/components/entries/status-chip";
+import { IntegrityBadge } from "@/components/review/integrity-badge";
+import { SignatureManifest } from "@/components/review/signature-manifest";
 import { requireActor } from "@/lib/access/actor";
+import { revisionHash } from "@/lib/document/prepare-revision";
 import { isAppError } from "@/lib/errors";
+import { listPossibleReviewers } from "@/lib/notebook/review";
 import { openEntry } from "@/lib/notebook/revisions";
-import { archiveEntryAction, submitEntryAction } from "./actions";
+import { amendEntryAction, archiveEntryAction, submitEntryAction } from "./actions";
 import { EntryActions } from "./entry-actions";
 
 export const metadata: Metadata = { title: "Entry" };
@@ -14,24 +18,40 @@ export const metadata: Metadata = { title: "Entry" };
 async function load(id: string) {
   const actor = await requireActor();
   try {
-    const { current, ...header } = await openEntry(actor, id);
-    return { actor, header, current };
+    const opened = await openEntry(actor, id);
+    const reviewers = opened.actions.submit.allowed ? await listPossibleReviewers(actor) : [];
+    return { opened, reviewers };
   } catch (error) {
     if (isAppError(error) && error.code === "not_found") notFound();
     throw error;
   }
 }
 
+function Row({ label, children }: { label: string; children: React.ReactNode }) {
+  return (
+    <div className="flex justify-between gap-2">
+      <span className="text-ink-soft">{label}</span>
+      <span className="text-right">{children}</span>
+    </div>
+  );
+}
+
 export default async function EntryPage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
-  const { actor, header, current } = await load(id);
-  const { entry, authorName, projectName } = header;
-  const isAuthor = entry.authorId === actor.userId;
-  const editable =
-    isAuthor && (entry.status === "draft" || entry.status === "returned") && !entry.archivedAt;
+  const { opened, reviewers } = await load(id);
+  const { entry, authorName, projectName, actions, current, storedResults, signatures } = opened;
+  const editable = actions.edit.allowed;
+  const intact =
+    current.number === 0 || revisionHash(current.title, current.content) === current.contentHash;
   return (
-    <div className="grid gap-8 lg:grid-cols-[minmax(0,1fr)_16rem]">
-      <div className="min-w-0">
+    <div className="grid gap-8 lg:grid-cols-[minmax(0,1fr)_17rem]">
+      <div className="min-w-0 space-y-4">
+        {entry.status === "amended" && entry.amendmentReason ? (
+          <p className="rounded-md border border-amber-200 bg-amber-50 px-3 py-2 text-sm text-amber-900">
+            Amendment of countersigned revision {entry.signedRevisionNumber}:{" "}
+            {entry.amendmentReason}
+          </p>
+        ) : null}
         <EntryWorkspace
           key={`${entry.id}:${current.number}`}
           entryId={entry.id}
@@ -39,6 +59,7 @@ export default async function EntryPage({ params }: { params: Promise<{ id: stri
           content={current.content}
           revision={current.number}
           editable={editable}
+          storedResults={storedResults}
         />
       </div>
       <aside className="space-y-5 text-sm" aria-label="About this entry">
@@ -47,40 +68,61 @@ export default async function EntryPage({ params }: { params: Promise<{ id: stri
             <span className="text-ink-soft">Status</span>
             <StatusChip status={entry.status} />
           </div>
-          <div className="flex justify-between gap-2">
-            <span className="text-ink-soft">Project</span>
-            <span className="text-right">{projectName}</span>
-          </div>
-          <div className="flex justify-between gap-2">
-            <span className="text-ink-soft">Author</span>
-            <span className="text-right">{authorName}</span>
-          </div>
-          <div className="flex justify-between gap-2">
-            <span className="text-ink-soft">Revision</span>
-            <span className="font-mono tabular">{entry.currentRevisionNumber}</span>
-          </div>
+          {opened.amendedAfterCountersignature ? (
+            <p className="chip bg-amber-50 text-amber-800" data-testid="amended-after">
+              amended after countersignature
+            </p>
+          ) : null}
+          <Row label="Project">{projectName}</Row>
+          <Row label="Author">{authorName}</Row>
+          <Row label="Revision">
+            <span className="font-mono tabular-nums">{entry.currentRevisionNumber}</span>
+          </Row>
+          {current.number > 0 ? (
+            <Row label="Content">
+              <IntegrityBadge
+                intact={intact}
+                chainUnbroken
+                href={`/api/entries/${entry.id}/revisions/${current.number}/verification`}
+              />
+            </Row>
+          ) : null}
           {entry.archivedAt ? <p className="chip bg-ink/5 text-ink-soft">archived</p> : null}
           <Link href={`/entries/${entry.id}/revisions`} className="btn-quiet w-full">
-            Revision history
+            History
           </Link>
+          {actions.countersign.allowed ? (
+            <Link href={`/review/${entry.id}`} className="btn-primary w-full">
+              Review this entry
+            </Link>
+          ) : null}
         </div>
         <EntryActions
           entryId={entry.id}
-          canSubmit={
-            isAuthor &&
-            (entry.status === "draft" || entry.status === "returned") &&
-            entry.currentRevisionNumber > 0
-          }
-          canArchive={isAuthor || actor.role === "admin"}
+          canSubmit={actions.submit.allowed}
+          canArchive={actions.archive.allowed || actions.restore.allowed}
+          canAmend={actions.amend.allowed}
           archived={entry.archivedAt !== null}
+          reviewers={reviewers}
           submit={submitEntryAction}
           archive={archiveEntryAction}
+          amend={amendEntryAction}
         />
-        {!editable && isAuthor && entry.status === "submitted" ? (
-          <p className="text-xs text-ink-soft">
-            Submitted entries are read-only while they wait for a countersignature.
-          </p>
+        {!actions.edit.allowed && actions.edit.code === "conflict" ? (
+          <p className="text-xs text-ink-soft">{actions.edit.reason}</p>
         ) : null}
+        {signatures.length > 0 ? (
+          <div className="space-y-2 card p-4">
+            <p className="font-medium">Export the signed record</p>
+            <a className="btn-quiet w-full" href={`/api/entries/${entry.id}/export?format=pdf`}>
+              PDF with signature manifest
+            </a>
+            <a className="btn-quiet w-full" href={`/api/entries/${entry.id}/export?format=json`}>
+              JSON archive
+            </a>
+          </div>
+        ) : null}
+        <SignatureManifest signatures={signatures} />
       </aside>
     </div>
   );

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { requireActor, assertCan } from "@/lib/access/actor";
-import { roleCan } from "@/lib/access/policy";
+import { roleCan } from "@/lib/rules/role-permissions";
 import { listCaughtMessages, mailCatcherConfigured } from "@/lib/mail/catcher";
 
 export const metadata: Metadata = { title: "Mail catcher" };

@@ -1,4 +1,5 @@
 import { authedRoute, readJson } from "@/lib/http/route";
+import { ENTRY_ACTIONS } from "@/lib/rules/entry-rules";
 import { setEntryArchived } from "@/lib/notebook/entries";
 import { openEntry } from "@/lib/notebook/revisions";
 import { archiveEntrySchema } from "@/lib/validation/entries";
@@ -7,7 +8,7 @@ import { parseInput } from "@/lib/validation/parse";
 type Params = { id: string };
 
 export const GET = authedRoute<Params>(async (_request, actor, params) => {
-  const { entry, authorName, projectName, current } = await openEntry(actor, params.id);
+  const { entry, authorName, projectName, actions, current } = await openEntry(actor, params.id);
   return Response.json({
     entry: {
       id: entry.id,
@@ -17,6 +18,8 @@ export const GET = authedRoute<Params>(async (_request, actor, params) => {
       authorName,
       projectName,
       archived: entry.archivedAt !== null,
+      /** What the signed-in member may do with it now (lib/rules/entry-rules.ts). */
+      actions: ENTRY_ACTIONS.filter((action) => actions[action].allowed),
     },
     content: current.content,
   });

@@ -6,14 +6,14 @@
  */
 import type { BufferSystemId } from "./pka-goldberg-2002";
 
-export interface ReagentContribution {
+interface ReagentContribution {
   system: BufferSystemId;
   level: number;
   /** Buffer units per formula unit (borax gives 4 boron: 2 B(OH)3 + 2 B(OH)4−). */
   count: number;
 }
 
-export interface CounterIon {
+interface CounterIon {
   formula: string;
   charge: number;
   count: number;

@@ -23,9 +23,7 @@ export interface BinarySaltResult extends ActivityModelOutput {
   meanActivityCoefficient: number;
 }
 
-export { stoichiometry } from "./stoichiometry";
-
-export function meanLnGamma(
+function meanLnGamma(
   lnGammaCation: number,
   lnGammaAnion: number,
   cationCharge: number,

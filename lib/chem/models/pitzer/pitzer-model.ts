@@ -9,7 +9,7 @@ import type { ActivityModel, ActivityModelInput, ActivityModelOutput } from "../
 import { assemblePitzerSystem } from "./assemble";
 import { pitzerMixture } from "./equations";
 
-export const PITZER_FORMULA_TEX = String.raw`\ln\gamma_M = z_M^2 F + \sum_a m_a (2B_{Ma} + Z C_{Ma}) + \sum_c m_c \big(2\Phi_{Mc} + \sum_a m_a \psi_{Mca}\big) + \sum_{a<a'} m_a m_{a'} \psi_{Maa'} + |z_M| \sum_c \sum_a m_c m_a C_{ca}`;
+const PITZER_FORMULA_TEX = String.raw`\ln\gamma_M = z_M^2 F + \sum_a m_a (2B_{Ma} + Z C_{Ma}) + \sum_c m_c \big(2\Phi_{Mc} + \sum_a m_a \psi_{Mca}\big) + \sum_{a<a'} m_a m_{a'} \psi_{Maa'} + |z_M| \sum_c \sum_a m_c m_a C_{ca}`;
 
 function checkInput(input: ActivityModelInput): void {
   if (input.solvent !== "water") {

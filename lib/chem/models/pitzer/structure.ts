@@ -10,16 +10,12 @@ import { ionKey } from "./ion-key";
 import { binaryParameters, psiParameter, thetaParameter } from "./parameter-tables";
 import { pairAtTemperature } from "./temperature/pair-at-temperature";
 
-import { saltIonicStrength } from "./stoichiometry";
-
-export { saltIonicStrength };
-
 export function fmt(x: number, digits = 3): string {
   return Number(x.toPrecision(digits)).toString();
 }
 
 /** Everything about a pair that does not depend on the molalities (cached per ion set and T). */
-export interface PairStructure {
+interface PairStructure {
   row: PitzerBinaryRow;
   terms: PitzerBinaryTerms;
   maxI: number;

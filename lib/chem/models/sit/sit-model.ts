@@ -18,17 +18,16 @@ import { waterActivityFromOsmotic } from "../../solution/osmotic";
 
 /** Ba_j of the SIT Debye–Hückel term, kg^½ mol^−½ (NEA-TDB convention, Grenthe et al. 1992). */
 const SIT_BA = 1.5;
-/** Upper ionic strength NEA-TDB quote for SIT (Grenthe et al. 1992 App. B). */
-export const SIT_MAX_IONIC_STRENGTH_MOLAL = 3.5;
 /**
- * Ionleaf's SIT range: ε are 25 °C values; NEA-TDB accept them within ±25 K, but against
+ * Ionleaf's SIT range (NEA-TDB quote SIT up to I ≈ 3.5 mol/kg; Grenthe et al. 1992 App. B):
+ * ε are 25 °C values; NEA-TDB accept them within ±25 K, but against
  * Pitzer, Peiper & Busey (1984) NaCl is +4.4 % off at 0 °C and +2.6 % at 20 °C (1 mol/kg), so
  * 20–30 °C is stated. Ionic strength: the largest I with every table value within 2 % (NaCl
  * 0.75 mol/kg at 20 °C +2.4 %, MgCl2 I = 0.3 −2.3 %, K2SO4 I = 0.03 +2.8 %; KNO3 0.5 mol/kg
  * +8 % against Robinson & Stokes 1959, from memory, so 1:1 to 0.2); 2:2 and higher charge
  * types are not stated.
  */
-export const SIT_RANGE: ModelRange = {
+const SIT_RANGE: ModelRange = {
   temperatureC: { min: 20, max: 30 },
   limits: chargeTypeRows({ "1:1": 0.2, "2:1": 0.2, "1:2": 0.01, "2:2": 0 }, 2),
   basis: "Ionleaf: largest I with every CRC table value within 2 %",
@@ -37,12 +36,12 @@ const LABEL = "SIT";
 
 const epsilonByPair = new Map(SIT_EPSILON_25C.map((r) => [`${r.cation}|${r.anion}`, r]));
 
-export function sitEpsilon(cation: string, anion: string): number | undefined {
+function sitEpsilon(cation: string, anion: string): number | undefined {
   return epsilonByPair.get(`${cation}|${anion}`)?.epsilonKgPerMol;
 }
 
 /** Cation–anion pairs present without a tabulated ε. */
-export function sitMissingPairs(ions: readonly ModelIon[]): string[] {
+function sitMissingPairs(ions: readonly ModelIon[]): string[] {
   const present = ions.filter((i) => i.molality > 0);
   const missing: string[] = [];
   for (const c of present.filter((i) => i.charge > 0))

@@ -1,7 +1,8 @@
-import { authedRoute } from "@/lib/http/route";
-import { submitEntry } from "@/lib/notebook/entries";
+import { authedRoute, readOptionalJson } from "@/lib/http/route";
+import { submitEntry } from "@/lib/notebook/review";
 
-export const POST = authedRoute<{ id: string }>(async (_request, actor, { id }) => {
-  await submitEntry(actor, id);
+/** Submit for countersignature: `{ reviewerId? }`; without one, every supervisor is asked. */
+export const POST = authedRoute<{ id: string }>(async (request, actor, { id }) => {
+  await submitEntry(actor, id, await readOptionalJson(request));
   return Response.json({ ok: true, status: "submitted" });
 });

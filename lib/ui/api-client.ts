@@ -1,3 +1,5 @@
+import type { ApiErrorBody } from "@/lib/contract/api-error";
+
 /**
  * The browser's side of Ionleaf's JSON API: one fetch helper that turns the typed error
  * body ({ error: { code, message, fieldErrors } }) into an ApiError the UI can switch on.
@@ -29,14 +31,7 @@ export async function apiFetch<T>(path: string, init: RequestInit = {}): Promise
       "The server cannot be reached. Your work is kept in this browser.",
     );
   }
-  const body = (await response.json().catch(() => null)) as {
-    error?: {
-      code: string;
-      message: string;
-      fieldErrors?: Record<string, string[]>;
-      details?: Record<string, unknown>;
-    };
-  } | null;
+  const body = (await response.json().catch(() => null)) as Partial<ApiErrorBody> | null;
   if (!response.ok) {
     const e = body?.error;
     throw new ApiError(

@@ -1,6 +1,6 @@
 import type { Role } from "@/db/schema/enums";
 import { AppError } from "@/lib/errors";
-import { roleCan, type Permission } from "./policy";
+import { roleCan, type Permission } from "./role-permissions";
 
 /** The signed-in member as every server-side decision sees them, reloaded from the database. */
 export interface Actor {

@@ -2,7 +2,7 @@
 import { seedDemo } from "@/lib/demo/seed";
 import { demoContent } from "@/lib/demo/content";
 import { closeDb, getDb } from "@/lib/server/database";
-import { truncateAll } from "@/tests/support/truncate";
+import { truncateAll } from "./truncate";
 
 async function main() {
   if (!/ionleaf_test/.test(process.env.DATABASE_URL ?? ""))

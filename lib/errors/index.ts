@@ -1,17 +1,11 @@
+import type { ApiErrorCode } from "@/lib/contract/api-error";
+
 /**
  * Ionleaf's error taxonomy. An AppError carries a public message (safe to show a user)
  * and an HTTP status; anything else that escapes is logged and shown as a generic error,
  * never as a stack trace.
  */
-export type AppErrorCode =
-  | "unauthenticated"
-  | "forbidden"
-  | "not_found"
-  | "conflict"
-  | "invalid_input"
-  | "rate_limited"
-  | "payload_too_large"
-  | "gone";
+export type AppErrorCode = Exclude<ApiErrorCode, "internal">;
 
 const STATUS: Record<AppErrorCode, number> = {
   unauthenticated: 401,
@@ -21,7 +15,9 @@ const STATUS: Record<AppErrorCode, number> = {
   invalid_input: 422,
   rate_limited: 429,
   payload_too_large: 413,
+  unsupported_media_type: 415,
   gone: 410,
+  unavailable: 503,
 };
 
 export type FieldErrors = Record<string, string[]>;

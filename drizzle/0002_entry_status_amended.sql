@@ -1,0 +1,2 @@
+ALTER TABLE "entries" DROP CONSTRAINT "entries_status_valid";--> statement-breakpoint
+ALTER TABLE "entries" ADD CONSTRAINT "entries_status_valid" CHECK (status in ('draft','submitted','countersigned','returned','amended'));

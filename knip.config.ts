@@ -1,0 +1,33 @@
+import type { KnipConfig } from "knip";
+
+// knip finds unused files, exports and dependencies; `npm test` fails on any finding.
+const config: KnipConfig = {
+  entry: [
+    "scripts/*.{ts,mjs}",
+    "scripts/support/*.ts",
+    "tests/**/*.test.{ts,tsx}",
+    "tests/support/reset-and-seed.ts",
+    "tests/support/empty-module.ts",
+    "vitest.e2e.config.mts",
+    // The engine's public API (docs/architecture.md, "The computation contract").
+    "lib/chem/index.ts",
+    // The trace parser's public API, wired into the upload route and trace block by main.
+    "lib/traces/index.ts",
+  ],
+  project: ["**/*.{ts,tsx,mts,mjs}"],
+  ignoreExportsUsedInFile: false,
+  ignoreDependencies: [
+    // Pinned to the same version as @tiptap/react, which would otherwise pull a newer one
+    // that does not resolve against the rest of tiptap 3.31.
+    "@tiptap/extension-bubble-menu",
+    "@tiptap/extension-floating-menu",
+    // Installed for the attachments work in progress (uploads and photo thumbnails).
+    "formidable",
+    "sharp",
+    "@types/formidable",
+    // The load and finder benchmarks (bench/) are being written against it.
+    "autocannon",
+  ],
+};
+
+export default config;
