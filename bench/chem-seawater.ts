@@ -23,11 +23,11 @@ const SEAWATER_SALTS: readonly { formula: string; molality: number }[] = [
   { formula: "MgSO4", molality: 0.0293 },
 ];
 
-export const SEAWATER_COMPOSITIONS = 1000;
+const SEAWATER_COMPOSITIONS = 1000;
 const TARGET_MICROSECONDS = 35;
 
 /** The k-th composition: each amount scaled by a different factor in 0.9–1.1. */
-export function seawaterComposition(k: number): SolutionInput {
+function seawaterComposition(k: number): SolutionInput {
   return {
     model: "truesdell-jones",
     temperatureC: 25,
@@ -52,7 +52,7 @@ export interface SeawaterBenchReport {
   pass: boolean;
 }
 
-export function runSeawaterBench(rounds = 15): SeawaterBenchReport {
+function runSeawaterBench(rounds = 15): SeawaterBenchReport {
   const inputs = Array.from({ length: SEAWATER_COMPOSITIONS }, (_, k) => seawaterComposition(k));
   // Warm-up pass, which also checks that every composition was speciated.
   let pairsSpeciated = 0;

@@ -63,7 +63,7 @@ export interface SweepBenchReport {
   pass: boolean;
 }
 
-export function runSweepBench(): SweepBenchReport {
+function runSweepBench(): SweepBenchReport {
   let points = 0;
   let silentJumps = 0;
   const walk = () => {

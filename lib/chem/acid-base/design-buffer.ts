@@ -19,7 +19,7 @@ import { equilibrate, solventKgPerLitre } from "./speciate";
 import type { DesignBufferInput, DesignBufferResult, RecipeComponent } from "./types";
 
 /** Largest gap between the requested pH and the recipe's own computed pH. */
-export const RECIPE_PH_TOLERANCE = 0.02;
+const RECIPE_PH_TOLERANCE = 0.02;
 
 function bufferReagent(formula: string, system: AcidSystemData, field: string): BufferReagent {
   const found = requireReagent(formula, field);

@@ -16,11 +16,7 @@ export function laliberteRow(saltFormula: string): LaliberteRow | undefined {
   return BY_SALT.get(saltFormula);
 }
 
-export function apparentDensityKgPerM3(
-  row: LaliberteRow,
-  soluteFraction: number,
-  t: number,
-): number {
+function apparentDensityKgPerM3(row: LaliberteRow, soluteFraction: number, t: number): number {
   const [c0, c1, c2, c3, c4] = row.c;
   return (
     ((c0 * soluteFraction + c1) * Math.exp(1e-6 * (t + c4) ** 2)) / (soluteFraction + c2 + c3 * t)

@@ -10,7 +10,7 @@ import type { ResolvedSpecies } from "../species/resolve";
 import { laliberteDensityGPerMl, laliberteRow } from "./laliberte-cooper";
 import type { LaliberteRow } from "./data/laliberte-2009";
 
-export type DensitySource = "given" | "laliberte-cooper" | "solvent";
+type DensitySource = "given" | "laliberte-cooper" | "solvent";
 
 export interface DensityUsed {
   gPerMl: number;

@@ -7,9 +7,9 @@ export type Composition = Record<string, number>;
 const CLOSE_FOR: Record<string, string> = { "(": ")", "[": "]", "{": "}" };
 
 /** Deepest bracket nesting accepted ("K3[Fe(CN)6]" has 2); deeper is a typing error, not chemistry. */
-export const MAX_FORMULA_NESTING = 8;
+const MAX_FORMULA_NESTING = 8;
 /** Largest subscript accepted (4 digits: polymers are entered by their repeat unit). */
-export const MAX_SUBSCRIPT = 9999;
+const MAX_SUBSCRIPT = 9999;
 
 function fail(message: string): never {
   throw new ChemInputError(message, { field: "formula", code: "bad_formula" });

@@ -28,9 +28,9 @@ export interface ParseOptions {
 }
 
 /** Longest formula accepted: the longest catalogue entry is 22 characters; beyond this is no formula. */
-export const MAX_FORMULA_LENGTH = 200;
+const MAX_FORMULA_LENGTH = 200;
 /** Largest ionic charge accepted (±12 covers the polyoxometalates). */
-export const MAX_ION_CHARGE = 12;
+const MAX_ION_CHARGE = 12;
 
 function fail(message: string): never {
   throw new ChemInputError(message, { field: "formula", code: "bad_formula" });

@@ -27,7 +27,7 @@ export interface AutoContext {
   chargeBalanced?: boolean;
 }
 
-export interface CandidateAssessment {
+interface CandidateAssessment {
   /** Every parameter the composition needs exists (whatever the range). */
   applicable: boolean;
   /** Why the composition is outside the stated range; empty when inside. */

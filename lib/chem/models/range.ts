@@ -25,13 +25,13 @@ export interface ModelRange {
   basis: string;
 }
 
-export interface ChargeType {
+interface ChargeType {
   zCation: number;
   zAnion: number;
 }
 
 /** Largest cation charge and largest anion charge magnitude among the ions present (at least 1). */
-export function chargeTypeOf(ions: readonly ModelIon[]): ChargeType {
+function chargeTypeOf(ions: readonly ModelIon[]): ChargeType {
   let zCation = 1;
   let zAnion = 1;
   for (const ion of ions) {
@@ -42,7 +42,7 @@ export function chargeTypeOf(ions: readonly ModelIon[]): ChargeType {
   return { zCation, zAnion };
 }
 
-export function chargeTypeLabel(ct: ChargeType): string {
+function chargeTypeLabel(ct: ChargeType): string {
   return `${ct.zCation}:${ct.zAnion}`;
 }
 
@@ -51,7 +51,7 @@ function within(t: number, window?: { min: number; max: number }): boolean {
 }
 
 /** The row that applies to a charge type at a temperature, if any. */
-export function limitFor(
+function limitFor(
   range: ModelRange,
   ct: ChargeType,
   temperatureC: number,
@@ -62,11 +62,7 @@ export function limitFor(
 }
 
 /** Largest ionic strength the model states for this charge type at this temperature (0 if none). */
-export function maxIonicStrengthFor(
-  range: ModelRange,
-  ct: ChargeType,
-  temperatureC: number,
-): number {
+function maxIonicStrengthFor(range: ModelRange, ct: ChargeType, temperatureC: number): number {
   return limitFor(range, ct, temperatureC)?.maxIonicStrengthMolal ?? 0;
 }
 

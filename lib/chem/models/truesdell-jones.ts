@@ -19,7 +19,7 @@ import {
 
 const LABEL = "Truesdell–Jones (b-dot)";
 
-export interface TruesdellJonesIonParameters {
+interface TruesdellJonesIonParameters {
   aAngstrom: number;
   b: number;
   source: "WATEQ4F" | "b-dot" | "assumed";
@@ -45,15 +45,6 @@ function truesdellJonesIonStatic(formula: string, charge: number): TruesdellJone
     ionCache.set(formula, cached);
   }
   return cached;
-}
-
-export function truesdellJonesIon(
-  formula: string,
-  charge: number,
-  temperatureC: number,
-): TruesdellJonesIonParameters {
-  const p = truesdellJonesIonStatic(formula, charge);
-  return p.source === "WATEQ4F" ? p : { ...p, b: bDot(temperatureC) };
 }
 
 interface TruesdellJonesForm extends CommonFormCoefficients {

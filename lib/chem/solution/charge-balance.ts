@@ -31,10 +31,7 @@ export interface ChargeBalance {
   offers: CounterIonOffer[];
 }
 
-export function balancingComponent(
-  excessEqPerKg: number,
-  ionFormula: string,
-): SolutionComponentInput {
+function balancingComponent(excessEqPerKg: number, ionFormula: string): SolutionComponentInput {
   const ion = resolveSpecies(ionFormula).ions[0];
   const amount = Math.abs(excessEqPerKg) / Math.abs(ion.charge);
   return { formula: ion.formula, amount: Number(amount.toPrecision(6)), unit: "mol/kg" };

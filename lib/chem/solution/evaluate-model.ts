@@ -16,7 +16,7 @@ import {
 /** Above this estimated paired fraction, free-ion results without speciation are flagged. */
 const PAIRING_MATTERS = 0.02;
 
-export interface SpeciationSummary {
+interface SpeciationSummary {
   /** True ionic strength of free ions and charged pairs (mol/kg). */
   ionicStrengthMolal: number;
   freeMolality: number[];

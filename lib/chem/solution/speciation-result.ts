@@ -2,7 +2,7 @@
 import type { PairSpecies } from "../speciation/ion-association";
 import type { SolutionIon } from "./solution-ions";
 
-export interface SpeciesAmountResult {
+interface SpeciesAmountResult {
   formula: string;
   charge: number;
   molality: number;
@@ -11,7 +11,7 @@ export interface SpeciesAmountResult {
   activity: number;
 }
 
-export interface IonPairResult extends SpeciesAmountResult {
+interface IonPairResult extends SpeciesAmountResult {
   /** The ions that form the pair. */
   cation: string;
   anion: string;

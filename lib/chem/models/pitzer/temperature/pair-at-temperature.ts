@@ -16,8 +16,8 @@ import { saltIonicStrength } from "../stoichiometry";
 import { evaluateForm } from "./forms";
 
 const REFERENCE_TEMPERATURE_C = 25;
-export const DERIVATIVE_SPAN_K = 15;
-export const TWENTY_FIVE_ONLY_SPAN_K = 0.5;
+const DERIVATIVE_SPAN_K = 15;
+const TWENTY_FIVE_ONLY_SPAN_K = 0.5;
 
 export interface PairAtTemperature {
   terms: PitzerBinaryTerms;
