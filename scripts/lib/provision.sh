@@ -58,14 +58,16 @@ pg_run() {
 # pick_pg_data_dir PREFERRED FALLBACK_NAME: a data folder the server user can write.
 pick_pg_data_dir() {
   local preferred="$1" fallback="/var/tmp/$2"
-  mkdir -p "$preferred"
   if is_root; then
-    chown postgres:postgres "$preferred" 2>/dev/null
+    mkdir -p "$preferred" 2>/dev/null && chown postgres:postgres "$preferred" 2>/dev/null
     if runuser -u postgres -- test -w "$preferred" 2>/dev/null; then echo "$preferred"; return 0; fi
     mkdir -p "$fallback" && chown postgres:postgres "$fallback" && chmod 700 "$fallback"
     echo "$fallback"
-  else
+  elif mkdir -p "$preferred" 2>/dev/null && [ -w "$preferred" ]; then
     echo "$preferred"
+  else
+    mkdir -p "$fallback" && chmod 700 "$fallback"
+    echo "$fallback"
   fi
 }
 
