@@ -143,4 +143,6 @@ start_mail_catcher() {
   node_modules/.bin/tsx scripts/mail-catcher.ts --smtp-port "$1" --http-port "$2" ${4:+--store "$4"} >"$3" 2>&1 &
   CATCHER_PID=$!
   wait_for_http "http://127.0.0.1:$2/health" 30 || die "the mail catcher did not start (log: $3)"
+  # The answer must come from the catcher just started, not from another one on that port.
+  kill -0 "$CATCHER_PID" 2>/dev/null || die "the mail catcher exited at start (log: $3)"
 }
