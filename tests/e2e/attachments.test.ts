@@ -83,7 +83,7 @@ describe("attachments in the browser", () => {
     const figure = page.locator("figure img").first();
     await figure.waitFor({ timeout: 30_000 });
     await page.waitForFunction(() => {
-      const img = document.querySelector("figure img") as HTMLImageElement | null;
+      const img = document.querySelector<HTMLImageElement>("figure img");
       return Boolean(img?.complete && img.naturalWidth > 0);
     });
 
