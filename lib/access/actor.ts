@@ -31,7 +31,7 @@ export async function actorForUserId(
 /** Once per request: the session's member, or null. */
 export const getActor = cache(async (): Promise<Actor | null> => {
   const session = await auth();
-  const user = session?.user as { id?: string; sessionVersion?: number } | undefined;
+  const user = session?.user;
   return user?.id ? actorForUserId(user.id, user.sessionVersion ?? 0) : null;
 });
 

@@ -11,7 +11,7 @@ import { changeMemberRole, setMemberActivation } from "@/lib/labs/members";
 import { getDb } from "@/lib/server/database";
 import { createLabWithMembers } from "../support/db";
 
-const versionOf = async (userId: string) => (await findUserById(getDb(), userId))!.sessionVersion;
+const versionOf = async (userId: string) => (await findUserById(getDb(), userId)).sessionVersion;
 
 describe("revocable sessions", () => {
   it("sign-out ends every session of the member, including a copied token", async () => {
