@@ -8,6 +8,18 @@ const nextConfig = {
   distDir: process.env.NEXT_DIST_DIR || ".next",
   // Type-checking is its own step of `npm test` (tsc --noEmit); the build does not repeat it.
   typescript: { ignoreBuildErrors: true },
+  // Static assets skip proxy.ts; they still say what they are and never get sniffed.
+  async headers() {
+    return [
+      {
+        source: "/:path*",
+        headers: [
+          { key: "X-Content-Type-Options", value: "nosniff" },
+          { key: "Referrer-Policy", value: "strict-origin-when-cross-origin" },
+        ],
+      },
+    ];
+  },
 };
 
 export default nextConfig;

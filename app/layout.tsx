@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { headers } from "next/headers";
 import "@fontsource-variable/inter";
 import "@fontsource-variable/jetbrains-mono";
 import "katex/dist/katex.min.css";
@@ -17,7 +18,10 @@ export const metadata: Metadata = {
   },
 };
 
-export default function RootLayout({ children }: { children: React.ReactNode }) {
+export default async function RootLayout({ children }: { children: React.ReactNode }) {
+  // Every page is rendered per request: its inline scripts carry this request's CSP nonce
+  // (proxy.ts), which a page prerendered at build time could not.
+  await headers();
   return (
     <html lang="en">
       <body>{children}</body>

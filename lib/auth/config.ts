@@ -6,6 +6,11 @@ import type { NextAuthConfig } from "next-auth";
  */
 const PUBLIC_PATHS = ["/sign-in", "/invitations", "/api/auth", "/api/health"];
 
+/** Pages anyone may open without a session. */
+export function isPublicPath(path: string): boolean {
+  return PUBLIC_PATHS.some((p) => path === p || path.startsWith(`${p}/`));
+}
+
 export const authConfig = {
   pages: { signIn: "/sign-in" },
   session: { strategy: "jwt", maxAge: 12 * 60 * 60 },
@@ -36,7 +41,7 @@ export const authConfig = {
     },
     authorized({ auth, request }) {
       const path = request.nextUrl.pathname;
-      if (PUBLIC_PATHS.some((p) => path === p || path.startsWith(`${p}/`))) return true;
+      if (isPublicPath(path)) return true;
       // API routes answer 401 JSON themselves rather than redirecting a client's fetch.
       if (path.startsWith("/api/")) return true;
       return Boolean(auth?.user);

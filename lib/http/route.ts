@@ -5,6 +5,7 @@ import type { ApiErrorBody } from "@/lib/contract/api-error";
 import { getEnv } from "@/lib/env";
 import { AppError, isAppError } from "@/lib/errors";
 import { appErrorFromDatabase } from "@/lib/errors/database";
+import { checkUntrustedJson, checkUntrustedText } from "@/lib/validation/untrusted-input";
 import { getDb } from "@/lib/server/database";
 
 function errorResponse(error: AppError): Response {
@@ -27,6 +28,11 @@ function errorResponse(error: AppError): Response {
 function route<C>(handler: (request: Request, context: C) => Promise<Response>) {
   return async (request: Request, context: C): Promise<Response> => {
     try {
+      checkUntrustedText(Object.fromEntries(new URL(request.url).searchParams), 4000);
+      const params = (
+        context as { params?: Promise<Record<string, string | string[]>> } | undefined
+      )?.params;
+      if (params) checkUntrustedText(flatParams(await params), 1000);
       const response = await handler(request, context);
       if (!response.headers.has("cache-control")) response.headers.set("cache-control", "no-store");
       return response;
@@ -46,6 +52,12 @@ function route<C>(handler: (request: Request, context: C) => Promise<Response>) 
       );
     }
   };
+}
+
+function flatParams(params: Record<string, string | string[]>): Record<string, string> {
+  return Object.fromEntries(
+    Object.entries(params).map(([k, v]) => [k, Array.isArray(v) ? v.join("/") : v]),
+  );
 }
 
 function safePath(request: Request): string {
@@ -72,11 +84,14 @@ export async function readJson(request: Request, maxBytes = MAX_JSON_BYTES): Pro
   if (declared > maxBytes) throw new AppError("payload_too_large", "The request is too large.");
   const text = await request.text();
   if (text.length > maxBytes) throw new AppError("payload_too_large", "The request is too large.");
+  let value: unknown;
   try {
-    return JSON.parse(text);
+    value = JSON.parse(text);
   } catch {
     throw new AppError("invalid_input", "The request body is not valid JSON.");
   }
+  checkUntrustedJson(value);
+  return value;
 }
 
 const SAFE_METHODS = new Set(["GET", "HEAD", "OPTIONS"]);

@@ -1,5 +1,6 @@
 import type { z } from "zod";
 import { AppError, fieldErrorsFromZod } from "@/lib/errors";
+import { checkUntrustedText } from "./untrusted-input";
 
 /** Parses untrusted input with a shared schema, or throws a 422 AppError with field errors. */
 export function parseInput<S extends z.ZodType>(schema: S, input: unknown): z.infer<S> {
@@ -12,12 +13,17 @@ export function parseInput<S extends z.ZodType>(schema: S, input: unknown): z.in
   return result.data;
 }
 
-/** FormData → plain object (last value wins; empty strings kept so schemas can say "required"). */
+/**
+ * FormData → plain object (last value wins; empty strings kept so schemas can say "required").
+ * Every server action's input passes here, so its text is checked first (no NUL bytes, no lone
+ * surrogates, bounded length).
+ */
 export function formDataToObject(form: FormData): Record<string, string> {
   const out: Record<string, string> = {};
   form.forEach((value, key) => {
     if (typeof value === "string") out[key] = value;
   });
+  checkUntrustedText(out);
   return out;
 }
 

@@ -68,6 +68,23 @@ describe("the JSON API answers bad requests with typed errors", () => {
     expect(stale.status()).toBe(409);
     expect((await stale.json()).error.details.currentRevision).toBe(1);
 
+    // Text PostgreSQL cannot store, or that is not Unicode, is refused at the boundary with
+    // the field named, in a body, a query string and a form-like JSON title alike.
+    const nulText = await api.put(`${BASE_URL}/api/entries/${id}/content`, {
+      data: `{"baseRevision":1,"title":"API errors","content":{"type":"doc","content":[{"type":"paragraph","content":[{"type":"text","text":"KCl\\u0000"}]}]}}`,
+      headers: { "content-type": "application/json" },
+    });
+    expect(nulText.status()).toBe(422);
+    expect((await nulText.json()).error.message).toMatch(/NUL byte/);
+    const loneSurrogate = await api.post(`${BASE_URL}/api/entries`, {
+      data: `{"projectId":"${projects[0].id}","title":"Ag\\ud800"}`,
+      headers: { "content-type": "application/json" },
+    });
+    expect(loneSurrogate.status()).toBe(422);
+    expect((await loneSurrogate.json()).error.fieldErrors.title[0]).toMatch(/lone surrogate/);
+    const nulQuery = await api.get(`${BASE_URL}/api/entries?q=a%00b`);
+    expect(nulQuery.status()).toBe(422);
+
     await page.close();
 
     // Another lab's researcher, in a browser of their own.

@@ -1,28 +1,29 @@
 "use server";
 import { revalidatePath } from "next/cache";
 import { requireActor } from "@/lib/access/actor";
-import { runAction, type ActionState } from "@/lib/http/action";
+import { runAction, runFormAction, type ActionState } from "@/lib/http/action";
 import { inviteMember, withdrawInvitation } from "@/lib/labs/invitations";
 import { changeMemberRole, setMemberActivation } from "@/lib/labs/members";
-import { formDataToObject } from "@/lib/validation/parse";
 import { retryLabOutbox } from "@/lib/labs/outbox";
 
 // Every action is a public POST endpoint: each one resolves the actor itself, and the
 // service it calls checks the role and the lab.
 
 export async function inviteMemberAction(_prev: ActionState, form: FormData): Promise<ActionState> {
-  const values = formDataToObject(form);
-  return runAction(async () => {
-    const actor = await requireActor();
-    await inviteMember(actor, values);
-    revalidatePath("/lab");
-    return { ok: true, message: `Invitation sent to ${values.email}.` };
-  }, values);
+  return runFormAction(
+    form,
+    async (values) => {
+      const actor = await requireActor();
+      await inviteMember(actor, values);
+      revalidatePath("/lab");
+      return { ok: true, message: `Invitation sent to ${values.email}.` };
+    },
+    (values) => values,
+  );
 }
 
 export async function changeRoleAction(_prev: ActionState, form: FormData): Promise<ActionState> {
-  const values = formDataToObject(form);
-  return runAction(async () => {
+  return runFormAction(form, async (values) => {
     const actor = await requireActor();
     const member = await changeMemberRole(actor, values);
     revalidatePath("/lab");
@@ -34,8 +35,7 @@ export async function setActivationAction(
   _prev: ActionState,
   form: FormData,
 ): Promise<ActionState> {
-  const values = formDataToObject(form);
-  return runAction(async () => {
+  return runFormAction(form, async (values) => {
     const actor = await requireActor();
     const member = await setMemberActivation(actor, values, values.active === "true");
     revalidatePath("/lab");
@@ -52,8 +52,7 @@ export async function withdrawInvitationAction(
   _prev: ActionState,
   form: FormData,
 ): Promise<ActionState> {
-  const values = formDataToObject(form);
-  return runAction(async () => {
+  return runFormAction(form, async (values) => {
     const actor = await requireActor();
     await withdrawInvitation(actor, values.invitationId ?? "");
     revalidatePath("/lab");

@@ -1,7 +1,7 @@
 "use server";
 import { AuthError, CredentialsSignin } from "next-auth";
 import { signIn } from "@/lib/auth";
-import { fieldErrorsFromZod } from "@/lib/errors";
+import { fieldErrorsFromZod, isAppError } from "@/lib/errors";
 import type { ActionState } from "@/lib/http/action";
 import { signInSchema } from "@/lib/validation/auth";
 import { formDataToObject } from "@/lib/validation/parse";
@@ -12,7 +12,14 @@ function safeNext(value: string | undefined): string {
 }
 
 export async function signInAction(_prev: ActionState, form: FormData): Promise<ActionState> {
-  const values = formDataToObject(form);
+  let values: Record<string, string>;
+  try {
+    values = formDataToObject(form);
+  } catch (error) {
+    if (isAppError(error))
+      return { ok: false, message: error.message, fieldErrors: error.fieldErrors };
+    throw error;
+  }
   const parsed = signInSchema.safeParse(values);
   if (!parsed.success)
     return {
