@@ -9,6 +9,7 @@ import { cx } from "@/lib/ui/class-names";
 import { buildEditorExtensions } from "./extensions";
 import { EditorPrompts } from "./toolbar/editor-prompts";
 import { EditorToolbar, type ToolbarPrompt } from "./toolbar/editor-toolbar";
+import { useBlockHighlight } from "./use-block-highlight";
 
 export interface NotebookEditorProps {
   /** The entry's tiptap JSON as saved (a revision's document). Read once, at mount. */
@@ -97,6 +98,8 @@ export function NotebookEditor({
   useEffect(() => {
     if (editor && editor.isEditable !== editable) editor.setEditable(editable, false);
   }, [editor, editable]);
+
+  useBlockHighlight(editor !== null);
 
   return (
     <div
