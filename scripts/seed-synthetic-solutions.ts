@@ -225,7 +225,13 @@ async function insertRecipes(client: Client, labId: string, count: number, rando
 }
 
 /** Entries, their five revisions and their block rows, all in SQL. */
-async function insertEntries(client: Client, labId: string, count: number, recipeCount: number) {
+async function insertEntries(
+  client: Client,
+  labId: string,
+  count: number,
+  recipeCount: number,
+  revisions: number,
+) {
   await client.query(`drop table if exists seed_entries`);
   await client.query(
     `create temp table seed_entries as
@@ -251,8 +257,8 @@ async function insertEntries(client: Client, labId: string, count: number, recip
     `insert into entries (id, lab_id, project_id, title, status, author_id, current_revision_number,
                           signed_revision_number, created_at, updated_at)
      select id, $1, project_id, '[synthetic] ' || initcap(technique) || ' of ' || analyte || ' #' || n,
-            status, author_id, ${REVISIONS}, case when status = 'countersigned' then ${REVISIONS} end,
-            created_at, created_at + interval '${REVISIONS - 1} days'
+            status, author_id, ${revisions}, case when status = 'countersigned' then ${revisions} end,
+            created_at, created_at + interval '${revisions - 1} days'
        from seed_entries`,
     [labId],
   );
@@ -263,7 +269,7 @@ async function insertEntries(client: Client, labId: string, count: number, recip
                 jsonb_build_object('type', 'text', 'text', t.body))))),
             t.body, encode(sha256(convert_to(t.title || t.body, 'UTF8')), 'hex'), e.author_id,
             e.created_at + (v - 1) * interval '1 day'
-       from seed_entries e cross join generate_series(1, ${REVISIONS}) v
+       from seed_entries e cross join generate_series(1, ${revisions}) v
        cross join lateral (select '[synthetic] ' || initcap(e.technique) || ' of ' || e.analyte || ' #' || e.n as title,
             'Synthetic benchmark entry. ' || initcap(e.technique) || ' of ' || e.analyte || ' on a ' || e.electrode
             || ' electrode, revision ' || v || '. '
@@ -276,17 +282,45 @@ async function insertEntries(client: Client, labId: string, count: number, recip
     `insert into block_results (lab_id, entry_id, block_id, result_id, from_revision, to_revision, position,
                                 name, temperature_c, solvent, model_used, ionic_strength_molal,
                                 ionic_strength_molar, debye_length_nm, species, created_at)
-     select $1, e.id, 'synthetic-' || e.n || '-' || b, r.id, v, case when v < ${REVISIONS} then v + 1 end, b - 1,
+     select $1, e.id, 'synthetic-' || e.n || '-' || b, r.id, v, case when v < ${revisions} then v + 1 end, b - 1,
             r.name, r.temperature_c, r.solvent, r.model_used, r.ionic_strength_molal,
             r.ionic_strength_molar, r.debye_length_nm, r.species,
             e.created_at + (v - 1) * interval '1 day' + b * interval '1 second'
        from seed_entries e
        cross join generate_series(1, ${BLOCKS}) b
-       cross join generate_series(1, ${REVISIONS}) v
+       cross join generate_series(1, ${revisions}) v
        join seed_recipes k on k.n = 1 + abs(hashint4(e.n * 31 + b * 7 + v * 1000003)) % $2
        join solution_results r on r.id = k.id`,
     [labId, recipeCount],
   );
+}
+
+export interface SyntheticLabOptions {
+  slug: string;
+  name: string;
+  /** Entries, each with BLOCKS solution blocks … */
+  entries: number;
+  /** … and this many revisions, every block changed in each. */
+  revisions: number;
+  /** Distinct stored results the blocks are drawn from. */
+  recipes: number;
+  /** Seed of the recipe generator. */
+  seed: number;
+}
+
+/**
+ * One synthetic lab: 12 members (password SYNTHETIC_PASSWORD), 24 projects, entries with
+ * their revisions and block rows. Run by a superuser session with
+ * `session_replication_role = replica` inside a transaction (the caller's), so that
+ * foreign keys and the record guards are not checked row by row. The tests' plan checks
+ * use it on a small scale. Returns the lab id.
+ */
+export async function seedSyntheticLab(client: Client, o: SyntheticLabOptions): Promise<string> {
+  const hash = await argon2.hash(SYNTHETIC_PASSWORD, { type: argon2.argon2id });
+  const labId = await insertLabWithPeople(client, o.slug, o.name, hash);
+  await insertRecipes(client, labId, o.recipes, prng(o.seed));
+  await insertEntries(client, labId, o.entries, o.recipes, o.revisions);
+  return labId;
 }
 
 /** Seeds the synthetic labs into a migrated scratch database unless they are there already. */
@@ -305,24 +339,22 @@ export async function seedSyntheticSolutions(db: ScratchDatabase): Promise<"seed
     await client.query("begin");
     const tables = ["block_results", "solution_results", "revisions", "entries"];
     const indexes = await dropIndexes(client, tables);
-    const hash = await argon2.hash(SYNTHETIC_PASSWORD, { type: argon2.argon2id });
-    const random = prng(20261202);
-    const labId = await insertLabWithPeople(
-      client,
-      SYNTHETIC_LAB_SLUG,
-      "Synthetic bench lab",
-      hash,
-    );
-    await insertRecipes(client, labId, RECIPES, random);
-    await insertEntries(client, labId, ENTRIES, RECIPES);
-    const neighbour = await insertLabWithPeople(
-      client,
-      "synthetic-neighbour",
-      "Synthetic neighbour lab",
-      hash,
-    );
-    await insertRecipes(client, neighbour, NEIGHBOUR_RECIPES, prng(7));
-    await insertEntries(client, neighbour, NEIGHBOUR_ENTRIES, NEIGHBOUR_RECIPES);
+    await seedSyntheticLab(client, {
+      slug: SYNTHETIC_LAB_SLUG,
+      name: "Synthetic bench lab",
+      entries: ENTRIES,
+      revisions: REVISIONS,
+      recipes: RECIPES,
+      seed: 20261202,
+    });
+    await seedSyntheticLab(client, {
+      slug: "synthetic-neighbour",
+      name: "Synthetic neighbour lab",
+      entries: NEIGHBOUR_ENTRIES,
+      revisions: REVISIONS,
+      recipes: NEIGHBOUR_RECIPES,
+      seed: 7,
+    });
     for (const def of indexes) await client.query(def);
     await client.query("commit");
     await client.query(`set session_replication_role = origin`);

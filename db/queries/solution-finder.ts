@@ -140,17 +140,15 @@ export interface FinderPageIds {
 }
 
 /**
- * One page of matching block-row ids in the requested order, and how many match (counted up
- * to `cap`). First all matches up to cap + 1 are collected with their sort key and ordered in
- * memory; only when there are more than the cap is the page read again in index order.
+ * The finder's main statement: every match up to cap + 1 with its sort key, counted, and one
+ * page of them in order. Exported so that the plan tests can EXPLAIN exactly what runs.
  */
-export async function findSolutionPageIds(
-  db: Executor,
+export function solutionPageSql(
   f: FinderFilter,
   sort: FinderSort,
   page: { limit: number; offset: number },
   cap: number,
-): Promise<FinderPageIds> {
+): SQL {
   const key = sortExpression(f, sort.column);
   const union = sql.join(
     branches(f).map(
@@ -159,16 +157,35 @@ export async function findSolutionPageIds(
     ),
     sql` union all `,
   );
-  const first = await db.execute<{ total: number; id: string | null }>(sql`
+  return sql`
     with m as materialized (select * from (${union}) u limit ${cap + 1})
     select (select count(*) from m)::int as total, p.id
       from (select 1) one
       left join lateral (select m.id from m order by ${orderBy(f, sort, "m.")}
-                         limit ${page.limit} offset ${page.offset}) p on true`);
+                         limit ${page.limit} offset ${page.offset}) p on true`;
+}
+
+/**
+ * One page of matching block-row ids in the requested order, and how many match (counted up
+ * to `cap`). First all matches up to cap + 1 are collected with their sort key and ordered in
+ * memory (solutionPageSql); only when there are more than the cap is the page read again in
+ * index order, which for a broad search is the cheaper way.
+ */
+export async function findSolutionPageIds(
+  db: Executor,
+  f: FinderFilter,
+  sort: FinderSort,
+  page: { limit: number; offset: number },
+  cap: number,
+): Promise<FinderPageIds> {
+  const first = await db.execute<{ total: number; id: string | null }>(
+    solutionPageSql(f, sort, page, cap),
+  );
   const total = first.rows[0]?.total ?? 0;
   if (total <= cap) {
     return { total, capped: false, ids: first.rows.flatMap((r) => (r.id ? [r.id] : [])) };
   }
+  const key = sortExpression(f, sort.column);
   const reach = page.limit + page.offset;
   const ordered = sql.join(
     branches(f).map(
