@@ -123,7 +123,12 @@ export const solutionFinderQuerySchema = z
         .regex(/^[\w ,()-]+$/, "Choose a solvent from the list."),
     ),
     model: optional(z.enum(MODEL_IDS, "Choose a model from the list.")),
-    author: optional(z.union([z.literal("me"), z.uuid()], "Choose a member of the lab.")),
+    author: optional(
+      z.union(
+        [z.literal("me"), z.uuid("Choose a member of the lab.")],
+        "Choose a member of the lab.",
+      ),
+    ),
     project: optional(z.uuid("Choose a project of the lab.")),
     status: optional(z.enum(ENTRY_STATUSES, "Choose an entry status from the list.")),
     from: day("Saved from"),
