@@ -8,6 +8,7 @@ import { printPitzerBench } from "./chem-pitzer";
 import { printBufferBench } from "./chem-buffer";
 import { printEditorRecomputeBench } from "./editor-recompute";
 import { printTraceParseBench } from "./trace-parse";
+import { printFinderBench } from "./finder";
 
 console.log(
   `Node ${process.version}, ${os.cpus().length} CPU(s), load average ${os
@@ -22,6 +23,7 @@ const reports = [
   printBufferBench(),
   printEditorRecomputeBench(),
   printTraceParseBench(),
+  printFinderBench(),
 ];
 
 const failed = reports.filter((r) => !r.pass).length;

@@ -1,7 +1,6 @@
 // @vitest-environment node
 import { randomUUID } from "node:crypto";
 import { sql, type SQL } from "drizzle-orm";
-import { PgDialect } from "drizzle-orm/pg-core";
 import { Client } from "pg";
 import { beforeAll, describe, expect, it } from "vitest";
 import { solutionPageSql, type FinderFilter, type FinderSort } from "@/db/queries/solution-finder";
@@ -29,13 +28,9 @@ function indexesOf(node: PlanNode, out = new Set<string>()): Set<string> {
   return out;
 }
 
-const dialect = new PgDialect();
-
 async function planOf(statement: SQL): Promise<{ indexes: string[]; nodes: string[] }> {
-  const { sql: text, params } = dialect.sqlToQuery(statement);
-  const result = await getDb().$client.query<{ "QUERY PLAN": [{ Plan: PlanNode }] }>(
-    `explain (format json) ${text}`,
-    params,
+  const result = await getDb().execute<{ "QUERY PLAN": [{ Plan: PlanNode }] }>(
+    sql`explain (format json) ${statement}`,
   );
   const root = result.rows[0]["QUERY PLAN"][0].Plan;
   const nodes: string[] = [];
@@ -121,10 +116,9 @@ describe("the finder's plans at 24 000 current solutions", () => {
 
   it("finds exactly the rows a plain count finds", async () => {
     for (const species of ["NaCl", "RbCl"]) {
-      const { sql: text, params } = dialect.sqlToQuery(
+      const found = await getDb().execute<{ total: number }>(
         solutionPageSql(filter(species), newest, firstPage, 10_000),
       );
-      const found = await getDb().$client.query<{ total: number }>(text, params);
       const expected = await getDb().execute<{ n: number }>(sql`
         select count(*)::int as n from block_results
          where lab_id = ${labId} and to_revision is null and species @> ${sql.param([species])}::text[]
