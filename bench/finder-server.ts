@@ -5,7 +5,7 @@
  * Auth.js's own credentials endpoint, as a browser would.
  */
 import { execFileSync, spawn, type ChildProcess } from "node:child_process";
-import { existsSync, readFileSync, writeFileSync } from "node:fs";
+import { existsSync, lstatSync, readFileSync, writeFileSync } from "node:fs";
 import { createServer, type Server } from "node:http";
 import path from "node:path";
 
@@ -58,7 +58,15 @@ export function ensureBuild(databaseUrl: string): void {
     `building the app for ${commit.slice(0, 10)} (next build into ${DIST}; a few minutes)`,
   );
   const started = performance.now();
-  execFileSync(process.execPath, [path.join(ROOT, "node_modules/next/dist/bin/next"), "build"], {
+  // Turbopack refuses a node_modules that is a link to outside the project (a git worktree
+  // sharing another checkout's packages); webpack builds the same app from it.
+  const linked = lstatSync(path.join(ROOT, "node_modules")).isSymbolicLink();
+  const args = [
+    path.join(ROOT, "node_modules/next/dist/bin/next"),
+    "build",
+    ...(linked ? ["--webpack"] : []),
+  ];
+  execFileSync(process.execPath, args, {
     cwd: ROOT,
     env: appEnv(databaseUrl, 0),
     stdio: ["ignore", "ignore", "inherit"],
