@@ -137,11 +137,20 @@ export async function startBareServer(
 export async function signIn(url: string, email: string, password: string): Promise<string> {
   const csrf = await fetch(`${url}/api/auth/csrf`);
   const { csrfToken } = (await csrf.json()) as { csrfToken: string };
-  const jar = csrf.headers.getSetCookie().map((c) => c.split(";")[0]);
+  // The proxy and the route both set a CSRF cookie; the browser keeps the last one.
+  const jar = new Map(
+    csrf.headers.getSetCookie().map((c) => {
+      const pair = c.split(";")[0];
+      return [pair.slice(0, pair.indexOf("=")), pair] as const;
+    }),
+  );
   const response = await fetch(`${url}/api/auth/callback/credentials`, {
     method: "POST",
     redirect: "manual",
-    headers: { "content-type": "application/x-www-form-urlencoded", cookie: jar.join("; ") },
+    headers: {
+      "content-type": "application/x-www-form-urlencoded",
+      cookie: [...jar.values()].join("; "),
+    },
     body: new URLSearchParams({ csrfToken, email, password, callbackUrl: url }),
   });
   const session = response.headers
