@@ -1,10 +1,11 @@
 /**
  * The production build of Ionleaf against the scratch benchmark database, for the finder
- * bench: built once per commit into `.next-test` (the folder `npm test` builds into, so no
+ * bench: built once per version of the app's sources into `.next-test` (the folder `npm test` builds into, so no
  * other build is touched), started with `next start`, and a member signed in through
  * Auth.js's own credentials endpoint, as a browser would.
  */
 import { execFileSync, spawn, type ChildProcess } from "node:child_process";
+import { createHash } from "node:crypto";
 import { existsSync, lstatSync, readFileSync, writeFileSync } from "node:fs";
 import { createServer, type Server } from "node:http";
 import path from "node:path";
@@ -30,17 +31,29 @@ function appEnv(databaseUrl: string, port: number): NodeJS.ProcessEnv {
   };
 }
 
+/** What the build is made of: the committed tree of these paths, or "uncommitted". */
+const BUILD_INPUTS = [
+  "app",
+  "lib",
+  "db",
+  "components",
+  "editor",
+  "proxy.ts",
+  "next.config.mjs",
+  "package-lock.json",
+];
+
 function currentCommit(): string {
-  const head = execFileSync("git", ["rev-parse", "HEAD"], { cwd: ROOT, encoding: "utf8" }).trim();
-  const dirty = execFileSync(
-    "git",
-    ["status", "--porcelain", "--", "app", "lib", "db", "components", "editor", "proxy.ts"],
-    {
-      cwd: ROOT,
-      encoding: "utf8",
-    },
-  ).trim();
-  return dirty ? `${head}+uncommitted` : head;
+  const tree = execFileSync("git", ["ls-tree", "HEAD", "--", ...BUILD_INPUTS], {
+    cwd: ROOT,
+    encoding: "utf8",
+  });
+  const dirty = execFileSync("git", ["status", "--porcelain", "--", ...BUILD_INPUTS], {
+    cwd: ROOT,
+    encoding: "utf8",
+  }).trim();
+  const id = createHash("sha256").update(tree).digest("hex");
+  return dirty ? `${id}+uncommitted` : id;
 }
 
 /** Builds the app unless this commit's build is already there (an uncommitted tree always builds). */
