@@ -3,6 +3,7 @@ DROP INDEX "block_results_current_ionic_strength_molar_idx";--> statement-breakp
 DROP INDEX "block_results_lab_ionic_strength_idx";--> statement-breakpoint
 DROP INDEX "entries_title_fts_idx";--> statement-breakpoint
 DROP INDEX "revisions_text_fts_idx";--> statement-breakpoint
+CREATE INDEX "block_results_current_entry_idx" ON "block_results" USING btree ("entry_id") WHERE "block_results"."to_revision" is null;--> statement-breakpoint
 CREATE INDEX "block_results_closed_ionic_strength_idx" ON "block_results" USING btree ("lab_id","ionic_strength_molal") WHERE "block_results"."to_revision" is not null;--> statement-breakpoint
 CREATE INDEX "block_results_closed_ionic_strength_molar_idx" ON "block_results" USING btree ("lab_id","ionic_strength_molar") WHERE "block_results"."to_revision" is not null;--> statement-breakpoint
 CREATE INDEX "block_results_closed_species_idx" ON "block_results" USING gin ("species") WHERE "block_results"."to_revision" is not null;--> statement-breakpoint

@@ -103,11 +103,13 @@ function conditions(f: FinderFilter, open: boolean): SQL {
     );
   }
   if (f.tsquery) {
-    // Current solutions: the entry's current revision must match. History: a revision the
-    // row was shown in must match.
+    // Current solutions: the entry's current revision must match. The matching entries are
+    // collected first (an array, so the planner cannot turn it into a hash join over every
+    // entry of the lab) and their open rows read through block_results_current_entry_idx.
+    // History: a revision the row was shown in must match.
     where.push(
       open
-        ? sql`b.entry_id in (select xr.entry_id from revisions xr join entries xc on xc.id = xr.entry_id and xc.current_revision_number = xr.number where xc.lab_id = ${f.labId} and ${revisionMatches("xr", f.tsquery)})`
+        ? sql`b.entry_id = any(array(select xr.entry_id from revisions xr join entries xc on xc.id = xr.entry_id and xc.current_revision_number = xr.number where xc.lab_id = ${f.labId} and ${revisionMatches("xr", f.tsquery)}))`
         : sql`exists (select 1 from revisions xr where xr.entry_id = b.entry_id and xr.number >= b.from_revision and xr.number < b.to_revision and ${revisionMatches("xr", f.tsquery)})`,
     );
   }
@@ -130,74 +132,6 @@ function orderBy(f: FinderFilter, sort: FinderSort, prefix = ""): SQL {
 
 function branches(f: FinderFilter): boolean[] {
   return f.includeHistory ? [true, false] : [true];
-}
-
-export interface FinderPageIds {
-  /** Matches counted, up to the cap (total > cap is reported as capped). */
-  total: number;
-  capped: boolean;
-  ids: string[];
-}
-
-/**
- * The finder's main statement: every match up to cap + 1 with its sort key, counted, and one
- * page of them in order. Exported so that the plan tests can EXPLAIN exactly what runs.
- */
-export function solutionPageSql(
-  f: FinderFilter,
-  sort: FinderSort,
-  page: { limit: number; offset: number },
-  cap: number,
-): SQL {
-  const key = sortExpression(f, sort.column);
-  const union = sql.join(
-    branches(f).map(
-      (open) =>
-        sql`(select b.id, ${key} as k from ${branchFrom(sort)} where ${conditions(f, open)} limit ${cap + 1})`,
-    ),
-    sql` union all `,
-  );
-  return sql`
-    with m as materialized (select * from (${union}) u limit ${cap + 1})
-    select (select count(*) from m)::int as total, p.id
-      from (select 1) one
-      left join lateral (select m.id from m order by ${orderBy(f, sort, "m.")}
-                         limit ${page.limit} offset ${page.offset}) p on true`;
-}
-
-/**
- * One page of matching block-row ids in the requested order, and how many match (counted up
- * to `cap`). First all matches up to cap + 1 are collected with their sort key and ordered in
- * memory (solutionPageSql); only when there are more than the cap is the page read again in
- * index order, which for a broad search is the cheaper way.
- */
-export async function findSolutionPageIds(
-  db: Executor,
-  f: FinderFilter,
-  sort: FinderSort,
-  page: { limit: number; offset: number },
-  cap: number,
-): Promise<FinderPageIds> {
-  const first = await db.execute<{ total: number; id: string | null }>(
-    solutionPageSql(f, sort, page, cap),
-  );
-  const total = first.rows[0]?.total ?? 0;
-  if (total <= cap) {
-    return { total, capped: false, ids: first.rows.flatMap((r) => (r.id ? [r.id] : [])) };
-  }
-  const key = sortExpression(f, sort.column);
-  const reach = page.limit + page.offset;
-  const ordered = sql.join(
-    branches(f).map(
-      (open) =>
-        sql`(select b.id, ${key} as k from ${branchFrom(sort)} where ${conditions(f, open)} order by ${orderBy(f, sort)} limit ${reach})`,
-    ),
-    sql` union all `,
-  );
-  const second = await db.execute<{ id: string }>(sql`
-    select u.id from (${ordered}) u order by ${orderBy(f, sort, "u.")}
-     limit ${page.limit} offset ${page.offset}`);
-  return { total: cap, capped: true, ids: second.rows.map((r) => r.id) };
 }
 
 export interface FinderRow {
@@ -245,6 +179,84 @@ const DETAIL_FROM = sql`
 
 function rowOf(r: Record<string, unknown>): FinderRow {
   return { ...(r as unknown as FinderRow), createdAt: new Date(r.createdAt as string) };
+}
+
+export interface FinderPage {
+  /** Matches counted, up to the cap (more than the cap is reported as capped). */
+  total: number;
+  capped: boolean;
+  rows: FinderRow[];
+}
+
+/**
+ * The finder's main statement: every match up to cap + 1 with its sort key, counted, and one
+ * page of them in order with what the table shows, in one round trip. Exported so that the
+ * plan tests EXPLAIN exactly what runs.
+ */
+export function solutionPageSql(
+  f: FinderFilter,
+  sort: FinderSort,
+  page: { limit: number; offset: number },
+  cap: number,
+): SQL {
+  const key = sortExpression(f, sort.column);
+  const union = sql.join(
+    branches(f).map(
+      (open) =>
+        sql`(select b.id, ${key} as k from ${branchFrom(sort)} where ${conditions(f, open)} limit ${cap + 1})`,
+    ),
+    sql` union all `,
+  );
+  return sql`
+    with m as materialized (select * from (${union}) u limit ${cap + 1}),
+         pg as materialized (select m.id, row_number() over (order by ${orderBy(f, sort, "m.")}) as n
+                               from m order by ${orderBy(f, sort, "m.")}
+                              limit ${page.limit} offset ${page.offset})
+    select (select count(*) from m)::int as total, d.*
+      from (select 1) one
+      left join lateral (
+        select ${DETAIL_COLUMNS}, pg.n from pg join ${DETAIL_FROM} on b.id = pg.id
+         where b.lab_id = ${f.labId}) d on true
+     order by d.n`;
+}
+
+/**
+ * One page of matches in the requested order, and how many match (counted up to `cap`):
+ * one statement (solutionPageSql) when there are at most `cap`; past that the page is read
+ * again in index order, the cheaper way for a broad search, and its rows fetched by id.
+ */
+export async function findSolutionPage(
+  db: Executor,
+  f: FinderFilter,
+  sort: FinderSort,
+  page: { limit: number; offset: number },
+  cap: number,
+): Promise<FinderPage> {
+  const first = await db.execute<Record<string, unknown> & { total: number }>(
+    solutionPageSql(f, sort, page, cap),
+  );
+  const total = first.rows[0]?.total ?? 0;
+  if (total <= cap) {
+    return { total, capped: false, rows: first.rows.filter((r) => r.id !== null).map(rowOf) };
+  }
+  const key = sortExpression(f, sort.column);
+  const reach = page.limit + page.offset;
+  const ordered = sql.join(
+    branches(f).map(
+      (open) =>
+        sql`(select b.id, ${key} as k from ${branchFrom(sort)} where ${conditions(f, open)} order by ${orderBy(f, sort)} limit ${reach})`,
+    ),
+    sql` union all `,
+  );
+  const second = await db.execute<{ id: string }>(sql`
+    select u.id from (${ordered}) u order by ${orderBy(f, sort, "u.")}
+     limit ${page.limit} offset ${page.offset}`);
+  const rows = await findSolutionRows(
+    db,
+    f.labId,
+    second.rows.map((r) => r.id),
+  );
+  return { total: cap, capped: true, rows };
 }
 
 /** What the table shows for the given block rows of the lab, in the order of `ids`. */

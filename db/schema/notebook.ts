@@ -228,6 +228,10 @@ export const blockResults = pgTable(
     index("block_results_current_species_idx")
       .using("gin", t.species)
       .where(sql`${t.toRevision} is null`),
+    // An entry's current solutions: the save's open rows, and the finder's text search.
+    index("block_results_current_entry_idx")
+      .on(t.entryId)
+      .where(sql`${t.toRevision} is null`),
     index("block_results_current_created_idx")
       .on(t.labId, t.createdAt)
       .where(sql`${t.toRevision} is null`),

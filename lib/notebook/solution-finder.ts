@@ -2,8 +2,7 @@ import "server-only";
 import Papa from "papaparse";
 import {
   findSolutionBatch,
-  findSolutionPageIds,
-  findSolutionRows,
+  findSolutionPage,
   type FinderFilter,
 } from "@/db/queries/solution-finder";
 import { prefixTsquery } from "@/db/queries/solution-finder-text";
@@ -20,8 +19,11 @@ import {
 } from "@/lib/validation/solution-finder";
 import { parseInput } from "@/lib/validation/parse";
 
-/** Matches are counted up to this many; past it the page says "more than 10 000". */
-export const FINDER_COUNT_CAP = 10_000;
+/**
+ * Matches are counted up to this many; past it the page says "more than 1 000" and pages on
+ * without a last page (counting a broad search to the end would cost more than the search).
+ */
+const FINDER_COUNT_CAP = 1_000;
 const DAY_MS = 86_400_000;
 const CSV_BATCH = 500;
 
@@ -67,7 +69,7 @@ export interface SolutionSearchResult {
   solutions: FoundSolution[];
   /** Matches, counted up to FINDER_COUNT_CAP. */
   total: number;
-  /** More matches than FINDER_COUNT_CAP. */
+  /** More matches than FINDER_COUNT_CAP: `pages` is then this page, plus one if it is full. */
   capped: boolean;
   page: number;
   pages: number;
@@ -81,26 +83,30 @@ export async function searchSolutions(actor: Actor, raw: unknown): Promise<Solut
   assertCan(actor, "solution.search");
   const { q, filter } = await filterFor(actor, raw);
   const db = getDb();
-  const found = await findSolutionPageIds(
+  const found = await findSolutionPage(
     db,
     filter,
     { column: q.sort, direction: q.dir },
     { limit: FINDER_PAGE_SIZE, offset: (q.page - 1) * FINDER_PAGE_SIZE },
     FINDER_COUNT_CAP,
   );
-  const pages = Math.max(1, Math.ceil(found.total / FINDER_PAGE_SIZE));
-  if (q.page > pages) {
+  // Past the count cap the number of pages is unknown: a page is past the end when it is empty.
+  const pages = found.capped
+    ? Math.max(q.page + (found.rows.length === FINDER_PAGE_SIZE ? 1 : 0), 1)
+    : Math.max(1, Math.ceil(found.total / FINDER_PAGE_SIZE));
+  if (q.page > pages || (found.capped && found.rows.length === 0 && q.page > 1)) {
     throw new AppError("invalid_input", "Some fields need attention.", {
       fieldErrors: {
         page: [
-          `This search has ${pages === 1 ? "one page" : `${pages}${found.capped ? " or more" : ""} pages`}; page ${q.page} is past the end.`,
+          found.capped
+            ? `Page ${q.page} is past the end of this search.`
+            : `This search has ${pages === 1 ? "one page" : `${pages} pages`}; page ${q.page} is past the end.`,
         ],
       },
     });
   }
-  const rows = await findSolutionRows(db, actor.labId, found.ids);
   return {
-    solutions: rows.map(toFound),
+    solutions: found.rows.map(toFound),
     total: found.total,
     capped: found.capped,
     page: q.page,

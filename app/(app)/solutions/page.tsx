@@ -93,7 +93,11 @@ export default async function SolutionFinderPage({
           <p className="text-sm text-ink-soft" role="status">
             {result.capped ? `More than ${result.total.toLocaleString("en")}` : result.total}{" "}
             solution{result.total === 1 ? "" : "s"}
-            {result.pages > 1 ? ` · page ${result.page} of ${result.pages}` : ""}
+            {result.capped
+              ? ` · page ${result.page}`
+              : result.pages > 1
+                ? ` · page ${result.page} of ${result.pages}`
+                : ""}
           </p>
           <ResultsTable
             solutions={result.solutions}
@@ -114,7 +118,8 @@ export default async function SolutionFinderPage({
                 </Link>
               ) : null}
               <span className="text-ink-soft">
-                Page {result.page} of {result.pages}
+                Page {result.page}
+                {result.capped ? "" : ` of ${result.pages}`}
               </span>
               {result.page < result.pages ? (
                 <Link
