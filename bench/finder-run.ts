@@ -16,7 +16,6 @@ import { sql } from "drizzle-orm";
 import { PgDialect } from "drizzle-orm/pg-core";
 import { createDatabase } from "@/db/client";
 import { findBlockPoint, findSimilarCandidates } from "@/db/queries/similar-solutions";
-import { findLabSpeciesByTerms } from "@/db/queries/lab-species";
 import {
   findSolutionPage,
   findSolutionRows,
@@ -70,10 +69,9 @@ async function main() {
       savedFrom: new Date("2025-01-01T00:00:00Z"),
       savedBefore: new Date("2027-01-01T00:00:00Z"),
     };
-    // The statements the finder's service runs for a query: the lab's own species for the
-    // names in it (when there are any), then the page with its count in one statement.
+    // The statement the finder's service runs for a query: the page with its count (species
+    // the catalogue knows need no query of their own).
     const finderSql = (f: FinderFilter) => async () => {
-      if (f.species.length) await findLabSpeciesByTerms(db, labId, f.species);
       await findSolutionPage(db, f, { column: "saved", direction: "desc" }, PAGE, CAP);
     };
 

@@ -123,11 +123,20 @@ function branchFrom(sort: FinderSort): SQL {
     : sql`block_results b`;
 }
 
+/** Sort columns that may be null (a block whose inputs the engine refused has no I). */
+const NULLABLE_SORTS = new Set<FinderSortColumn>(["ionicStrength", "debye"]);
+
+/**
+ * ORDER BY for a sort, ties broken by id. Nulls go last; "nulls last" is written only for
+ * columns that can be null, because on a NOT NULL column it would still stop PostgreSQL
+ * from reading an index backwards (newest first) in index order.
+ */
 function orderBy(f: FinderFilter, sort: FinderSort, prefix = ""): SQL {
   const dir = sql.raw(sort.direction === "asc" ? "asc" : "desc");
+  const nulls = sql.raw(NULLABLE_SORTS.has(sort.column) ? " nulls last" : "");
   const key = prefix ? sql.raw(`${prefix}k`) : sortExpression(f, sort.column);
   const id = sql.raw(prefix ? `${prefix}id` : "b.id");
-  return sql`${key} ${dir} nulls last, ${id} ${dir}`;
+  return sql`${key} ${dir}${nulls}, ${id} ${dir}`;
 }
 
 function branches(f: FinderFilter): boolean[] {

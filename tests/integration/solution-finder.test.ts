@@ -10,6 +10,8 @@ import { createEntry, setEntryArchived } from "@/lib/notebook/entries";
 import { submitEntry } from "@/lib/notebook/review";
 import { saveEntryContent } from "@/lib/notebook/save-entry";
 import { findSimilarSolutions } from "@/lib/notebook/similar-solutions";
+import { species as labSpecies } from "@/db/schema";
+import { suggestSpecies } from "@/lib/finder/species-suggestions";
 import { searchSolutions, solutionsCsvStream } from "@/lib/notebook/solution-finder";
 import { getDb } from "@/lib/server/database";
 import { createLabWithMembers } from "../support/db";
@@ -411,6 +413,48 @@ describe("the solution finder", () => {
     });
     expect(earlier.target.name).toBe("F NaCl");
     expect(earlier.target.ionicStrengthMolal).toBeCloseTo(0.05, 12);
+  });
+
+  it("searches and suggests the lab's own species by formula or name", async () => {
+    const labD = await createLabWithMembers(["researcher"]);
+    const own = labD.members.researcher;
+    await getDb().insert(labSpecies).values({
+      labId: own.labId,
+      formula: "FcMeOH",
+      name: "Ferrocenemethanol",
+      createdById: own.userId,
+    });
+    const project = (
+      await insertProject(getDb(), { labId: own.labId, name: "Mediators", createdById: own.userId })
+    ).id;
+    await entryWith(own, project, "Mediator stock", "Ferrocenemethanol in KCl.", [
+      block("blk-m", "M mediator", [
+        { formula: "FcMeOH", amount: 0.001 },
+        { formula: "KCl", amount: 0.1 },
+      ]),
+      block("blk-n", "N plain KCl", [{ formula: "KCl", amount: 0.1 }]),
+    ]);
+    expect(await names({ species: "ferrocenemethanol" }, own)).toEqual(["M mediator"]);
+    expect(await names({ species: "FcMeOH, KCl" }, own)).toEqual(["M mediator"]);
+    expect(await names({ species: "FcMeOH, KCl", match: "any" }, own)).toEqual([
+      "M mediator",
+      "N plain KCl",
+    ]);
+    // Another lab does not know this species.
+    expect(
+      (await failure(searchSolutions(r1, { species: "ferrocenemethanol" }))).fieldErrors,
+    ).toEqual({
+      species: [
+        '"ferrocenemethanol" is not a species of the catalogue or of the lab; type a formula (NaCl, SO4^2-) or choose from the list.',
+      ],
+    });
+    const suggestions = await suggestSpecies(own, { q: "Fc" });
+    expect(suggestions[0]).toEqual({ formula: "FcMeOH", name: "Ferrocenemethanol", source: "lab" });
+    expect((await suggestSpecies(r1, { q: "Fc" })).map((s) => s.source)).not.toContain("lab");
+    expect((await suggestSpecies(r1, { q: "potassium chl" }))[0]).toMatchObject({
+      formula: "KCl",
+      source: "catalogue",
+    });
   });
 
   describe("pagination and CSV", () => {
