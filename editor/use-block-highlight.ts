@@ -28,7 +28,7 @@ export function useBlockHighlight(ready: boolean): void {
         for (const other of document.querySelectorAll('[data-highlighted="true"]'))
           other.removeAttribute("data-highlighted");
         element.setAttribute("data-highlighted", "true");
-        element.scrollIntoView({ block: "center" });
+        element.scrollIntoView({ block: "start" });
       }, 100);
     };
     highlight();

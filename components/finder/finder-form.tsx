@@ -3,6 +3,7 @@
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import type { FormEvent, ReactNode } from "react";
+import { FINDER_QUERY_KEYS } from "@/lib/validation/solution-finder";
 import { SpeciesField } from "./species-field";
 
 export interface FinderOption {
@@ -24,14 +25,19 @@ export interface FinderFormProps {
 /** Values that are the defaults are left out of the URL, so shared links stay short. */
 const DEFAULTS: Record<string, string> = { scale: "molal", match: "all", history: "0" };
 
-/** The finder's form as URL parameters: empty and default values dropped, page reset. */
+/**
+ * The finder's form as URL parameters: empty and default values dropped, the page reset, the
+ * keys in one fixed order so that the same search is always the same link.
+ */
 function queryOf(form: HTMLFormElement): string {
+  const data = new FormData(form);
   const params = new URLSearchParams();
-  new FormData(form).forEach((value, key) => {
-    if (typeof value !== "string") return;
+  for (const key of FINDER_QUERY_KEYS) {
+    const value = data.get(key);
+    if (typeof value !== "string") continue;
     const v = value.trim().replace(/,\s*$/, "");
     if (v !== "" && DEFAULTS[key] !== v) params.set(key, v);
-  });
+  }
   return params.toString();
 }
 
