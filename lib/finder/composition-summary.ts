@@ -4,10 +4,17 @@ interface TypedComponent {
   formula?: unknown;
   amount?: unknown;
   unit?: unknown;
+  /** The basis of a weighed amount: "22.37 g per 100 mL". */
+  perAmount?: unknown;
+  perUnit?: unknown;
 }
 
+const shown = (x: unknown) =>
+  typeof x === "number" && Number.isFinite(x) ? Number(x.toPrecision(3)).toString() : "?";
+
 /**
- * A solution's recipe in one line, formulas typeset: "0.1 mol/kg NaCl + 5 mmol/L K₃Fe(CN)₆".
+ * A solution's recipe in one line, formulas typeset: "0.1 mol/kg NaCl + 5 mmol/L K₃Fe(CN)₆",
+ * "22.4 g per 100 mL KCl".
  * Reads the block's components as stored (untyped JSON); rows without a formula are skipped
  * and a missing amount reads as "?".
  */
@@ -16,12 +23,15 @@ export function compositionSummary(components: unknown): string {
   return (components as TypedComponent[])
     .filter((c) => typeof c?.formula === "string" && c.formula.trim() !== "")
     .map((c) => {
-      const amount =
-        typeof c.amount === "number" && Number.isFinite(c.amount)
-          ? Number(c.amount.toPrecision(3)).toString()
-          : "?";
       const unit = typeof c.unit === "string" ? c.unit : "";
-      return `${amount} ${unit} ${formulaAsText(String(c.formula).trim())}`.replace(/\s+/g, " ");
+      const per =
+        typeof c.perUnit === "string" && c.perAmount !== null && c.perAmount !== undefined
+          ? ` per ${shown(c.perAmount)} ${c.perUnit}`
+          : "";
+      return `${shown(c.amount)} ${unit}${per} ${formulaAsText(String(c.formula).trim())}`.replace(
+        /\s+/g,
+        " ",
+      );
     })
     .join(" + ");
 }

@@ -15,15 +15,24 @@ export function finderHref(query: Query, changes: Query): string {
   return text ? `/solutions?${text}` : "/solutions";
 }
 
-const COLUMNS: { key: FinderSortKey | null; label: string; numeric?: boolean }[] = [
+/**
+ * The table's columns. Quantities keep their symbols' case ("λD / nm"); author and date fold
+ * into the entry cell below desktop width so that a tablet shows the table without scrolling.
+ */
+const COLUMNS: {
+  key: FinderSortKey | null;
+  label: string;
+  numeric?: boolean;
+  wide?: boolean;
+}[] = [
   { key: "name", label: "Solution" },
   { key: null, label: "Composition" },
   { key: "ionicStrength", label: "I", numeric: true },
   { key: "debye", label: "λD / nm", numeric: true },
   { key: "temperature", label: "T / °C", numeric: true },
   { key: "entry", label: "Entry" },
-  { key: "author", label: "Author" },
-  { key: "saved", label: "Saved" },
+  { key: "author", label: "Author", wide: true },
+  { key: "saved", label: "Saved", wide: true },
   { key: "status", label: "Status" },
 ];
 
@@ -41,7 +50,10 @@ function SortHeader({
   unit: string;
 }) {
   const label = column.key === "ionicStrength" ? `I / ${unit}` : column.label;
-  const align = column.numeric ? "text-right" : "text-left";
+  const align = [
+    column.numeric ? "text-right normal-case" : "text-left",
+    column.wide ? "hidden lg:table-cell" : "",
+  ].join(" ");
   if (!column.key) {
     return (
       <th scope="col" className={`px-3 py-2.5 ${align}`}>
@@ -148,9 +160,12 @@ export function ResultsTable({
                   {s.entryTitle}
                 </Link>
                 <span className="block text-xs text-ink-soft">{s.projectName}</span>
+                <span className="block text-xs text-ink-soft lg:hidden">
+                  {s.authorName} · {s.savedAt.slice(0, 10)}
+                </span>
               </td>
-              <td className="px-3 py-2 text-ink-soft">{s.authorName}</td>
-              <td className="px-3 py-2 font-mono text-xs whitespace-nowrap">
+              <td className="hidden px-3 py-2 text-ink-soft lg:table-cell">{s.authorName}</td>
+              <td className="hidden px-3 py-2 font-mono text-xs whitespace-nowrap lg:table-cell">
                 {s.savedAt.slice(0, 10)}
               </td>
               <td className="px-3 py-2">
