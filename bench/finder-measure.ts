@@ -1,5 +1,6 @@
 /** Timing helpers for the finder bench: percentiles of sequential runs, and autocannon. */
-import { createRequire } from "node:module";
+// @ts-expect-error -- autocannon ships no type declarations; the little used here is typed below.
+import autocannonUntyped from "autocannon";
 
 export interface Percentiles {
   p50: number;
@@ -28,6 +29,37 @@ export async function timeRuns(
   return { p50: percentile(times, 50), p95: percentile(times, 95), runs };
 }
 
+/**
+ * Two things measured in alternation, `runs` times each after a warm-up: on a shared machine a
+ * burst of load then slows both alike, so their ratio stays meaningful.
+ */
+export async function timePairs(
+  first: () => Promise<unknown>,
+  second: () => Promise<unknown>,
+  runs = 300,
+  warmup = 20,
+): Promise<[Percentiles, Percentiles]> {
+  for (let i = 0; i < warmup; i++) {
+    await first();
+    await second();
+  }
+  const a: number[] = [];
+  const b: number[] = [];
+  for (let i = 0; i < runs; i++) {
+    let started = performance.now();
+    await first();
+    a.push(performance.now() - started);
+    started = performance.now();
+    await second();
+    b.push(performance.now() - started);
+  }
+  const summary = (times: number[]): Percentiles => {
+    times.sort((x, y) => x - y);
+    return { p50: percentile(times, 50), p95: percentile(times, 95), runs };
+  };
+  return [summary(a), summary(b)];
+}
+
 /** A GET that must answer 200 (a bench of error pages would measure nothing). */
 export async function getOk(url: string, cookie: string): Promise<void> {
   const response = await fetch(url, { headers: { cookie } });
@@ -47,8 +79,7 @@ type Autocannon = (options: {
   headers?: Record<string, string>;
 }) => Promise<AutocannonResult>;
 
-// autocannon ships no types; the little this bench uses is typed above.
-const autocannon = createRequire(import.meta.url)("autocannon") as Autocannon;
+const autocannon = autocannonUntyped as Autocannon;
 
 /** Requests per second at `connections` concurrent clients for `seconds`, all answered 200. */
 export async function requestsPerSecond(

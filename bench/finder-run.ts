@@ -33,7 +33,15 @@ import {
   SYNTHETIC_PASSWORD,
 } from "@/scripts/seed-synthetic-solutions";
 import { ensureBuild, signIn, startApp, startBareServer } from "./finder-server";
-import { getOk, ms, requestsPerSecond, timeRuns, type Percentiles } from "./finder-measure";
+import os from "node:os";
+import {
+  getOk,
+  ms,
+  requestsPerSecond,
+  timePairs,
+  timeRuns,
+  type Percentiles,
+} from "./finder-measure";
 
 const APP_PORT = Number(process.env.IONLEAF_BENCH_APP_PORT ?? 3460);
 const BARE_PORT = APP_PORT + 1;
@@ -181,8 +189,7 @@ async function main() {
           c.route === null
             ? `${app.url}/api/solutions/similar?${new URLSearchParams({ entry: entryId, block: blockId }).toString()}`
             : `${app.url}/api/solutions?${c.route.toString()}`;
-        const bareSql: Percentiles = await timeRuns(c.sql);
-        const route: Percentiles = await timeRuns(() => getOk(routeUrl, cookie));
+        const [bareSql, route] = await timePairs(c.sql, () => getOk(routeUrl, cookie));
         const ratio = route.p95 / bareSql.p95;
         console.log(
           `${c.label.padEnd(44)} ${ms(bareSql.p50).padStart(9)} ${ms(bareSql.p95).padStart(9)} ${ms(route.p50).padStart(10)} ${ms(route.p95).padStart(10)}  ${ratio.toFixed(1)}×`,
@@ -235,7 +242,12 @@ async function main() {
     await pool.end();
   }
 
-  console.log("");
+  console.log(
+    `\nload average now ${os
+      .loadavg()
+      .map((l) => l.toFixed(2))
+      .join(" ")} (${os.cpus().length} CPUs)`,
+  );
   for (const c of checks)
     console.log(`${c.pass ? "ok  " : "OVER"} ${c.label}: ${c.value} (target ${c.target})`);
   console.log(

@@ -14,7 +14,7 @@ const ROOT = new URL("..", import.meta.url).pathname;
 const DIST = ".next-test";
 const STAMP = path.join(ROOT, DIST, "IONLEAF_BENCH_COMMIT");
 
-export const BENCH_AUTH_SECRET = "bench-secret-not-for-production-0123456789abcdef";
+const BENCH_AUTH_SECRET = "bench-secret-not-for-production-0123456789abcdef";
 
 function appEnv(databaseUrl: string, port: number): NodeJS.ProcessEnv {
   return {

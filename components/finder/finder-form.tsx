@@ -6,7 +6,7 @@ import type { FormEvent, ReactNode } from "react";
 import { FINDER_QUERY_KEYS } from "@/lib/validation/solution-finder";
 import { SpeciesField } from "./species-field";
 
-export interface FinderOption {
+interface FinderOption {
   value: string;
   label: string;
 }

@@ -37,7 +37,7 @@ export interface FinderFilter {
   includeHistory: boolean;
 }
 
-export type FinderSortColumn =
+type FinderSortColumn =
   "saved" | "name" | "ionicStrength" | "debye" | "temperature" | "entry" | "author" | "status";
 
 export interface FinderSort {

@@ -19,8 +19,8 @@ export interface DistancePoint {
   composition: Record<string, number>;
 }
 
-export const MISSING_ION_DECADES = 2;
-export const DEGREES_PER_DECADE = 25;
+const MISSING_ION_DECADES = 2;
+const DEGREES_PER_DECADE = 25;
 const SOLVENT_PENALTY = 4;
 
 function ionsOf(p: DistancePoint): string[] {

@@ -17,7 +17,7 @@ import { parseInput } from "@/lib/validation/parse";
 const SHOWN = 10;
 const CANDIDATES_PER_SIDE = 200;
 
-export interface SimilarSolution extends FoundSolution {
+interface SimilarSolution extends FoundSolution {
   /** compositionDistance from the target, in decades (lib/finder/composition-distance.ts). */
   distance: number;
   /** The difference in words: "same species, I 8 % higher, 3 °C colder". */

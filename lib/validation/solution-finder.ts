@@ -53,7 +53,7 @@ const day = (label: string) =>
       }, `${label}: use a real date between 2000 and 2200.`),
   );
 
-export const FINDER_SORT_KEYS = [
+const FINDER_SORT_KEYS = [
   "saved",
   "name",
   "ionicStrength",
@@ -66,8 +66,8 @@ export const FINDER_SORT_KEYS = [
 export type FinderSortKey = (typeof FINDER_SORT_KEYS)[number];
 
 /** Most species a query may name, and the longest full-text query. */
-export const FINDER_MAX_SPECIES = 8;
-export const FINDER_MAX_TEXT = 200;
+const FINDER_MAX_SPECIES = 8;
+const FINDER_MAX_TEXT = 200;
 export const FINDER_PAGE_SIZE = 50;
 
 const MODEL_IDS = [
