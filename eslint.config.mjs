@@ -37,7 +37,7 @@ const IMPORT_POLICIES = [
   { from: ["document"], allow: ["document", "chem", "shared"] },
   { from: ["traces"], allow: ["traces", "chem"] },
   // The shared vocabulary re-exports the database's value lists (pure constants).
-  { from: ["shared"], allow: ["shared", "chem", "document", "db"] },
+  { from: ["shared"], allow: ["shared", "chem", "document", "traces", "db"] },
   { from: ["server"], allow: ["server", "shared", "document", "chem", "traces", "db"] },
   // Client code never reaches db/ or server-only modules.
   { from: ["components"], allow: ["components", "editor", "shared", "document", "chem", "traces"] },

@@ -24,10 +24,8 @@ const config: KnipConfig = {
     // that does not resolve against the rest of tiptap 3.31.
     "@tiptap/extension-bubble-menu",
     "@tiptap/extension-floating-menu",
-    // Installed for the attachments work in progress (uploads and photo thumbnails).
-    "formidable",
-    "sharp",
-    "@types/formidable",
+    // The load and finder benchmarks (bench/) are being written against it.
+    "autocannon",
   ],
 };
 

@@ -7,6 +7,8 @@ import { printDhBench } from "./chem-dh";
 import { printPitzerBench } from "./chem-pitzer";
 import { printBufferBench } from "./chem-buffer";
 import { printEditorRecomputeBench } from "./editor-recompute";
+import { printSeawaterBench } from "./chem-seawater";
+import { printSweepBench } from "./chem-sweep";
 import { printTraceParseBench } from "./trace-parse";
 import { printFinderBench } from "./finder";
 
@@ -22,6 +24,8 @@ const reports = [
   printPitzerBench(),
   printBufferBench(),
   printEditorRecomputeBench(),
+  printSeawaterBench(),
+  printSweepBench(),
   printTraceParseBench(),
   printFinderBench(),
 ];

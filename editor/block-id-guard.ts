@@ -2,7 +2,7 @@ import { Extension } from "@tiptap/core";
 import { Plugin, PluginKey } from "@tiptap/pm/state";
 import { newBlockId } from "@/lib/document/block-id";
 
-const BLOCK_TYPES = new Set(["solutionBlock", "cellBlock"]);
+const BLOCK_TYPES = new Set(["solutionBlock", "cellBlock", "traceBlock"]);
 
 /**
  * Keeps block ids unique. Copying a solution block and pasting it duplicates its

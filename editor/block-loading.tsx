@@ -1,5 +1,5 @@
 /** Placeholder while a live block's code (lib/chem and its catalogues) is fetched. */
-export function BlockLoading({ kind }: { kind: "solution" | "cell" }) {
+export function BlockLoading({ kind }: { kind: "solution" | "cell" | "trace" | "figure" }) {
   return (
     <div
       data-live-block={kind}

@@ -9,6 +9,9 @@ import { CellBlock } from "./cell-block/cell-block-node";
 import { linkOptions } from "./link-policy";
 import { PasteSanitizer } from "./paste-sanitizer";
 import { SolutionBlock } from "./solution-block/solution-block-node";
+import { TraceBlock } from "./trace-block/trace-block-node";
+import { AttachmentFigure } from "./attachments/attachment-figure-node";
+import { AttachmentFile } from "./attachments/attachment-file-node";
 
 export interface EditorExtensionOptions {
   placeholder?: string;
@@ -43,6 +46,9 @@ export function buildEditorExtensions({
     }),
     SolutionBlock,
     CellBlock,
+    TraceBlock,
+    AttachmentFigure,
+    AttachmentFile,
     BlockIdGuard,
     PasteSanitizer,
   ];

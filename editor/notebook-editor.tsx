@@ -9,6 +9,9 @@ import { cx } from "@/lib/ui/class-names";
 import { buildEditorExtensions } from "./extensions";
 import { EditorPrompts } from "./toolbar/editor-prompts";
 import { EditorToolbar, type ToolbarPrompt } from "./toolbar/editor-toolbar";
+import { looksLikeExport } from "./attachments/looks-like-export";
+import { UploadPanel } from "./attachments/upload-panel";
+import { useUploads } from "./attachments/use-uploads";
 import { useBlockHighlight } from "./use-block-highlight";
 
 export interface NotebookEditorProps {
@@ -24,6 +27,8 @@ export interface NotebookEditorProps {
   className?: string;
   /** Receives the tiptap editor once it exists (focus, tests); most pages do not need it. */
   onEditorReady?: (editor: Editor) => void;
+  /** The entry files are uploaded to (drop, paste, the toolbar's Attach); none: no uploads. */
+  uploadEntryId?: string;
 }
 
 /**
@@ -39,11 +44,13 @@ export function NotebookEditor({
   ariaLabel = "Entry text",
   className,
   onEditorReady,
+  uploadEntryId,
 }: NotebookEditorProps) {
   const [prompt, setPrompt] = useState<ToolbarPrompt | null>(null);
   const onChangeRef = useRef(onChange);
   onChangeRef.current = onChange;
   const promptRef = useRef(setPrompt);
+  const uploadRef = useRef<((files: File[]) => void) | null>(null);
 
   // The schema (and its placeholder) is fixed for the editor's lifetime.
   const initialPlaceholder = useRef(placeholder);
@@ -66,6 +73,32 @@ export function NotebookEditor({
         "aria-multiline": "true",
         role: "textbox",
         class: "ionleaf-prose",
+      },
+      // Files dropped or pasted into the text are uploaded to the entry and inserted where
+      // they land; pasted text that is an instrument export becomes a file and a trace block.
+      handleDrop: (_view: unknown, event: DragEvent) => {
+        const files = [...(event.dataTransfer?.files ?? [])];
+        if (!files.length || !uploadRef.current) return false;
+        event.preventDefault();
+        uploadRef.current(files);
+        return true;
+      },
+      handlePaste: (_view: unknown, event: ClipboardEvent) => {
+        if (!uploadRef.current) return false;
+        const files = [...(event.clipboardData?.files ?? [])];
+        if (files.length) {
+          uploadRef.current(files);
+          return true;
+        }
+        const text = event.clipboardData?.getData("text/plain") ?? "";
+        if (looksLikeExport(text)) {
+          const stamp = new Date().toISOString().slice(0, 19).replace(/[:T]/g, "-");
+          uploadRef.current([
+            new File([text], `pasted-export-${stamp}.txt`, { type: "text/plain" }),
+          ]);
+          return true;
+        }
+        return false;
       },
       handleKeyDown: (_view: unknown, event: KeyboardEvent) => {
         if ((event.ctrlKey || event.metaKey) && event.key.toLowerCase() === "k") {
@@ -99,6 +132,10 @@ export function NotebookEditor({
     if (editor && editor.isEditable !== editable) editor.setEditable(editable, false);
   }, [editor, editable]);
 
+  const uploads = useUploads(uploadEntryId ?? "", editor);
+  const canUpload = Boolean(uploadEntryId) && editable;
+  uploadRef.current = canUpload ? uploads.upload : null;
+
   useBlockHighlight(editor !== null);
 
   return (
@@ -110,7 +147,16 @@ export function NotebookEditor({
     >
       {editor && editable ? (
         <div className="sticky top-0 z-10 rounded-t-lg">
-          <EditorToolbar editor={editor} onPrompt={setPrompt} />
+          <EditorToolbar
+            editor={editor}
+            onPrompt={setPrompt}
+            onAttach={canUpload ? uploads.upload : undefined}
+          />
+          <UploadPanel
+            items={uploads.items}
+            onCancel={uploads.cancel}
+            onDismiss={uploads.dismiss}
+          />
           {prompt ? (
             <EditorPrompts editor={editor} prompt={prompt} onClose={() => setPrompt(null)} />
           ) : null}

@@ -82,6 +82,10 @@ const smtp = new SMTPServer({
   },
 });
 
+// A client that hangs up mid-conversation (a process that exits while its mail is being sent)
+// is the client's problem: the catcher logs it and keeps serving everyone else.
+smtp.on("error", (error) => console.error("mail catcher: SMTP connection error:", error.message));
+
 const http = createServer((req, res) => {
   const send = (status: number, body: unknown) => {
     res.writeHead(status, { "content-type": "application/json" });
@@ -102,6 +106,8 @@ const http = createServer((req, res) => {
   }
   send(404, { error: "not_found" });
 });
+
+http.on("clientError", (_error, socket) => socket.destroy());
 
 smtp.listen(smtpPort, "127.0.0.1", () => {
   http.listen(httpPort, "127.0.0.1", () => {

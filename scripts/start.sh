@@ -27,7 +27,15 @@ done
 [ -s "$STATE/db-password" ] || node -e "process.stdout.write(require('crypto').randomBytes(18).toString('hex'))" >"$STATE/db-password"
 chmod 600 "$STATE/auth-secret" "$STATE/db-password"
 
-PGDATA_DIR="$(pick_pg_data_dir "$STATE/postgres" "ionleaf-$(printf %s "$ROOT_DIR" | sha1sum | cut -c1-10)-postgres")"
+# The cluster lives outside the project folder, so the development server's file watcher never
+# sees PostgreSQL writing (it would reload the page on every write). A cluster an earlier
+# version made in .data/postgres is kept and used.
+CLUSTER_NAME="ionleaf-$(printf %s "$ROOT_DIR" | sha1sum | cut -c1-10)-postgres"
+if [ -f "$STATE/postgres/PG_VERSION" ]; then
+  PGDATA_DIR="$STATE/postgres"
+else
+  PGDATA_DIR="$(pick_pg_data_dir "/var/lib/ionleaf/$CLUSTER_NAME" "$CLUSTER_NAME")"
+fi
 
 APP_PID=""; CATCHER_PID=""
 cleanup() {

@@ -19,10 +19,13 @@ PGDATA_DIR="$WORK/postgres"; mkdir -p "$PGDATA_DIR"
 is_root && chown postgres:postgres "$PGDATA_DIR"
 
 free_port() { local p="$1"; while ! port_is_free "$p"; do p=$((p + 1)); done; echo "$p"; }
-PG_PORT="$(free_port 54339)"
-SMTP_PORT="$(free_port 2535)"
-MAIL_HTTP_PORT="$(free_port 2590)"
-APP_PORT="$(free_port 3100)"
+# Each run starts its port search at its own random offset, so two runs on one machine (two
+# checkouts, CI beside a developer) do not race for the same ports.
+OFFSET=$(( (RANDOM % 400) * 10 ))
+PG_PORT="$(free_port $((44000 + OFFSET)))"
+SMTP_PORT="$(free_port $((48000 + OFFSET)))"
+MAIL_HTTP_PORT="$(free_port $((52000 + OFFSET)))"
+APP_PORT="$(free_port $((36000 + OFFSET)))"
 
 APP_PID=""; CATCHER_PID=""
 cleanup() {

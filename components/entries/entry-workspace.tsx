@@ -126,6 +126,7 @@ function EntrySession({
           editable={editable}
           ariaLabel={`Text of ${start.title}`}
           onChange={(doc) => change({ content: doc })}
+          uploadEntryId={editable ? entryId : undefined}
         />
       </StoredResultsProvider>
     </div>

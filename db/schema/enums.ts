@@ -25,6 +25,10 @@ export type SignatureMeaning = (typeof SIGNATURE_MEANINGS)[number];
 export const REVIEW_DECISIONS = ["countersigned", "returned"] as const;
 export type ReviewDecision = (typeof REVIEW_DECISIONS)[number];
 
+/** photo: an image with thumbnails; trace: a parsed instrument export; file: anything else. */
+export const ATTACHMENT_KINDS = ["photo", "trace", "file"] as const;
+export type AttachmentKind = (typeof ATTACHMENT_KINDS)[number];
+
 /** SQL list literal for a CHECK constraint, e.g. `('a','b')`. Values are our own constants. */
 export function sqlList(values: readonly string[]): string {
   return `(${values.map((v) => `'${v.replace(/'/g, "''")}'`).join(",")})`;

@@ -20,6 +20,8 @@ import {
   type ReviewDecision,
   SIGNATURE_MEANINGS,
   type SignatureMeaning,
+  ATTACHMENT_KINDS,
+  type AttachmentKind,
   sqlList,
 } from "./enums";
 import { labs, users } from "./labs";
@@ -222,7 +224,7 @@ export const blockResults = pgTable(
     // The finder's range scans on either ionic-strength scale use two covering partial
     // indexes, block_results_current_molal_idx and block_results_current_molar_idx:
     // (lab_id, ionic_strength_molal|molar) INCLUDE (species, entry_id, created_at, id)
-    // WHERE to_revision IS NULL. They are written in SQL in drizzle/0005_finder_search.sql
+    // WHERE to_revision IS NULL. They are written in SQL in drizzle/0006_finder_search.sql
     // because Drizzle cannot declare INCLUDE; a range + species query is answered from the
     // index alone (docs/architecture.md, "The solution finder").
     index("block_results_current_species_idx")
@@ -341,6 +343,13 @@ export const reviewRequests = pgTable(
   ],
 );
 
+/**
+ * A file attached to an entry: the original kept byte for byte under its SHA-256 in the
+ * storage (lib/storage), described here. Which revisions include it is decided by the
+ * document: a revision's attachments are those its nodes reference (a photo figure, a trace
+ * block, a file link), so removing a file from a draft is a new revision and a countersigned
+ * revision keeps its files forever. Rows never change (a trigger refuses UPDATE and DELETE).
+ */
 export const attachments = pgTable(
   "attachments",
   {
@@ -353,20 +362,52 @@ export const attachments = pgTable(
       .references(() => entries.id, { onDelete: "restrict" }),
     sha256: text("sha256").notNull(),
     sizeBytes: bigint("size_bytes", { mode: "number" }).notNull(),
+    /** From the file's bytes (magic numbers), never from the client's claim. */
     detectedType: text("detected_type").notNull(),
+    kind: text("kind").$type<AttachmentKind>().notNull().default("file"),
     originalName: text("original_name").notNull(),
+    /** The storage key of the original (content-addressed). */
     storedPath: text("stored_path").notNull(),
+    /** Photos: storage keys and sizes of the WebP thumbnail and web copy. */
+    derivatives: jsonb("derivatives").$type<Record<string, unknown>>().notNull().default({}),
     uploaderId: uuid("uploader_id")
       .notNull()
       .references(() => users.id),
+    /** Instrument exports: what the parser understood (technique, columns, ranges, problems). */
     parsedSummary: jsonb("parsed_summary").$type<Record<string, unknown>>(),
     createdAt: createdAt(),
   },
   (t) => [
     index("attachments_entry_idx").on(t.entryId),
-    check("attachments_size_nonnegative", sql`${t.sizeBytes} >= 0`),
+    uniqueIndex("attachments_entry_sha256_unique").on(t.entryId, t.sha256),
+    check("attachments_size_positive", sql`${t.sizeBytes} > 0`),
     check("attachments_sha256_format", sql`${t.sha256} ~ '^[0-9a-f]{64}$'`),
+    check("attachments_kind_valid", sql.raw(`kind in ${sqlList(ATTACHMENT_KINDS)}`)),
   ],
+);
+
+/**
+ * How a lab reads an instrument export layout the parser could not understand on its own,
+ * keyed by the layout's column names: chosen once in the mapping dialog, reused for every
+ * later file with the same columns.
+ */
+export const traceMappings = pgTable(
+  "trace_mappings",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    labId: uuid("lab_id")
+      .notNull()
+      .references(() => labs.id, { onDelete: "cascade" }),
+    /** SHA-256 of the normalised column names of the layout. */
+    layoutKey: text("layout_key").notNull(),
+    columns: text("columns").array().notNull(),
+    mapping: jsonb("mapping").$type<Record<string, unknown>>().notNull(),
+    createdById: uuid("created_by_id")
+      .notNull()
+      .references(() => users.id),
+    updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [unique("trace_mappings_lab_layout_unique").on(t.labId, t.layoutKey)],
 );
 
 /** A lab's own additions to the built-in species catalogue. */

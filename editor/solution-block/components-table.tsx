@@ -14,7 +14,7 @@ interface ComponentsTableProps {
 }
 
 /** The document schema's limit on rows per block. */
-const MAX_ROWS = 40;
+export const MAX_COMPONENT_ROWS = 40;
 
 const emptyRow = (): SolutionComponentInput => ({ formula: "", amount: null, unit: "mol/kg" });
 
@@ -42,7 +42,7 @@ export function ComponentsTable({ components, errors, editable, onChange }: Comp
   const update = (index: number, patch: Partial<SolutionComponentInput>) =>
     onChange(components.map((row, i) => (i === index ? { ...row, ...patch } : row)));
   const addRow = () => {
-    if (components.length >= MAX_ROWS) return;
+    if (components.length >= MAX_COMPONENT_ROWS) return;
     // A new row copies the unit above it: stocks are usually written in one unit.
     const last = components[components.length - 1];
     onChange([
@@ -129,7 +129,7 @@ export function ComponentsTable({ components, errors, editable, onChange }: Comp
           type="button"
           className={`${actionButtonClass} mt-1`}
           onClick={addRow}
-          disabled={components.length >= MAX_ROWS}
+          disabled={components.length >= MAX_COMPONENT_ROWS}
         >
           <span aria-hidden>+</span> Add component
         </button>

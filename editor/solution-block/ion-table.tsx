@@ -71,7 +71,7 @@ export function SaltList({ result }: { result: SolutionResult }) {
             Salt
           </th>
           <th scope="col" className="py-1 font-medium">
-            γ±
+            {result.speciation ? "γ± (stoichiometric)" : "γ±"}
           </th>
           <th scope="col" className="py-1 font-medium">
             a±

@@ -3,7 +3,7 @@
 import { useMemo } from "react";
 import type { SolutionBlockInput } from "@/lib/document/block-schemas";
 import { TextField } from "../ui/text-field";
-import { ComponentsTable } from "./components-table";
+import { ComponentsTable, MAX_COMPONENT_ROWS } from "./components-table";
 import { evaluateSolutionBlockCached } from "@/lib/document/evaluate-solution-block";
 import { NO_MESSAGES, type FieldMessages } from "./field-messages";
 import { SolutionResults } from "./solution-results";
@@ -95,7 +95,15 @@ export function SolutionBlockPanel({ value, onChange, editable = true }: Solutio
         />
         <div className="space-y-3 border-t border-dashed border-ink-faint/40 pt-3">
           {showStored ? <StoredNotice stored={stored} engineChanges={engineChanges} /> : null}
-          <SolutionResults evaluation={evaluation} formulas={formulas} />
+          <SolutionResults
+            evaluation={evaluation}
+            formulas={formulas}
+            onAddComponent={
+              editable && value.components.length < MAX_COMPONENT_ROWS
+                ? (row) => patch({ components: [...value.components, row] })
+                : undefined
+            }
+          />
         </div>
       </div>
     </section>

@@ -4,13 +4,16 @@ import { lazy, Suspense, useState } from "react";
 import { actionButtonClass } from "../ui/field-styles";
 import { SafetyCaution } from "../ui/safety-caution";
 import { hazardNotesFor } from "../chem-catalogue";
-import type { SolutionEvaluation } from "@/lib/document/evaluate-solution-block";
+import type { SolutionComponentInput } from "@/lib/document/block-schemas";
+import type { SolutionEvaluation, SolutionResult } from "@/lib/document/evaluate-solution-block";
+import { ChargeBalanceOffer } from "./charge-balance-offer";
 import { ComponentResults } from "./component-results";
 import { describeField } from "./describe-field";
 import { FormulaApplied } from "./formula-applied";
 import { IonTable, SaltList } from "./ion-table";
 import { MessagesList } from "./messages-list";
 import { ResultsSummary } from "./results-summary";
+import { SpeciationTable } from "./speciation-table";
 
 // recharts is only fetched when a researcher opens a chart, so the editor's first load stays light.
 const GammaChart = lazy(() => import("./gamma-chart"));
@@ -19,15 +22,21 @@ interface SolutionResultsProps {
   evaluation: SolutionEvaluation;
   /** Species typed in the block, for hazard notes even while the engine refuses the input. */
   formulas: string[];
+  /** Appends a component row (the counter-ion that balances the charge); absent when read-only. */
+  onAddComponent?: (row: SolutionComponentInput) => void;
 }
 
-export function SolutionResults({ evaluation, formulas }: SolutionResultsProps) {
+export function SolutionResults({ evaluation, formulas, onAddComponent }: SolutionResultsProps) {
   const [chartOpen, setChartOpen] = useState(false);
   const [chartSalt, setChartSalt] = useState<string | null>(null);
   const hazards = hazardNotesFor(
     formulas,
     evaluation.status === "ok" ? evaluation.result : undefined,
   );
+
+  // Results stored by an engine before 2026.12.2 carry no density or charge balance.
+  const { density, chargeBalance } =
+    evaluation.status === "ok" ? (evaluation.result as Partial<SolutionResult>) : {};
 
   if (evaluation.status === "empty") {
     return (
@@ -55,10 +64,28 @@ export function SolutionResults({ evaluation, formulas }: SolutionResultsProps) 
             <span className="font-medium text-ink">Model: {evaluation.result.model.label}</span>
             {evaluation.result.model.reason ? <> — {evaluation.result.model.reason}</> : null}
           </p>
+          <MessagesList
+            title="Model changed"
+            tone="validity"
+            messages={evaluation.result.modelChange ? [evaluation.result.modelChange] : []}
+          />
+          {density ? (
+            <p className="text-xs text-ink-soft" data-testid="density-used">
+              <span className="font-medium text-ink">Density:</span> {density.label}
+            </p>
+          ) : null}
+          {chargeBalance && !chargeBalance.balanced ? (
+            <ChargeBalanceOffer offers={chargeBalance.offers} onAdd={onAddComponent} />
+          ) : null}
           <div className="grid gap-4 overflow-x-auto xl:grid-cols-[3fr_2fr]">
             <IonTable result={evaluation.result} />
             <SaltList result={evaluation.result} />
           </div>
+          {evaluation.result.speciation ? (
+            <div className="overflow-x-auto">
+              <SpeciationTable speciation={evaluation.result.speciation} />
+            </div>
+          ) : null}
           <div className="overflow-x-auto">
             <ComponentResults result={evaluation.result} />
           </div>
@@ -66,7 +93,9 @@ export function SolutionResults({ evaluation, formulas }: SolutionResultsProps) 
           <MessagesList
             title="Outside the model's range"
             tone="validity"
-            messages={evaluation.result.validity.messages}
+            messages={evaluation.result.validity.messages.filter(
+              (message) => message !== evaluation.result.modelChange,
+            )}
           />
           <MessagesList title="Warnings" tone="warning" messages={evaluation.result.warnings} />
           <MessagesList title="Notes" tone="note" messages={evaluation.result.notes ?? []} />

@@ -2,7 +2,7 @@
 
 import type { Editor } from "@tiptap/core";
 import { useEditorState } from "@tiptap/react";
-import type { KeyboardEvent } from "react";
+import { useRef, type KeyboardEvent } from "react";
 import { ToolbarButton, ToolbarDivider } from "./toolbar-button";
 
 export type ToolbarPrompt =
@@ -11,10 +11,12 @@ export type ToolbarPrompt =
 interface EditorToolbarProps {
   editor: Editor;
   onPrompt: (prompt: ToolbarPrompt) => void;
+  /** Uploads chosen files to the entry; absent when the entry takes no files. */
+  onAttach?: (files: File[]) => void;
 }
 
 /** Ionleaf's compact toolbar: text structure on the left, live blocks on the right in copper. */
-export function EditorToolbar({ editor, onPrompt }: EditorToolbarProps) {
+export function EditorToolbar({ editor, onPrompt, onAttach }: EditorToolbarProps) {
   const state = useEditorState({
     editor,
     selector: ({ editor: e }) => ({
@@ -171,6 +173,7 @@ export function EditorToolbar({ editor, onPrompt }: EditorToolbarProps) {
       >
         + Cell
       </ToolbarButton>
+      {onAttach ? <AttachButtons onAttach={onAttach} /> : null}
     </div>
   );
 }
@@ -195,4 +198,46 @@ function moveFocusWithArrows(event: KeyboardEvent<HTMLDivElement>) {
   if (next === null) return;
   event.preventDefault();
   buttons[next].focus();
+}
+
+/**
+ * Attach files through the system picker (several at once), or take a photo: on a phone or a
+ * tablet the second button opens the camera.
+ */
+function AttachButtons({ onAttach }: { onAttach: (files: File[]) => void }) {
+  const files = useRef<HTMLInputElement>(null);
+  const camera = useRef<HTMLInputElement>(null);
+  const take = (input: HTMLInputElement | null) => {
+    if (!input?.files?.length) return;
+    onAttach([...input.files]);
+    input.value = "";
+  };
+  return (
+    <>
+      <ToolbarButton accent label="Attach files" onClick={() => files.current?.click()}>
+        + Files
+      </ToolbarButton>
+      <ToolbarButton accent label="Take a photo" onClick={() => camera.current?.click()}>
+        + Photo
+      </ToolbarButton>
+      <input
+        ref={files}
+        type="file"
+        multiple
+        hidden
+        aria-label="Files to attach"
+        data-testid="attach-input"
+        onChange={(e) => take(e.currentTarget)}
+      />
+      <input
+        ref={camera}
+        type="file"
+        accept="image/*"
+        capture="environment"
+        hidden
+        aria-label="Photo to attach"
+        onChange={(e) => take(e.currentTarget)}
+      />
+    </>
+  );
 }

@@ -21,6 +21,7 @@ import {
   VACUUM_PERMITTIVITY_F_PER_M,
   kelvin,
 } from "./constants";
+import { ChemInputError } from "./errors";
 import type { DebyeHuckelConstants } from "./models/types";
 import { solventState } from "./solvents/properties";
 
@@ -30,6 +31,21 @@ export function debyeHuckelConstantsFrom(
   temperatureC: number,
 ): DebyeHuckelConstants {
   const temperatureK = kelvin(temperatureC);
+  if (!(relativePermittivity >= 1 && relativePermittivity <= 1000))
+    throw new ChemInputError("The relative permittivity must be a number from 1 to 1000.", {
+      field: "relativePermittivity",
+      code: "invalid_constant",
+    });
+  if (!(densityGPerMl > 0.01 && densityGPerMl <= 25))
+    throw new ChemInputError("The solvent density must be a number from 0.01 to 25 g/mL.", {
+      field: "densityGPerMl",
+      code: "invalid_constant",
+    });
+  if (!(temperatureK >= 1 && temperatureK <= 2000))
+    throw new ChemInputError("The temperature must be between −272 and 1727 °C.", {
+      field: "temperatureC",
+      code: "bad_temperature",
+    });
   const rhoKgPerM3 = densityGPerMl * 1000;
   const e2 = ELEMENTARY_CHARGE_C * ELEMENTARY_CHARGE_C;
   const bjerrum =

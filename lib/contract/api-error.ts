@@ -13,6 +13,7 @@ export type ApiErrorCode =
   | "unsupported_media_type"
   | "gone"
   | "unavailable"
+  | "range_not_satisfiable"
   | "internal";
 
 export interface ApiErrorBody {

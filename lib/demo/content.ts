@@ -5,7 +5,8 @@ import type { Actor } from "@/lib/rules/authorize";
 import { defaultCellBlockInput, defaultSolutionBlockInput } from "@/lib/document/block-defaults";
 import type { SolutionBlockInput } from "@/lib/document/block-schemas";
 import { createEntry } from "@/lib/notebook/entries";
-import { submitEntry } from "@/lib/notebook/review";
+import { countersignEntry, returnEntry, startAmendment, submitEntry } from "@/lib/notebook/review";
+import { DEMO_PASSWORD } from "./scenario";
 import { saveEntryContent } from "@/lib/notebook/save-entry";
 import { listProjects } from "@/lib/projects/service";
 import { getDb } from "@/lib/server/database";
@@ -66,6 +67,7 @@ async function saltmarsh(labId: string) {
   const a = await actorsOf(labId);
   const tobin = a["tobin.bench@saltmarsh.example"];
   const mira = a["mira.bench@saltmarsh.example"];
+  const odile = a["odile.pi@saltmarsh.example"];
 
   const copperBath = defaultSolutionBlockInput({
     name: "0.1 mol/kg NaCl with 1 mmol/kg CuCl₂",
@@ -94,7 +96,7 @@ async function saltmarsh(labId: string) {
     instrument: "bench potentiostat A",
     channel: "1",
   });
-  await write(
+  const copperRun = await write(
     tobin,
     "Copper corrosion in chloride media",
     "Cu disc in 0.1 m NaCl with 1 mM CuCl₂ — polarisation run 1",
@@ -107,7 +109,12 @@ async function saltmarsh(labId: string) {
         "Open-circuit potential for 30 min, then a slow linear sweep from −250 mV to +250 mV about it at 0.167 mV/s.",
       ),
     ],
+    true,
   );
+  await returnEntry(odile, copperRun, {
+    revision: 1,
+    comment: "Record the grit paper lot and the drift you accepted before starting the sweep.",
+  });
 
   const mixed = defaultSolutionBlockInput({
     name: "Chloride–sulfate mix, I ≈ 0.3",
@@ -116,7 +123,7 @@ async function saltmarsh(labId: string) {
       { formula: "Na2SO4", amount: 0.0667, unit: "mol/kg" },
     ],
   });
-  await write(
+  const mixedEntry = await write(
     tobin,
     "Copper corrosion in chloride media",
     "Mixed chloride–sulfate electrolyte at I = 0.3 mol/kg",
@@ -130,6 +137,12 @@ async function saltmarsh(labId: string) {
     ],
     true,
   );
+  await countersignEntry(odile, mixedEntry, {
+    revision: 1,
+    password: DEMO_PASSWORD,
+    meaning: "approved",
+    comment: "Masses agree with the balance printout.",
+  });
 
   const redox = defaultSolutionBlockInput({
     name: "Ferri/ferro 5 mM in 1 M KCl",
@@ -173,21 +186,40 @@ async function saltmarsh(labId: string) {
     temperatureC: 22,
     components: [{ formula: "KCl", amount: 22.37, unit: "g", perAmount: 100, perUnit: "mL" }],
   });
-  await write(
+  const fillingNodes = (flaskMl: number) => [
+    heading("Recipe"),
+    paragraph(
+      `22.37 g KCl (dried 2 h at 110 °C) made up to ${flaskMl} mL in a class A flask at 22 °C.`,
+    ),
+    solution({ ...filling, components: [{ ...filling.components[0], perAmount: flaskMl }] }),
+    heading("Use"),
+    paragraph(
+      "Fills the Ag/AgCl (3 mol/L KCl) reference electrodes of the ferrocyanide cells; replaced monthly.",
+    ),
+  ];
+  const stock = await write(
     mira,
     "Ferrocyanide kinetics",
     "KCl stock for the reference compartment",
-    [
-      heading("Recipe"),
-      paragraph("22.37 g KCl (dried 2 h at 110 °C) made up to 100 mL in a class A flask at 22 °C."),
-      solution(filling),
-      heading("Use"),
-      paragraph(
-        "Fills the Ag/AgCl (3 mol/L KCl) reference electrodes of the ferrocyanide cells; replaced monthly.",
-      ),
-    ],
+    fillingNodes(100),
     true,
   );
+  await countersignEntry(odile, stock, {
+    revision: 1,
+    password: DEMO_PASSWORD,
+    meaning: "witnessed",
+    comment: "",
+  });
+  // Amended after countersignature: the flask was recalibrated; the amendment waits for review.
+  await startAmendment(mira, stock, {
+    reason: "The 100 mL flask was recalibrated at 99.82 mL; the concentration is corrected.",
+  });
+  await saveEntryContent(mira, stock, {
+    baseRevision: 1,
+    title: "KCl stock for the reference compartment",
+    content: { type: "doc", content: fillingNodes(99.82) },
+  });
+  await submitEntry(mira, stock);
 }
 
 async function ridgeback(labId: string) {

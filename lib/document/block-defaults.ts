@@ -1,5 +1,10 @@
 import { newBlockId } from "./block-id";
-import type { CellBlockInput, ElectrodeInput, SolutionBlockInput } from "./block-schemas";
+import type {
+  CellBlockInput,
+  ElectrodeInput,
+  SolutionBlockInput,
+  TraceBlockInput,
+} from "./block-schemas";
 
 /** Inputs of a freshly inserted solution block: water at 25 °C, one empty row. */
 export function defaultSolutionBlockInput(
@@ -38,6 +43,21 @@ export function defaultCellBlockInput(overrides: Partial<CellBlockInput> = {}): 
     channel: "",
     couple: null,
     pH: null,
+    ...overrides,
+  };
+}
+
+/** A trace block for an uploaded export: all cycles, potentials on the file's own scale. */
+export function defaultTraceBlockInput(
+  overrides: Partial<TraceBlockInput> & { attachmentId: string },
+): TraceBlockInput {
+  return {
+    blockId: newBlockId(),
+    name: "",
+    cellBlockId: null,
+    showCurrentDensity: false,
+    potentialScale: null,
+    cycles: null,
     ...overrides,
   };
 }

@@ -111,3 +111,35 @@ export const cellBlockInputSchema = z.strictObject({
   pH: boundedNumber(-20, 30).nullable(),
 });
 export type CellBlockInput = z.infer<typeof cellBlockInputSchema>;
+
+const attachmentIdSchema = z.uuid("An attachment id is a UUID.");
+
+/**
+ * A trace block: an instrument export attached to the entry, plotted. Only the choices of how
+ * to show it are stored; the data stay in the file and are read back on demand.
+ */
+export const traceBlockInputSchema = z.strictObject({
+  blockId: blockIdSchema,
+  attachmentId: attachmentIdSchema,
+  name: shortText(120),
+  /** A cell block of the same entry, for the electrode area (current density). */
+  cellBlockId: blockIdSchema.nullable(),
+  showCurrentDensity: z.boolean(),
+  /** Show potentials against this reference electrode instead of the file's own. */
+  potentialScale: z.enum(REFERENCE_ELECTRODE_IDS).nullable(),
+  /** Cycles shown (voltammetry); null: all. */
+  cycles: z.array(z.number().int().min(1).max(100_000)).max(200).nullable(),
+});
+export type TraceBlockInput = z.infer<typeof traceBlockInputSchema>;
+
+/** A photo attached to the entry, shown as a figure with a caption. */
+export const attachmentFigureSchema = z.strictObject({
+  attachmentId: attachmentIdSchema,
+  caption: shortText(500),
+});
+
+/** Any other attached file, shown as a link to download it. */
+export const attachmentFileSchema = z.strictObject({
+  attachmentId: attachmentIdSchema,
+  name: shortText(200),
+});

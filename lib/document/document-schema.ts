@@ -1,6 +1,12 @@
 import { z } from "zod";
 import { checkJsonShape } from "@/lib/validation/json-shape";
-import { cellBlockInputSchema, solutionBlockInputSchema } from "./block-schemas";
+import {
+  attachmentFigureSchema,
+  attachmentFileSchema,
+  cellBlockInputSchema,
+  solutionBlockInputSchema,
+  traceBlockInputSchema,
+} from "./block-schemas";
 import { isSafeHref } from "./safe-href";
 
 /**
@@ -54,6 +60,9 @@ const NODE_ATTRS = {
   blockMath: z.strictObject({ latex: z.string().max(LIMITS.maxLatex) }),
   solutionBlock: solutionBlockInputSchema,
   cellBlock: cellBlockInputSchema,
+  traceBlock: traceBlockInputSchema,
+  attachmentFigure: attachmentFigureSchema,
+  attachmentFile: attachmentFileSchema,
 } as const;
 
 const ALLOWED_NODE_TYPES = Object.keys(NODE_ATTRS) as (keyof typeof NODE_ATTRS)[];
@@ -145,7 +154,7 @@ function checkWholeDocument(doc: EntryNode, ctx: z.RefinementCtx) {
       });
       return;
     }
-    if (node.type === "solutionBlock" || node.type === "cellBlock") {
+    if (node.type === "solutionBlock" || node.type === "cellBlock" || node.type === "traceBlock") {
       const blockId = node.attrs?.blockId;
       const id = typeof blockId === "string" ? blockId : "";
       if (seenIds.has(id))

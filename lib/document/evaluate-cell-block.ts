@@ -19,6 +19,43 @@ export type CellPotentialResult =
       notes: string[];
     };
 
+type SolutionResult = Extract<
+  ReturnType<typeof evaluateSolutionBlockCached>,
+  { status: "ok" }
+>["result"];
+
+/** Fraction of an ion bound in pairs above which the cell's notes name it. */
+const PAIRED_NOTE_FRACTION = 0.01;
+
+/**
+ * Activities for the Nernst equation: those of the free ions. With ion association they come
+ * from the speciation (a = γ_free m_free, which equals γ_stoich m_total); the note names the
+ * ions of which more than 1 % is paired.
+ */
+function freeIonActivities(result: SolutionResult): {
+  activities: Record<string, number>;
+  note?: string;
+} {
+  const activities: Record<string, number> = {};
+  for (const ion of result.ions) activities[ion.formula] = ion.activity;
+  const speciation = result.speciation;
+  if (!speciation) return { activities };
+  const paired: string[] = [];
+  for (const free of speciation.free) {
+    activities[free.formula] = free.activity;
+    const total = result.ions.find((ion) => ion.formula === free.formula)?.molality ?? 0;
+    const fraction = total > 0 ? 1 - free.molality / total : 0;
+    if (fraction > PAIRED_NOTE_FRACTION)
+      paired.push(`${free.formula} ${Math.round(100 * fraction)} % paired`);
+  }
+  return {
+    activities,
+    ...(paired.length
+      ? { note: `Free-ion activities after ion association (${paired.join(", ")}).` }
+      : {}),
+  };
+}
+
 /**
  * Equilibrium potential of the chosen couple at the linked electrolyte's computed activities
  * (lib/chem's nernstPotential), then on the chosen reference scale (convertPotential).
@@ -44,10 +81,9 @@ export function computeCellPotential(
     };
   }
   const temperatureC = cell.temperatureC ?? electrolyte.temperatureC ?? 25;
-  const activities: Record<string, number> = {};
-  for (const ion of evaluation.result.ions) activities[ion.formula] = ion.activity;
+  const { activities, note: pairingNote } = freeIonActivities(evaluation.result);
   try {
-    const notes: string[] = [];
+    const notes: string[] = pairingNote ? [pairingNote] : [];
     if (
       cell.temperatureC !== null &&
       electrolyte.temperatureC !== null &&

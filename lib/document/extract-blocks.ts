@@ -32,6 +32,18 @@ export function extractCellBlocks(doc: unknown): CellBlockInput[] {
   });
 }
 
+/** Every attachment the document refers to (photo figures, file links, trace blocks), once each. */
+export function extractAttachmentIds(doc: unknown): string[] {
+  const ids = new Set<string>();
+  for (const type of ["attachmentFigure", "attachmentFile", "traceBlock"]) {
+    for (const attrs of collect(doc, type)) {
+      const id = (attrs as { attachmentId?: unknown } | null)?.attachmentId;
+      if (typeof id === "string") ids.add(id);
+    }
+  }
+  return [...ids];
+}
+
 function collect(doc: unknown, type: string): unknown[] {
   const found: unknown[] = [];
   // An explicit stack, so a deeply nested document cannot overflow the call stack.

@@ -1,7 +1,7 @@
 import { AppError } from "@/lib/errors";
 import { canonicalHash } from "./canonical-hash";
 import { safeParseEntryDocument, type EntryDocument } from "./document-schema";
-import { extractSolutionBlocks } from "./extract-blocks";
+import { extractAttachmentIds, extractSolutionBlocks } from "./extract-blocks";
 import { documentPlainText } from "./plain-text";
 import type { SolutionBlockInput } from "./block-schemas";
 import { solutionInputsHash } from "./solution-record";
@@ -19,6 +19,8 @@ export interface PreparedRevision {
    * computes a block (solutionRecordFor) only when no stored result has that key yet.
    */
   solutionBlocks: { block: SolutionBlockInput; inputsHash: string }[];
+  /** Attachments the document refers to; the server checks they belong to the entry. */
+  attachmentIds: string[];
 }
 
 /** The content hash a revision (and a signature) records: SHA-256 of canonical { title, content }. */
@@ -50,5 +52,6 @@ export function prepareRevision(title: string, rawContent: unknown): PreparedRev
       block,
       inputsHash: solutionInputsHash(block),
     })),
+    attachmentIds: extractAttachmentIds(content),
   };
 }

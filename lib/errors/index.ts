@@ -18,6 +18,7 @@ const STATUS: Record<AppErrorCode, number> = {
   unsupported_media_type: 415,
   gone: 410,
   unavailable: 503,
+  range_not_satisfiable: 416,
 };
 
 export type FieldErrors = Record<string, string[]>;

@@ -66,13 +66,18 @@ export async function buildEntryArchive(
   const number = requestedRevision ?? entry.signedRevisionNumber ?? entry.currentRevisionNumber;
   if (number < 1) throw new AppError("not_found", "This entry has no saved revision to export.");
   const db = getDb();
-  const [page, stored, attachments, lab] = await Promise.all([
+  const [page, stored, lab] = await Promise.all([
     getRevisionPage(actor, entry.id, number),
     storedResultsOf(db, actor.labId, entry.id, number),
-    revisionAttachmentsForSignature(db, actor.labId, entry.id, number),
     findLabById(db, actor.labId),
   ]);
   const { revision, verification } = page;
+  const attachments = await revisionAttachmentsForSignature(
+    db,
+    actor.labId,
+    entry.id,
+    revision.content,
+  );
   await insertAuditEvent(db, {
     labId: actor.labId,
     actorId: actor.userId,

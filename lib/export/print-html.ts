@@ -17,6 +17,23 @@ const escape = (s: unknown): string => {
   const text = typeof s === "string" ? s : typeof s === "number" ? String(s) : "";
   return text.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
 };
+/** "SO4^2-" → SO<sub>4</sub><sup>2−</sup>, as the block writes formulas (lib/ui/chem-formula). */
+function formulaHtml(formula: string): string {
+  const caret = /\^(\d*)([+-])$/.exec(formula);
+  const bare = caret ? null : /[A-Za-z0-9)\]]([+-])$/.exec(formula);
+  let body = formula;
+  let charge = "";
+  if (caret) {
+    body = formula.slice(0, caret.index);
+    charge = `${caret[1] === "1" ? "" : caret[1]}${caret[2] === "-" ? "−" : "+"}`;
+  } else if (bare) {
+    body = formula.slice(0, -1);
+    charge = bare[1] === "-" ? "−" : "+";
+  }
+  const typeset = escape(body).replace(/([A-Za-z)\]])(\d+)/g, "$1<sub>$2</sub>");
+  return charge ? `${typeset}<sup>${charge}</sup>` : typeset;
+}
+
 const latexOf = (node: Node) => (typeof node.attrs?.latex === "string" ? node.attrs.latex : "");
 
 const tex = (source: string, display = false) =>
@@ -109,7 +126,7 @@ function solutionBlock(block: SolutionBlockInput, ctx: Context): string {
     .filter((c) => c.formula.trim())
     .map(
       (c) =>
-        `<tr><td>${escape(c.formula)}</td><td>${escape(c.amount)} ${escape(c.unit)}${
+        `<tr><td>${formulaHtml(c.formula)}</td><td>${escape(c.amount)} ${escape(c.unit)}${
           c.perAmount !== null && c.perAmount !== undefined
             ? ` per ${escape(c.perAmount)} ${escape(c.perUnit)}`
             : ""
@@ -130,11 +147,11 @@ function solutionBlock(block: SolutionBlockInput, ctx: Context): string {
   const ions = r.ions
     .map(
       (ion) =>
-        `<tr><td>${escape(ion.formula)}</td><td>${formatSignificant(ion.molality)}</td><td>${formatSignificant(ion.gamma)}</td><td>${formatSignificant(ion.activity)}</td></tr>`,
+        `<tr><td>${formulaHtml(ion.formula)}</td><td>${formatSignificant(ion.molality)}</td><td>${formatSignificant(ion.gamma)}</td><td>${formatSignificant(ion.activity)}</td></tr>`,
     )
     .join("");
   const salts = r.salts
-    .map((s) => `<li>γ±(${escape(s.formula)}) = ${formatSignificant(s.meanGamma)}</li>`)
+    .map((s) => `<li>γ±(${formulaHtml(s.formula)}) = ${formatSignificant(s.meanGamma)}</li>`)
     .join("");
   const messages = [...r.validity.messages, ...r.warnings]
     .map((m) => `<li>${escape(m)}</li>`)
@@ -199,7 +216,9 @@ const STYLE = `
   .block-title { font-weight: 600; margin: 0 0 2pt; }
   table { border-collapse: collapse; margin: 4pt 0; }
   table.kv td, table.kv th, table.doc td, table.doc th { border: 1px solid #dde2e7; padding: 2pt 5pt; font-size: 9pt; text-align: left; }
-  .math { margin: 4pt 0; overflow-wrap: anywhere; }
+  .math { margin: 4pt 0; }
+  /* MathML does not break lines: long equations (Pitzer's) are set smaller to fit the page. */
+  .block .math math { font-size: 78%; }
   .href { color: #52606d; font-size: 8.5pt; }
   .manifest { break-before: page; }
   .manifest li { margin-bottom: 8pt; }

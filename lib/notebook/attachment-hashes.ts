@@ -1,23 +1,20 @@
 import "server-only";
-import { and, eq } from "drizzle-orm";
 import type { Executor } from "@/db/client";
-import { attachments } from "@/db/schema";
+import { findEntryAttachments } from "@/db/queries/attachments";
+import { extractAttachmentIds } from "@/lib/document/extract-blocks";
 import type { SignedAttachment } from "@/lib/document/signed-content";
 
 /**
- * The attachments a signature of this revision covers: the entry's files, by SHA-256 and
- * original name. Their hashes are part of the signed content, so a file changed or swapped on
- * disk after signing makes the signature fail verification.
+ * The attachments a revision includes: the files its document refers to (photo figures, file
+ * links, trace blocks), by SHA-256 and original name. Their hashes are part of the signed
+ * content, so a file changed or swapped on disk after signing fails verification.
  */
 export async function revisionAttachmentsForSignature(
   db: Executor,
   labId: string,
   entryId: string,
-  _revisionNumber: number,
+  content: unknown,
 ): Promise<SignedAttachment[]> {
-  const rows = await db
-    .select({ sha256: attachments.sha256, name: attachments.originalName })
-    .from(attachments)
-    .where(and(eq(attachments.labId, labId), eq(attachments.entryId, entryId)));
-  return rows;
+  const rows = await findEntryAttachments(db, labId, entryId, extractAttachmentIds(content));
+  return rows.map((r) => ({ sha256: r.sha256, name: r.originalName }));
 }

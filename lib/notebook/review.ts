@@ -131,7 +131,7 @@ export async function countersignEntry(
           tx,
           actor.labId,
           entry.id,
-          revision.number,
+          revision.content,
         ),
       });
       const signature = await insertSignature(tx, {

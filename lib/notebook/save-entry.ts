@@ -2,6 +2,7 @@ import "server-only";
 import type { SaveResult } from "@/lib/contract/entries";
 import { loadEntryFor } from "./entry-access";
 import { insertAuditEvent } from "@/db/queries/audit";
+import { findEntryAttachments } from "@/db/queries/attachments";
 import { findRevision } from "@/db/queries/entries";
 import { assertCan, type Actor } from "@/lib/rules/authorize";
 import { prepareRevision } from "@/lib/document/prepare-revision";
@@ -45,6 +46,14 @@ export async function saveEntryContent(
           solutionRowsWritten: 0,
         };
       }
+    }
+    // A document may show only files attached to this entry (never another entry's or lab's).
+    const attached = await findEntryAttachments(tx, actor.labId, entry.id, prepared.attachmentIds);
+    if (attached.length !== prepared.attachmentIds.length) {
+      throw new AppError(
+        "invalid_input",
+        "The document refers to a file that is not attached to this entry; the previous revision is unchanged.",
+      );
     }
     const number = entry.currentRevisionNumber + 1;
     // While an amendment is in progress, every revision is marked as part of it.

@@ -49,7 +49,12 @@ export async function verifyRevision(
   const { revision } = found;
   const recomputedHash = revisionHash(revision.title, revision.content);
 
-  const attachments = await revisionAttachmentsForSignature(db, actor.labId, entry.id, number);
+  const attachments = await revisionAttachmentsForSignature(
+    db,
+    actor.labId,
+    entry.id,
+    revision.content,
+  );
   const signedNow = signedContentHash({
     title: revision.title,
     content: revision.content,

@@ -58,14 +58,16 @@ pg_run() {
 # pick_pg_data_dir PREFERRED FALLBACK_NAME: a data folder the server user can write.
 pick_pg_data_dir() {
   local preferred="$1" fallback="/var/tmp/$2"
-  mkdir -p "$preferred"
   if is_root; then
-    chown postgres:postgres "$preferred" 2>/dev/null
+    mkdir -p "$preferred" 2>/dev/null && chown postgres:postgres "$preferred" 2>/dev/null
     if runuser -u postgres -- test -w "$preferred" 2>/dev/null; then echo "$preferred"; return 0; fi
     mkdir -p "$fallback" && chown postgres:postgres "$fallback" && chmod 700 "$fallback"
     echo "$fallback"
-  else
+  elif mkdir -p "$preferred" 2>/dev/null && [ -w "$preferred" ]; then
     echo "$preferred"
+  else
+    mkdir -p "$fallback" && chmod 700 "$fallback"
+    echo "$fallback"
   fi
 }
 
@@ -141,4 +143,6 @@ start_mail_catcher() {
   node_modules/.bin/tsx scripts/mail-catcher.ts --smtp-port "$1" --http-port "$2" ${4:+--store "$4"} >"$3" 2>&1 &
   CATCHER_PID=$!
   wait_for_http "http://127.0.0.1:$2/health" 30 || die "the mail catcher did not start (log: $3)"
+  # The answer must come from the catcher just started, not from another one on that port.
+  kill -0 "$CATCHER_PID" 2>/dev/null || die "the mail catcher exited at start (log: $3)"
 }

@@ -10,7 +10,7 @@ import { getDb } from "@/lib/server/database";
 
 /** What lib/demo/content.ts writes for each lab: entries, and solution block rows over all revisions. */
 const EXPECTED: Record<string, { entries: number; solutions: number }> = {
-  "saltmarsh-interfaces": { entries: 4, solutions: 4 },
+  "saltmarsh-interfaces": { entries: 4, solutions: 5 },
   "ridgeback-cells": { entries: 1, solutions: 1 },
 };
 
@@ -39,6 +39,24 @@ describe("demo scenario seed", () => {
         .from(blockResults)
         .where(eq(blockResults.labId, row.id));
       expect(labSolutions).toHaveLength(EXPECTED[lab.slug].solutions);
+      if (lab.slug === "saltmarsh-interfaces") {
+        // The review states a new user should see: signed, returned, an amendment under
+        // review, and a draft.
+        const byTitle = Object.fromEntries(labEntries.map((e) => [e.title, e]));
+        expect(byTitle["Mixed chloride–sulfate electrolyte at I = 0.3 mol/kg"]).toMatchObject({
+          status: "countersigned",
+          signedRevisionNumber: 1,
+        });
+        expect(byTitle["Cu disc in 0.1 m NaCl with 1 mM CuCl₂ — polarisation run 1"].status).toBe(
+          "returned",
+        );
+        expect(byTitle["KCl stock for the reference compartment"]).toMatchObject({
+          status: "submitted",
+          signedRevisionNumber: 1,
+          currentRevisionNumber: 2,
+        });
+        expect(byTitle["Hexacyanoferrate couple on glassy carbon, 5 mM"].status).toBe("draft");
+      }
     }
   });
 });

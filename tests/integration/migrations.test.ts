@@ -61,6 +61,7 @@ describe("migrations on an empty database", () => {
       ),
     );
     expect(triggers.rows.map((r) => r.tgname)).toEqual([
+      "attachments_immutable",
       "audit_events_append_only",
       "block_results_guard",
       "entries_guard",

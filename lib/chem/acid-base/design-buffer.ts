@@ -18,6 +18,9 @@ import { requireReagent } from "./reagent-lookup";
 import { equilibrate, solventKgPerLitre } from "./speciate";
 import type { DesignBufferInput, DesignBufferResult, RecipeComponent } from "./types";
 
+/** Largest gap between the requested pH and the recipe's own computed pH. */
+const RECIPE_PH_TOLERANCE = 0.02;
+
 function bufferReagent(formula: string, system: AcidSystemData, field: string): BufferReagent {
   const found = requireReagent(formula, field);
   if (found.kind !== "buffer" || !found.reagent.contributes.some((c) => c.system === system.id)) {
@@ -270,6 +273,13 @@ export function designBuffer(input: DesignBufferInput): DesignBufferResult {
       field: "pH",
       code: "model_failed",
     });
+  }
+  // The recipe's own computed pH must be the one asked for: otherwise it is not a recipe.
+  if (Math.abs(check.pH - input.pH) > RECIPE_PH_TOLERANCE) {
+    throw new ChemInputError(
+      `The recipe would give pH ${check.pH.toFixed(3)}, not ${input.pH}: this buffer cannot be made at this pH and concentration with these forms.`,
+      { field: "pH", code: "unreachable_ph" },
+    );
   }
   const warnings = [...check.warnings];
   if (Math.abs(input.pH - pKa[step]) > 1) {

@@ -5,6 +5,7 @@
  * Charge balance Σ z m = 0 fixes pH (bisection: the balance falls monotonically with pH);
  * γ depend on I, which depends on the speciation, so the two are iterated to self-consistency.
  */
+import { ChemInputError } from "../errors";
 import { type AcidSystemData } from "./data/pka-goldberg-2002";
 
 export interface SystemAtT {
@@ -83,6 +84,8 @@ function speciesAt(
 
 const PH_LOW = -2;
 const PH_HIGH = 16;
+/** A root this close to a search bound is not a root: the bound was hit. */
+const BOUND_MARGIN = 1e-6;
 
 /** The pH at which the solution is electrically neutral, for fixed γ. */
 function neutralPH(
@@ -103,7 +106,14 @@ function neutralPH(
     if (balance(mid) > 0) lo = mid;
     else hi = mid;
   }
-  return (lo + hi) / 2;
+  const pH = (lo + hi) / 2;
+  if (!Number.isFinite(pH) || pH - PH_LOW < BOUND_MARGIN || PH_HIGH - pH < BOUND_MARGIN) {
+    throw new ChemInputError(
+      `No pH between ${PH_LOW} and ${PH_HIGH} balances the charges of this composition; check the amounts (an excess of strong acid or base beyond that range is not an aqueous buffer).`,
+      { field: "components", code: "no_solution" },
+    );
+  }
+  return pH;
 }
 
 /** pH and speciation, iterated with I to self-consistency. */
@@ -124,11 +134,8 @@ export function solveEquilibrium(
       return { pH, ionicStrengthMolal: nextI, species, iterations: it };
     I = nextI;
   }
-  const g = gammaAt(I);
-  return {
-    pH,
-    ionicStrengthMolal: I,
-    species: speciesAt(systems, fixedIons, pH, pKw, g),
-    iterations: 100,
-  };
+  throw new ChemInputError(
+    "The speciation did not converge (pH and ionic strength did not settle in 100 iterations) for this composition.",
+    { field: "components", code: "model_failed" },
+  );
 }

@@ -24,17 +24,26 @@ const key = (text: string) => normalizeFormulaText(text).replace(/\s+/g, "");
 export type ResolvedReagent =
   { kind: "buffer"; reagent: BufferReagent } | { kind: "strong"; reagent: StrongElectrolyte };
 
+/** Every reagent by formula key and by lower-case name, built once (buffer reagents win). */
+const BY_KEY = new Map<string, ResolvedReagent>();
+for (const reagent of STRONG_ELECTROLYTES) {
+  BY_KEY.set(key(reagent.formula), { kind: "strong", reagent });
+  BY_KEY.set(`name:${reagent.name.toLowerCase()}`, { kind: "strong", reagent });
+}
+for (const reagent of BUFFER_REAGENTS) {
+  BY_KEY.set(key(reagent.formula), { kind: "buffer", reagent });
+  BY_KEY.set(`name:${reagent.name.toLowerCase()}`, { kind: "buffer", reagent });
+}
+
 function findReagent(text: string): ResolvedReagent | undefined {
-  const wanted = key(ALIASES[text.trim().toLowerCase()] ?? text);
-  const buffer = BUFFER_REAGENTS.find(
-    (r) => key(r.formula) === wanted || r.name.toLowerCase() === text.trim().toLowerCase(),
-  );
-  if (buffer) return { kind: "buffer", reagent: buffer };
-  const strong = STRONG_ELECTROLYTES.find(
-    (r) => key(r.formula) === wanted || r.name.toLowerCase() === text.trim().toLowerCase(),
-  );
-  if (strong) return { kind: "strong", reagent: strong };
-  return undefined;
+  if (typeof text !== "string" || text.length > 200) return undefined;
+  const lower = text.trim().toLowerCase();
+  const byName = BY_KEY.get(`name:${lower}`);
+  const byFormula = BY_KEY.get(key(ALIASES[lower] ?? text));
+  // A formula match wins over a name match, buffer reagents over strong electrolytes (as before).
+  if (byFormula?.kind === "buffer") return byFormula;
+  if (byName?.kind === "buffer") return byName;
+  return byFormula ?? byName;
 }
 
 export function requireReagent(text: string, field: string): ResolvedReagent {

@@ -133,5 +133,8 @@ export function solveAmounts(
       return { amountsMolal: x, saltMolal, ionicStrengthMolal: nextI };
     I = nextI;
   }
-  return { amountsMolal: x, saltMolal, ionicStrengthMolal: I };
+  throw new ChemInputError(
+    "The recipe did not converge (the ionic strength did not settle in 200 iterations); try a lower concentration.",
+    { field: "totalConcentrationMolar", code: "model_failed" },
+  );
 }

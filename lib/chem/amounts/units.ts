@@ -54,6 +54,8 @@ const FRACTIONS: Record<string, number> = {
 };
 
 const cache = new Map<string, UnitInfo | null>();
+/** Longest unit text parsed ("mmol per kg of water" is 20); longer is refused. */
+const MAX_UNIT_LENGTH = 40;
 
 function normalize(text: string): string {
   let u = text
@@ -93,8 +95,12 @@ export function readUnit(text: unknown, field: string): UnitInfo {
   }
   let info = cache.get(text);
   if (info === undefined) {
-    info = classify(text);
-    cache.set(text, info);
+    // No unit is longer than a few characters; a long text is not parsed (and not cached).
+    info = text.length > MAX_UNIT_LENGTH ? null : classify(text);
+    if (text.length <= MAX_UNIT_LENGTH) {
+      if (cache.size > 500) cache.clear();
+      cache.set(text, info);
+    }
   }
   if (!info) {
     throw new ChemInputError(

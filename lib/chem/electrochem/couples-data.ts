@@ -173,21 +173,14 @@ export const COUPLES: readonly CoupleData[] = [
 ];
 
 /**
- * E° of AgCl/Ag against temperature, Bates & Bower (1954), J. Res. Natl. Bur. Stand. 53,
- * 283–290 (recalled; tests/fixtures/reference/electrode-potentials.csv).
+ * E° of AgCl/Ag (V vs SHE) against temperature, the smoothing equation of Bates & Bower (1954)
+ * J. Res. Natl. Bur. Stand. 53, 283–290, stated for 0–95 °C (coefficients from memory,
+ * tests/fixtures/reference/correlations.md §5; it reproduces their 0–60 °C table within
+ * 0.1 mV, electrode-potentials.csv):
+ *   E° = 0.23659 − 4.8564e-4 t − 3.4205e-6 t² + 5.869e-9 t³   (t in °C)
+ * One continuous function over the whole range (no table edge to jump at).
  */
-export const AGCL_STANDARD_POTENTIAL_BY_TEMPERATURE: readonly [number, number][] = [
-  [0, 0.23655],
-  [5, 0.23413],
-  [10, 0.23142],
-  [15, 0.22857],
-  [20, 0.22557],
-  [25, 0.22234],
-  [30, 0.21904],
-  [35, 0.21565],
-  [40, 0.21208],
-  [45, 0.20835],
-  [50, 0.20449],
-  [55, 0.20056],
-  [60, 0.19649],
-];
+export const AGCL_BATES_BOWER_1954 = {
+  coefficients: [0.23659, -4.8564e-4, -3.4205e-6, 5.869e-9] as const,
+  rangeC: { min: 0, max: 95 },
+};

@@ -21,6 +21,7 @@
  */
 import { FARADAY_C_PER_MOL, GAS_CONSTANT_J_PER_MOL_K, kelvin } from "../constants";
 import { ChemInputError } from "../errors";
+import { finiteResult } from "../finite-result";
 import type { IonConcentration } from "./electrolyte-conductivity";
 import { ionCharge, limitingIonicConductivity } from "./ionic-conductivity";
 
@@ -148,5 +149,9 @@ export function junctionCorrectedPotential(
         field,
         code: "bad_potential",
       });
-  return measuredPotentialV - junctionPotentialV;
+  return finiteResult(
+    measuredPotentialV - junctionPotentialV,
+    "measuredPotentialV",
+    "The corrected potential",
+  );
 }

@@ -9,6 +9,7 @@
  */
 import { FARADAY_C_PER_MOL, GAS_CONSTANT_J_PER_MOL_K, kelvin } from "../constants";
 import { ChemInputError } from "../errors";
+import { finiteResult } from "../finite-result";
 import { diffusionCoefficient, findRedoxProbe } from "./redox-probes";
 
 export interface RandlesSevcikInput {
@@ -50,20 +51,26 @@ export function randlesSevcikPeakCurrent(input: RandlesSevcikInput): number {
     ) * 1e-4;
   const v = positive(input.scanRateVPerS, "scanRateVPerS", "The scan rate");
   const t = temperatureK(input.temperatureC);
-  return (
+  return finiteResult(
     0.4463 *
-    n *
-    FARADAY_C_PER_MOL *
-    area *
-    c *
-    Math.sqrt((n * FARADAY_C_PER_MOL * v * d) / (GAS_CONSTANT_J_PER_MOL_K * t))
+      n *
+      FARADAY_C_PER_MOL *
+      area *
+      c *
+      Math.sqrt((n * FARADAY_C_PER_MOL * v * d) / (GAS_CONSTANT_J_PER_MOL_K * t)),
+    "electrodeAreaCm2",
+    "The peak current",
   );
 }
 
 /** 2.218 RT/nF in volts: the reversible ΔEp for a distant switching potential. */
 export function reversiblePeakSeparationV(electrons = 1, temperatureC = 25): number {
   const n = positive(electrons, "electrons", "The number of electrons");
-  return (2.218 * GAS_CONSTANT_J_PER_MOL_K * temperatureK(temperatureC)) / (n * FARADAY_C_PER_MOL);
+  return finiteResult(
+    (2.218 * GAS_CONSTANT_J_PER_MOL_K * temperatureK(temperatureC)) / (n * FARADAY_C_PER_MOL),
+    "electrons",
+    "The peak separation",
+  );
 }
 
 export interface ExpectedPeakInput {

@@ -133,11 +133,14 @@ export function referencePotentialVsShe(
     );
   }
   if (ref.id === "RHE") {
-    if (options.pH === undefined || !Number.isFinite(options.pH)) {
-      throw new ChemInputError("Converting to or from RHE needs the pH of the solution.", {
-        field: "pH",
-        code: "missing_ph",
-      });
+    if (options.pH === undefined || !(options.pH >= -2 && options.pH <= 16)) {
+      throw new ChemInputError(
+        "Converting to or from RHE needs the pH of the solution (a number from −2 to 16).",
+        {
+          field: "pH",
+          code: "missing_ph",
+        },
+      );
     }
     return -nernstSlopeV(t, 1) * options.pH;
   }

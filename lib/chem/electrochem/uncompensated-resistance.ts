@@ -8,6 +8,7 @@
  * The ohmic drop at a current i is i R_u (Ohm's law).
  */
 import { ChemInputError } from "../errors";
+import { finiteResult } from "../finite-result";
 
 function positive(value: number, field: string, what: string): void {
   if (typeof value !== "number" || !Number.isFinite(value) || value <= 0)
@@ -20,7 +21,11 @@ export function uncompensatedResistanceDisk(input: {
 }): number {
   positive(input.radiusM, "radiusM", "The disk radius");
   positive(input.conductivitySPerM, "conductivitySPerM", "The electrolyte conductivity");
-  return 1 / (4 * input.conductivitySPerM * input.radiusM);
+  return finiteResult(
+    1 / (4 * input.conductivitySPerM * input.radiusM),
+    "conductivitySPerM",
+    "The uncompensated resistance",
+  );
 }
 
 /** Ohmic (iR) drop in volts, with the sign of the current. */
@@ -39,5 +44,5 @@ export function iRDrop(input: { currentA: number; resistanceOhm: number }): numb
       field: "resistanceOhm",
       code: "bad_value",
     });
-  return input.currentA * input.resistanceOhm;
+  return finiteResult(input.currentA * input.resistanceOhm, "currentA", "The iR drop");
 }

@@ -6,6 +6,11 @@ export type Composition = Record<string, number>;
 
 const CLOSE_FOR: Record<string, string> = { "(": ")", "[": "]", "{": "}" };
 
+/** Deepest bracket nesting accepted ("K3[Fe(CN)6]" has 2); deeper is a typing error, not chemistry. */
+const MAX_FORMULA_NESTING = 8;
+/** Largest subscript accepted (4 digits: polymers are entered by their repeat unit). */
+const MAX_SUBSCRIPT = 9999;
+
 function fail(message: string): never {
   throw new ChemInputError(message, { field: "formula", code: "bad_formula" });
 }
@@ -18,16 +23,23 @@ export function parseComposition(core: string, whole: string): Composition {
   const counts: Composition = {};
   let i = 0;
 
+  // One left-to-right pass: every character is read once (linear in the length).
   const readCount = (): number => {
-    const m = /^\d+/.exec(core.slice(i));
-    if (!m) return 1;
-    i += m[0].length;
-    const n = Number(m[0]);
+    let n = 0;
+    let digits = 0;
+    while (i < core.length && core[i] >= "0" && core[i] <= "9") {
+      n = n * 10 + (core.charCodeAt(i) - 48);
+      i++;
+      if (++digits > 4) fail(`A subscript in "${whole}" is larger than ${MAX_SUBSCRIPT}.`);
+    }
+    if (digits === 0) return 1;
     if (n === 0) fail(`A subscript of 0 in "${whole}" makes no sense.`);
     return n;
   };
 
-  const parseGroup = (closer: string | null): Composition => {
+  const parseGroup = (closer: string | null, depth: number): Composition => {
+    if (depth > MAX_FORMULA_NESTING)
+      fail(`"${whole.slice(0, 40)}…" nests brackets more than ${MAX_FORMULA_NESTING} deep.`);
     const group: Composition = {};
     let sawSomething = false;
     while (i < core.length) {
@@ -38,7 +50,7 @@ export function parseComposition(core: string, whole: string): Composition {
       }
       if (CLOSE_FOR[ch]) {
         i++;
-        const inner = parseGroup(CLOSE_FOR[ch]);
+        const inner = parseGroup(CLOSE_FOR[ch], depth + 1);
         const n = readCount();
         for (const [el, c] of Object.entries(inner)) group[el] = (group[el] ?? 0) + c * n;
         sawSomething = true;
@@ -50,7 +62,7 @@ export function parseComposition(core: string, whole: string): Composition {
         i++;
         return group;
       }
-      if (/[A-Z]/.test(ch)) {
+      if (ch >= "A" && ch <= "Z") {
         const two = core.slice(i, i + 2);
         const symbol = /^[A-Z][a-z]$/.test(two) && ELEMENTS.has(two) ? two : ch;
         if (!ELEMENTS.has(symbol)) {
@@ -63,7 +75,7 @@ export function parseComposition(core: string, whole: string): Composition {
         sawSomething = true;
         continue;
       }
-      if (/[a-z]/.test(ch)) {
+      if (ch >= "a" && ch <= "z") {
         fail(
           `"${ch}" in "${whole}" is not an element symbol (symbols start with a capital letter).`,
         );
@@ -75,7 +87,7 @@ export function parseComposition(core: string, whole: string): Composition {
     return group;
   };
 
-  Object.assign(counts, parseGroup(null));
+  Object.assign(counts, parseGroup(null, 0));
   return counts;
 }
 

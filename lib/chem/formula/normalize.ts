@@ -32,6 +32,24 @@ export function normalizeFormulaText(text: string): string {
     }
   }
   flushSuperscript();
-  // "." separates a hydrate ("CuSO4.5H2O"); the parser does not accept decimal subscripts.
-  return out.replace(/\.(?=\s*\d*\s*[A-Z([])/g, HYDRATE_DOT);
+  // "." separates a hydrate ("CuSO4.5H2O") when spaces, digits, spaces and then an element or a
+  // bracket follow; the parser does not accept decimal subscripts. Each look-ahead stops at the
+  // next dot, so the scan stays linear in the length.
+  let result = "";
+  for (let i = 0; i < out.length; i++) {
+    if (out[i] !== ".") {
+      result += out[i];
+      continue;
+    }
+    let j = i + 1;
+    while (j < out.length && (out[j] === " " || out[j] === "\t")) j++;
+    while (j < out.length && out[j] >= "0" && out[j] <= "9") j++;
+    while (j < out.length && (out[j] === " " || out[j] === "\t")) j++;
+    const next = out[j];
+    result +=
+      next !== undefined && ((next >= "A" && next <= "Z") || next === "(" || next === "[")
+        ? HYDRATE_DOT
+        : ".";
+  }
+  return result;
 }

@@ -27,20 +27,26 @@ export interface ParseOptions {
   isKnownIonKey?: (key: string) => boolean;
 }
 
+/** Longest formula accepted: the longest catalogue entry is 22 characters; beyond this is no formula. */
+const MAX_FORMULA_LENGTH = 200;
+/** Largest ionic charge accepted (±12 covers the polyoxometalates). */
+const MAX_ION_CHARGE = 12;
+
 function fail(message: string): never {
   throw new ChemInputError(message, { field: "formula", code: "bad_formula" });
 }
 
 /** Drops one pair of brackets around a whole charged complex: "[Fe(CN)6]" → "Fe(CN)6". */
 function unwrap(core: string): string {
-  const m = /^\[(.*)\]$/.exec(core.trim());
-  if (!m) return core.trim();
+  const t = core.trim();
+  if (t.length < 2 || t[0] !== "[" || t[t.length - 1] !== "]") return t;
+  const inner = t.slice(1, -1);
   let depth = 0;
-  for (const ch of m[1]) {
+  for (const ch of inner) {
     if (ch === "[") depth++;
-    if (ch === "]" && --depth < 0) return core.trim();
+    if (ch === "]" && --depth < 0) return t;
   }
-  return m[1];
+  return inner;
 }
 
 function chooseReading(
@@ -74,26 +80,36 @@ function chooseReading(
  */
 export function parseFormulaWith(text: string, options: ParseOptions = {}): ParsedFormula {
   if (typeof text !== "string" || text.trim() === "") fail("The formula is empty.");
+  if (text.length > MAX_FORMULA_LENGTH)
+    fail(
+      `A formula of ${text.length} characters is longer than ${MAX_FORMULA_LENGTH}: check what was pasted.`,
+    );
   const input = text;
   const normalized = normalizeFormulaText(text);
   const [main, ...adducts] = normalized.split(HYDRATE_DOT);
   if (main.trim() === "") fail(`"${input}" has nothing before the hydrate dot.`);
 
   const reading = chooseReading(readCharge(main), options, input);
+  if (Math.abs(reading.charge) > MAX_ION_CHARGE)
+    fail(`A charge of ${reading.charge} in "${input}" is beyond ±${MAX_ION_CHARGE}.`);
   const core = unwrap(reading.core);
   const anhydrousElements = parseComposition(core, input);
   const elements = addComposition({}, anhydrousElements);
   let hydrateWater = 0;
   const adductTexts: string[] = [];
   for (const part of adducts) {
-    const m = /^\s*(\d*)\s*(.*?)\s*$/.exec(part)!;
-    const times = m[1] ? Number(m[1]) : 1;
-    if (!m[2]) fail(`Nothing follows the hydrate dot in "${input}".`);
+    const trimmed = part.trim();
+    let k = 0;
+    while (k < trimmed.length && trimmed[k] >= "0" && trimmed[k] <= "9") k++;
+    if (k > 4) fail(`A hydrate coefficient in "${input}" is larger than 9999.`);
+    const times = k > 0 ? Number(trimmed.slice(0, k)) : 1;
+    const body = trimmed.slice(k).trim();
+    if (!body) fail(`Nothing follows the hydrate dot in "${input}".`);
     if (times === 0) fail(`A coefficient of 0 in "${input}" makes no sense.`);
-    const adduct = parseComposition(m[2], input);
+    const adduct = parseComposition(body, input);
     addComposition(elements, adduct, times);
     if (compositionKey(adduct, 0) === "H2O|0") hydrateWater += times;
-    adductTexts.push((times === 1 ? "" : String(times)) + m[2]);
+    adductTexts.push((times === 1 ? "" : String(times)) + body);
   }
   const anhydrousFormula = core.replace(/\s+/g, "") + chargeSuffix(reading.charge);
   const formula = [core.replace(/\s+/g, "") + chargeSuffix(reading.charge), ...adductTexts].join(

@@ -1,118 +1,138 @@
 /**
- * `model: "auto"`: the most accurate model that covers the composition. Candidates are
- * tried in order of accuracy; the first whose `covers` accepts wins and its reason is shown.
- * Part 2 puts Pitzer and SIT at the head of AUTO_CANDIDATES (their coverage checks say
- * whether every ion pair is parameterised at this I and T).
+ * `model: "auto"`: the most accurate model whose range (temperature, ionic strength, charge
+ * type; models/range.ts) contains the solution. Candidates are tried in order of accuracy; a
+ * candidate is *applicable* when it has every parameter the composition needs, and *inside*
+ * when the composition is within its stated range. The first applicable candidate inside its
+ * range wins. When a more accurate candidate was applicable but outside its range, the choice
+ * says that the model changed and why (results on either side of such a boundary differ).
+ * When no candidate is inside, the least poor extrapolation is taken (ion-interaction models
+ * before ion-size models: Pitzer just beyond its fitted molality stays within a few per cent
+ * where the Debye–Hückel family is off by tens of per cent) and the choice says so.
+ * A composition whose charges do not balance is never handed to an ion-interaction model.
  */
-import { limitingLawSqrtIMax } from "./dh-limiting";
-import { chargeProductMagnitude } from "./dh-common";
-import { bDotIonSize, kiellandIonSize, truesdellJonesParameters } from "./ion-parameters";
-import { truesdellJonesIon } from "./truesdell-jones";
+import { ChemInputError } from "../errors";
 import { PITZER_AUTO_CANDIDATE } from "./pitzer/auto-candidate";
 import { SIT_AUTO_CANDIDATE } from "./sit/auto-candidate";
+import { DH_FAMILY_CANDIDATES } from "./dh-candidates";
 import type { ActivityModelId, ModelIon } from "./types";
+
+export { DH_FAMILY_CANDIDATES };
 
 export interface AutoContext {
   ions: readonly ModelIon[];
   ionicStrengthMolal: number;
   temperatureC: number;
   solvent: string;
+  /** False when the ions' charges do not balance (default true). */
+  chargeBalanced?: boolean;
+}
+
+interface CandidateAssessment {
+  /** Every parameter the composition needs exists (whatever the range). */
+  applicable: boolean;
+  /** Why the composition is outside the stated range; empty when inside. */
+  outside: string[];
+  /** Why this model fits, in a chemist's words (shown when it is chosen). */
+  reason: string;
 }
 
 export interface AutoCandidate {
   id: ActivityModelId;
-  /** A reason in a chemist's words when this model covers the composition, else null. */
-  covers(context: AutoContext): string | null;
+  label: string;
+  assess(context: AutoContext): CandidateAssessment;
 }
 
-const present = (c: AutoContext) => c.ions.filter((i) => i.molality > 0 && i.charge !== 0);
-const isWater = (c: AutoContext) => c.solvent === "water";
-const sqrtILimit = (c: AutoContext) => limitingLawSqrtIMax(chargeProductMagnitude(c.ions));
-
-export const DH_FAMILY_CANDIDATES: readonly AutoCandidate[] = [
-  {
-    id: "truesdell-jones",
-    covers: (c) =>
-      isWater(c) &&
-      c.ionicStrengthMolal <= 2 &&
-      present(c).every(
-        (i) => truesdellJonesIon(i.formula, i.charge, c.temperatureC).source === "WATEQ4F",
-      )
-        ? "every ion has a fitted Truesdell–Jones b (WATEQ4F) and I ≤ 2 mol/kg"
-        : null,
-  },
-  {
-    id: "dh-extended",
-    covers: (c) =>
-      isWater(c) &&
-      c.ionicStrengthMolal <= 0.1 &&
-      present(c).every((i) => kiellandIonSize(i.formula) !== undefined)
-        ? "I ≤ 0.1 mol/kg and every ion has a Kielland ion size"
-        : null,
-  },
-  {
-    id: "truesdell-jones",
-    covers: (c) =>
-      isWater(c) &&
-      c.ionicStrengthMolal <= 0.5 &&
-      present(c).every(
-        (i) =>
-          truesdellJonesParameters(i.formula) ||
-          bDotIonSize(i.formula) !== undefined ||
-          kiellandIonSize(i.formula) !== undefined,
-      )
-        ? "I ≤ 0.5 mol/kg and every ion has a tabulated size (b-dot form for ions without a fitted b)"
-        : null,
-  },
-  {
-    id: "dh-limiting",
-    covers: (c) =>
-      !isWater(c) && Math.sqrt(c.ionicStrengthMolal) <= sqrtILimit(c)
-        ? `dilute solution in ${c.solvent}: the limiting law needs only εr and ρ of the solvent`
-        : null,
-  },
-  {
-    id: "dh-extended",
-    covers: (c) =>
-      !isWater(c) && c.ionicStrengthMolal <= 0.1
-        ? `I ≤ 0.1 mol/kg in ${c.solvent}; ion sizes are water values`
-        : null,
-  },
-  {
-    id: "davies",
-    covers: (c) =>
-      c.ionicStrengthMolal <= 0.5
-        ? "I ≤ 0.5 mol/kg and some ions have no tabulated size: Davies needs none"
-        : null,
-  },
-];
-
-/** Part 2: insert the Pitzer and SIT candidates before the Debye–Hückel family. */
-export const AUTO_CANDIDATES: AutoCandidate[] = [
+export const AUTO_CANDIDATES: readonly AutoCandidate[] = [
   PITZER_AUTO_CANDIDATE,
   SIT_AUTO_CANDIDATE,
   ...DH_FAMILY_CANDIDATES,
 ];
 
+/** Order for the least poor extrapolation when no candidate is inside its range. */
+const FALLBACK_ORDER: readonly ActivityModelId[] = [
+  "pitzer",
+  "sit",
+  "truesdell-jones",
+  "davies",
+  "dh-extended",
+  "guntelberg",
+  "dh-limiting",
+];
+
 export interface AutoChoice {
   id: ActivityModelId;
   reason: string;
-  /** False when no candidate covers the composition and a fallback was taken. */
+  /** False when no candidate covers the composition and an extrapolation was taken. */
   covered: boolean;
+  /**
+   * Set when a more accurate model applies to the composition but is outside its range:
+   * the model changed at a boundary of temperature or ionic strength, said in words.
+   */
+  change?: string;
+}
+
+/** The context comes from computeSolution, but the function is public: bad input is a typed error. */
+function checkContext(c: AutoContext): void {
+  const bad = (field: string, message: string) =>
+    new ChemInputError(message, { field, code: "invalid_input" });
+  const ions: unknown = c?.ions;
+  if (!Array.isArray(ions)) throw bad("ions", "The ions must be a list.");
+  (ions as readonly (Partial<ModelIon> | null | undefined)[]).forEach((ion, i) => {
+    if (!ion || typeof ion.formula !== "string")
+      throw bad(`ions[${i}].formula`, "Each ion needs a formula.");
+    const { charge, molality } = ion;
+    if (!(typeof charge === "number" && Number.isInteger(charge) && Math.abs(charge) <= 12))
+      throw bad(`ions[${i}].charge`, "An ion's charge must be a whole number from −12 to 12.");
+    if (!(typeof molality === "number" && Number.isFinite(molality) && molality >= 0))
+      throw bad(`ions[${i}].molality`, "A molality must be a finite, non-negative number.");
+  });
+  if (!(Number.isFinite(c.ionicStrengthMolal) && c.ionicStrengthMolal >= 0))
+    throw bad("ionicStrengthMolal", "The ionic strength must be a finite, non-negative number.");
+  if (!Number.isFinite(c.temperatureC))
+    throw bad("temperatureC", "The temperature must be a number in °C.");
+  if (typeof c.solvent !== "string") throw bad("solvent", "The solvent must be named.");
 }
 
 export function chooseModel(
   context: AutoContext,
   candidates: readonly AutoCandidate[] = AUTO_CANDIDATES,
 ): AutoChoice {
-  for (const candidate of candidates) {
-    const reason = candidate.covers(context);
-    if (reason) return { id: candidate.id, reason, covered: true };
+  checkContext(context);
+  // Outside water only the limiting law has no water parameters: it goes first there.
+  const ordered =
+    context.solvent === "water"
+      ? candidates
+      : [
+          ...candidates.filter((c) => c.id === "dh-limiting"),
+          ...candidates.filter((c) => c.id !== "dh-limiting"),
+        ];
+  const assessed = ordered.map((c) => ({ c, a: c.assess(context) }));
+  const chosen = assessed.find(({ a }) => a.applicable && a.outside.length === 0);
+  const skipped = assessed.find(
+    ({ c, a }) => a.applicable && a.outside.length > 0 && (!chosen || c !== chosen.c),
+  );
+  if (chosen) {
+    const before = assessed.indexOf(chosen);
+    const changed = skipped && assessed.indexOf(skipped) < before ? skipped : undefined;
+    return {
+      id: chosen.c.id,
+      reason: chosen.a.reason,
+      covered: true,
+      ...(changed
+        ? {
+            change: `${changed.c.label} is not used: ${changed.a.outside[0]} ${chosen.c.label} is used instead, so results on either side of this limit differ.`,
+          }
+        : {}),
+    };
   }
-  const fallback: ActivityModelId = isWater(context) ? "truesdell-jones" : "davies";
+  const applicable = assessed.filter(({ a }) => a.applicable);
+  applicable.sort((x, y) => FALLBACK_ORDER.indexOf(x.c.id) - FALLBACK_ORDER.indexOf(y.c.id));
+  const fallback = applicable[0] ?? assessed[assessed.length - 1];
+  const why = fallback.a.outside[0] ?? "no model has the parameters this composition needs.";
   return {
-    id: fallback,
-    reason: `no available model covers I = ${context.ionicStrengthMolal.toPrecision(3)} mol/kg for this composition; ${fallback} is the least poor extrapolation`,
+    id: fallback.c.id,
+    reason: `no model covers this solution; ${fallback.c.label} is the least poor extrapolation (${why})`,
     covered: false,
+    change: `No model is inside its range here: ${why} ${fallback.c.label} is extrapolated.`,
   };
 }

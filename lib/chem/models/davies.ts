@@ -1,17 +1,17 @@
 /**
  * Davies equation (Davies 1962, Ion Association, Butterworths, p. 41):
  *   log10 γi = −A zi² ( √I / (1 + √I) − c I ),  c = 0.3 (Davies 1962) or 0.2 (Davies 1938)
- * Empirical, fitted to aqueous data. Range: I ≤ 0.5 mol/kg (common practice); against CRC
- * γ± the error is a few per cent at 0.1 mol/kg and grows to about 10 % at 0.5 (see tests).
- * Charge types: fitted to salts of ions up to |z| = 2 (common practice).
+ * Empirical, fitted to aqueous data. Common practice quotes I ≤ 0.5 mol/kg, where the error
+ * against CRC γ± reaches 10 % (1:1) to 60 % (2:1); Ionleaf states the range where it stays
+ * within 2 % (dh-ranges.ts). Charge types: ions up to |z| = 2.
  */
-import type { ActivityModel, ActivityModelInput } from "./types";
+import type { ActivityModel, ActivityModelInput, CommonFormCoefficients } from "./types";
 import { dhFamilyOutput, substitutedCore } from "./dh-common";
+import { DAVIES_RANGE } from "./dh-ranges";
 
 const RANGE = {
-  maxChargeMagnitude: 2,
   label: "Davies",
-  maxIonicStrengthMolal: 0.5,
+  range: DAVIES_RANGE,
   waterParameters: "the empirical linear coefficient",
 };
 
@@ -19,18 +19,25 @@ function coefficient(input: ActivityModelInput): number {
   return input.options?.daviesCoefficient ?? 0.3;
 }
 
+/** −A z² (√I/(1+√I) − c I) is the common form with β = 1 and b = c A z². */
+function daviesForm(input: ActivityModelInput): CommonFormCoefficients {
+  const cA = coefficient(input) * input.constants.aLog10;
+  const b = input.ions.map((ion) => cA * ion.charge * ion.charge);
+  return { beta: new Array<number>(b.length).fill(1), b };
+}
+
 export const daviesModel: ActivityModel = {
   id: "davies",
+  freeIon: true,
   label: RANGE.label,
   formulaTex: String.raw`\log_{10}\gamma_i = -A z_i^2 \left(\frac{\sqrt{I}}{1 + \sqrt{I}} - 0.3\,I\right)`,
   validityNote:
-    "I ≤ 0.5 mol/kg (common practice; errors grow to about 10 % there); empirical, for water. Coefficient 0.3 (Davies 1962) or 0.2.",
-  maxIonicStrengthMolal: RANGE.maxIonicStrengthMolal,
+    "Water, 0–100 °C; I ≤ 0.05 mol/kg for 1:1, 0.03 for 2:1, 0.15 for 1:2 salts (with ion association), where it stays within 2 % of the CRC tables. Coefficient 0.3 (Davies 1962) or 0.2.",
+  range: DAVIES_RANGE,
+  commonForm: daviesForm,
   compute(input: ActivityModelInput) {
-    // −A z² (√I/(1+√I) − c I) is the common form with β = 1 and b = c A z².
-    const cA = coefficient(input) * input.constants.aLog10;
-    const b = input.ions.map((ion) => cA * ion.charge * ion.charge);
-    return dhFamilyOutput(RANGE, input, new Array<number>(b.length).fill(1), b);
+    const { beta, b } = daviesForm(input);
+    return dhFamilyOutput(RANGE, input, beta, b);
   },
   substitutedTex(input) {
     const { A, I, sqrtI } = substitutedCore(input);

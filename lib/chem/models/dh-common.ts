@@ -1,4 +1,5 @@
 /** Pieces shared by the Debye–Hückel family of models. */
+import { rangeViolations, type ModelRange } from "./range";
 import type { ActivityModelInput, ActivityModelOutput, ModelIon } from "./types";
 
 /** Number formatted for a KaTeX formula (4 significant figures, no exponent noise). */
@@ -19,17 +20,6 @@ function formatTexNumber(value: number): string {
   if (abs >= 1e-3 && abs < 1e4) return String(Number(value.toPrecision(4)));
   const [mantissa, exponent] = value.toExponential(3).split("e");
   return `${Number(mantissa)}\\times10^{${Number(exponent)}}`;
-}
-
-export function ionicStrengthMessage(
-  label: string,
-  maxIonicStrengthMolal: number,
-  input: ActivityModelInput,
-): string[] {
-  if (input.ionicStrengthMolal <= maxIonicStrengthMolal) return [];
-  return [
-    `${label} is documented up to I = ${maxIonicStrengthMolal} mol/kg; this solution has I = ${texNumber(input.ionicStrengthMolal)} mol/kg, so its activity coefficients are extrapolated.`,
-  ];
 }
 
 function waterOnlyNote(label: string, what: string, solvent: string): string[] {
@@ -64,26 +54,6 @@ export function substitutedCore(input: ActivityModelInput): {
   };
 }
 
-/**
- * Ions of charge ≥ 2 with counter-ions associate (NaSO4⁻, KSO4⁻, MgSO4⁰): free-ion models
- * without speciation then overestimate stoichiometric γ± (CRC K2SO4 and Na2SO4 data are
- * 5–15 % below the Debye–Hückel family at I = 0.05–0.3 mol/kg; see tests). Above this
- * ionic strength the result says so.
- */
-export const ION_ASSOCIATION_ONSET_MOLAL = 0.05;
-
-function ionAssociationMessage(input: ActivityModelInput): string[] {
-  if (input.ionicStrengthMolal <= ION_ASSOCIATION_ONSET_MOLAL) return [];
-  const multivalentAnions = input.ions
-    .filter((i) => i.charge <= -2 && i.molality > 0)
-    .map((i) => i.formula);
-  if (multivalentAnions.length === 0 || !input.ions.some((i) => i.charge > 0 && i.molality > 0))
-    return [];
-  return [
-    `${multivalentAnions.join(", ")} form ion pairs with cations above I ≈ ${ION_ASSOCIATION_ONSET_MOLAL} mol/kg; without speciation these free-ion activity coefficients overestimate γ±.`,
-  ];
-}
-
 // Gauss–Legendre nodes and weights on [0, 1] (8 points, standard tables), for the dilution integral.
 export const GL_NODES = [
   0.0198550717512319, 0.1016667612931866, 0.2372337950418355, 0.4082826787521751,
@@ -110,6 +80,21 @@ function lnGammaExtendedForm(az2: number, beta: number, b: number, x: number): n
 }
 
 const LN10_LOCAL = Math.LN10;
+
+/** ln γ of every ion from the common form's coefficients at ionic strength I, into `out`. */
+export function commonFormLnGamma(
+  aLog10: number,
+  ions: readonly ModelIon[],
+  form: { beta: ArrayLike<number>; b: ArrayLike<number> },
+  I: number,
+  out: number[],
+): number[] {
+  for (let i = 0; i < ions.length; i++) {
+    const z = ions[i].charge;
+    out[i] = lnGammaExtendedForm(aLog10 * z * z, form.beta[i], form.b[i], I);
+  }
+  return out;
+}
 
 function evaluateExtendedForm(
   input: ActivityModelInput,
@@ -141,47 +126,30 @@ function evaluateExtendedForm(
 }
 
 /**
- * The output every Debye–Hückel-family model returns: the common form evaluated, the
- * ionic-strength range and ion-association checks, and the note for non-water solvents.
+ * The output every Debye–Hückel-family model returns: the common form evaluated, the range
+ * check (temperature, ionic strength, charge type; models/range.ts) and the note for
+ * non-water solvents, whose parameters were fitted for water.
  */
 export function dhFamilyOutput(
-  model: {
-    label: string;
-    maxIonicStrengthMolal: number;
-    waterParameters?: string;
-    maxChargeMagnitude?: number;
-  },
+  model: { label: string; range: ModelRange; waterParameters?: string },
   input: ActivityModelInput,
   beta: ArrayLike<number>,
   b: ArrayLike<number>,
   extra: { validityMessages?: string[]; notes?: string[] } = {},
 ): ActivityModelOutput {
   const { lnGamma, osmoticCoefficient } = evaluateExtendedForm(input, beta, b);
-  const validityMessages = [...(extra.validityMessages ?? [])];
-  if (validityMessages.length === 0)
-    validityMessages.push(...ionicStrengthMessage(model.label, model.maxIonicStrengthMolal, input));
-  validityMessages.push(...chargeTypeMessage(model, input));
-  validityMessages.push(...ionAssociationMessage(input));
+  const validityMessages = extra.validityMessages
+    ? [...extra.validityMessages]
+    : rangeViolations(
+        model.label,
+        model.range,
+        input.ions.filter((i) => !i.pair),
+        input.rangeIonicStrengthMolal ?? input.ionicStrengthMolal,
+        input.temperatureC,
+      );
   // Parameters fitted for water are outside their domain in another solvent: a validity matter.
   if (model.waterParameters)
     validityMessages.push(...waterOnlyNote(model.label, model.waterParameters, input.solvent));
   const notes = [...(extra.notes ?? [])];
   return { lnGamma, osmoticCoefficient, validityMessages, notes };
-}
-
-/** Ions of higher charge than the model was built for (its documented charge types). */
-function chargeTypeMessage(
-  model: { label: string; maxChargeMagnitude?: number },
-  input: ActivityModelInput,
-): string[] {
-  const limit = model.maxChargeMagnitude;
-  if (limit === undefined) return [];
-  const beyond = input.ions
-    .filter((i) => Math.abs(i.charge) > limit && i.molality > 0)
-    .map((i) => i.formula);
-  return beyond.length
-    ? [
-        `${model.label} is documented for ions of charge up to ±${limit}; ${beyond.join(", ")} ${beyond.length > 1 ? "are" : "is"} beyond it.`,
-      ]
-    : [];
 }

@@ -3,6 +3,8 @@
  * to the Debye–Hückel family (part 1) and to Pitzer and SIT (part 2) the same way.
  */
 
+import type { ModelRange } from "./range";
+
 export type ActivityModelId =
   "dh-limiting" | "dh-extended" | "guntelberg" | "davies" | "truesdell-jones" | "pitzer" | "sit";
 
@@ -12,6 +14,8 @@ export interface ModelIon {
   formula: string;
   charge: number;
   molality: number;
+  /** True for an ion pair formed by the speciation (not one of the solution's own ions). */
+  pair?: boolean;
 }
 
 /** Solvent-dependent Debye–Hückel constants at the solution's temperature (molal scale). */
@@ -29,11 +33,19 @@ export interface DebyeHuckelConstants {
 export interface ActivityModelOptions {
   /** Coefficient of the linear term in the Davies equation: 0.3 (Davies 1962) or 0.2 (earlier form). */
   daviesCoefficient?: 0.2 | 0.3;
+  /** Set by computeSolution when ion pairs are speciated: the model need not warn about them. */
+  ionPairsSpeciated?: boolean;
 }
 
 export interface ActivityModelInput {
   ions: ModelIon[];
   ionicStrengthMolal: number;
+  /**
+   * Ionic strength the range check uses, when it differs from the one the equations use: the
+   * stoichiometric I of the solution as entered, while the equations see the true I of free
+   * ions and charged pairs (ion association lowers it). Ranges are stated on the former.
+   */
+  rangeIonicStrengthMolal?: number;
   temperatureC: number;
   solvent: string;
   constants: DebyeHuckelConstants;
@@ -51,7 +63,14 @@ export interface ActivityModelOutput {
   notes: string[];
 }
 
+export interface CommonFormCoefficients {
+  beta: ArrayLike<number>;
+  b: ArrayLike<number>;
+}
+
 export interface ActivityModel {
+  /** Range of validity in temperature, ionic strength and charge type (models/range.ts). */
+  range?: ModelRange;
   id: ActivityModelId;
   label: string;
   /** LaTeX of the equation applied, for the solution block (KaTeX). */
@@ -61,6 +80,15 @@ export interface ActivityModel {
   validityNote?: string;
   /** Upper ionic strength (mol/kg) of the model's documented range (added by part 1). */
   maxIonicStrengthMolal?: number;
+  /** True for free-ion models (the Debye–Hückel family): ion association applies to them. */
+  freeIon?: boolean;
+  /**
+   * The Debye–Hückel family's per-ion coefficients of the common form
+   *   log10 γi = −A zi² √I / (1 + βi √I) + bi I
+   * for these ions at this temperature (they do not depend on the molalities), so that the
+   * ion-association iteration can evaluate γ without building messages each step.
+   */
+  commonForm?(input: ActivityModelInput): CommonFormCoefficients;
   /** The equation with this solution's A, B, I (and options) substituted, for KaTeX (added by part 1). */
   substitutedTex?(input: ActivityModelInput): string;
 }

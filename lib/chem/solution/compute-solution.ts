@@ -1,29 +1,29 @@
 /**
- * computeSolution: species → amounts → ions → ionic strength and screening → activity
- * model → ion and mean-salt activities, osmotic coefficient, validity, warnings, hazards.
+ * computeSolution: species → amounts → ions → ionic strength and screening → activity model
+ * (with ion association for free-ion models) → ion and mean-salt activities, osmotic
+ * coefficient, sanity and range checks, charge balance, warnings, hazards.
  */
-import { solveAmounts } from "../amounts/solve";
+import { amountsWithDensity } from "../density/solution-density";
 import { componentField } from "../component-field";
 import { debyeHuckelConstantsFrom } from "../debye-huckel-constants";
-import { ChemInputError } from "../errors";
 import { chooseModel } from "../models/auto";
 import { getModel } from "../models/registry";
 import type { ActivityModelInput, ModelIon } from "../models/types";
 import { ionByKey } from "../species/ion-index";
 import { resolveSpecies } from "../species/resolve";
 import { solventState } from "../solvents/properties";
+import { chargeBalanceOf } from "./charge-balance";
+import { evaluateModel } from "./evaluate-model";
 import { solutionHazards } from "./hazards";
 import { meanSaltResults } from "./mean-salt";
 import { osmoticCoefficientByGibbsDuhem, waterActivityFromOsmotic } from "./osmotic";
-import {
-  chargeBalance,
-  ionPairingMessage,
-  ionicStrength,
-  kappaPerNm,
-  type IonAmount,
-} from "./screening";
+import { sanityMessages } from "./sanity";
+import { ionPairingMessage, ionicStrength, kappaPerNm } from "./screening";
+import { solutionIons } from "./solution-ions";
+import { speciationResult } from "./speciation-result";
 import type { IonResult, SolutionInput, SolutionResult } from "./types";
 import { validateSolutionInput } from "./validate";
+import { solutionWarnings } from "./warnings";
 
 export function computeSolution(input: SolutionInput): SolutionResult {
   const { temperatureC, solventId, requested, density } = validateSolutionInput(input);
@@ -31,33 +31,18 @@ export function computeSolution(input: SolutionInput): SolutionResult {
   const species = input.components.map((c, i) =>
     resolveSpecies(c.formula, componentField(i, "formula")),
   );
-  const amounts = solveAmounts(input.components, species, density, state.densityGPerMl);
+  const { amounts, density: densityUsed } = amountsWithDensity(
+    input.components,
+    species,
+    density,
+    { id: state.solvent.id, densityGPerMl: state.densityGPerMl },
+    temperatureC,
+  );
   const V = amounts.litresPerKgSolvent;
-
-  // Ions, merged over components, in order of first appearance.
-  const byFormula = new Map<string, IonAmount & { key: string; lnGamma?: number }>();
-  let neutralMolality = 0;
-  species.forEach((s, i) => {
-    const m = amounts.components[i].molality;
-    if (s.ions.length === 0) neutralMolality += m;
-    for (const ion of s.ions) {
-      const entry = byFormula.get(ion.formula) ?? {
-        formula: ion.formula,
-        charge: ion.charge,
-        molality: 0,
-        molarity: 0,
-        key: ion.key,
-      };
-      entry.molality += m * ion.count;
-      entry.molarity = entry.molality / V;
-      byFormula.set(ion.formula, entry);
-    }
-  });
-  const ions = [...byFormula.values()];
+  const { ions, neutralMolality } = solutionIons(species, amounts.components, V);
   const I = ionicStrength(ions);
-  const balance = chargeBalance(ions);
+  const balance = chargeBalanceOf(ions);
   const kappa = kappaPerNm(I.molar, state.relativePermittivity, temperatureC);
-
   const constants = debyeHuckelConstantsFrom(
     state.relativePermittivity,
     state.densityGPerMl,
@@ -68,13 +53,16 @@ export function computeSolution(input: SolutionInput): SolutionResult {
     charge,
     molality,
   }));
-  const context = {
-    ions: modelIons,
-    ionicStrengthMolal: I.molal,
-    temperatureC,
-    solvent: state.solvent.id,
-  };
-  const choice = requested === "auto" ? chooseModel(context) : null;
+  const choice =
+    requested === "auto"
+      ? chooseModel({
+          ions: modelIons,
+          ionicStrengthMolal: I.molal,
+          temperatureC,
+          solvent: state.solvent.id,
+          chargeBalanced: balance.balanced,
+        })
+      : null;
   const model = getModel(choice ? choice.id : requested);
   const modelInput: ActivityModelInput = {
     ions: modelIons,
@@ -84,18 +72,13 @@ export function computeSolution(input: SolutionInput): SolutionResult {
     constants,
     options: input.modelOptions,
   };
-  const output = model.compute(modelInput);
+  const evaluation = evaluateModel(model, modelInput, input.ionAssociation !== false);
+  const output = evaluation.output;
+  const freeIndex = evaluation.speciation;
 
   const ionResults: IonResult[] = ions.map((ion, i) => {
-    const lnGamma = output.lnGamma[i];
-    if (!Number.isFinite(lnGamma)) {
-      throw new ChemInputError(
-        `The ${model.label} model gives no finite activity coefficient for ${ion.formula} in this solution.`,
-        { field: "model", code: "model_failed" },
-      );
-    }
+    const lnGamma = evaluation.lnGamma[i];
     const gamma = Math.exp(lnGamma);
-    ion.lnGamma = lnGamma;
     return {
       formula: ion.formula,
       name: ionByKey(ion.key)?.name,
@@ -106,49 +89,52 @@ export function computeSolution(input: SolutionInput): SolutionResult {
       activity: gamma * ion.molality,
       lnGamma,
       log10Gamma: lnGamma / Math.LN10,
+      ...(freeIndex
+        ? {
+            freeMolality: freeIndex.freeMolality[i],
+            freeGamma: Math.exp(freeIndex.freeLnGamma[i]),
+          }
+        : {}),
     };
   });
+  const lnGammaByFormula = new Map(ionResults.map((r) => [r.formula, r.lnGamma]));
   const salts = meanSaltResults(
     species,
     amounts.components,
-    (formula) => byFormula.get(formula)?.lnGamma ?? 0,
+    (formula) => lnGammaByFormula.get(formula) ?? 0,
   );
 
-  const totalMolality = neutralMolality + ions.reduce((sum, ion) => sum + ion.molality, 0);
+  const ionMolality = ions.reduce((sum, ion) => sum + ion.molality, 0);
+  const totalMolality = neutralMolality + ionMolality;
   // A model's φ covers its ions; neutral solutes (γ = 1) dilute the deviation from ideality.
-  const ionMolality = totalMolality - neutralMolality;
   const phi =
-    output.osmoticCoefficient === undefined
+    evaluation.osmoticCoefficient === undefined
       ? osmoticCoefficientByGibbsDuhem(model, modelInput, output.lnGamma, neutralMolality)
       : totalMolality > 0
-        ? 1 + (ionMolality / totalMolality) * (output.osmoticCoefficient - 1)
+        ? 1 + (ionMolality / totalMolality) * (evaluation.osmoticCoefficient - 1)
         : 1;
   // From the combined φ, so neutral solutes count; a model's own a_w counts its ions only.
   const aw =
     state.solvent.id === "water" ? waterActivityFromOsmotic(phi, totalMolality) : undefined;
 
   const messages = [
+    ...(choice?.change ? [choice.change] : []),
+    ...(balance.message ? [balance.message] : []),
     ...output.validityMessages,
     ...ionPairingMessage(state.relativePermittivity, temperatureC, I.molar),
+    ...sanityMessages({
+      modelLabel: model.label,
+      lnGamma: evaluation.lnGamma,
+      ionFormulas: ions.map((i) => i.formula),
+      osmoticCoefficient: phi,
+      waterActivity: aw,
+    }),
   ];
-  if (choice && !choice.covered)
-    messages.unshift(`No model covers this composition: ${choice.reason}.`);
-  const warnings: string[] = [];
-  const notes: string[] = [];
-  for (const s of species) {
-    for (const w of s.warnings) warnings.push(w);
-    for (const n of s.notes) if (!notes.includes(n)) notes.push(n);
-  }
-  for (const n of output.notes) if (!notes.includes(n)) notes.push(n);
-  warnings.push(...amounts.warnings, ...state.notes);
-  if (balance.warning) warnings.push(balance.warning);
-  if (state.solvent.id !== "water") {
-    const hydrates = species.filter((s) => s.hydrateWater > 0).map((s) => s.formula);
-    if (hydrates.length)
-      warnings.push(
-        `The water of crystallisation of ${hydrates.join(", ")} is counted as solvent mass, but it is water in ${state.solvent.name}: the solvent is no longer pure.`,
-      );
-  }
+  const { warnings, notes } = solutionWarnings(species, state, amounts.warnings, output.notes);
+  if (balance.message) warnings.push(balance.message);
+  if (densityUsed.note) warnings.push(densityUsed.note);
+  const speciation = freeIndex ? speciationResult(ions, V, freeIndex) : undefined;
+  if (speciation) notes.push(speciation.note);
 
   return {
     temperatureC,
@@ -159,6 +145,7 @@ export function computeSolution(input: SolutionInput): SolutionResult {
       densityGPerMl: state.densityGPerMl,
     },
     ionicStrength: I,
+    density: densityUsed,
     debyeLengthNm: kappa > 0 ? 1 / kappa : null,
     kappaPerNm: kappa,
     ions: ionResults,
@@ -176,6 +163,11 @@ export function computeSolution(input: SolutionInput): SolutionResult {
     ...(Number.isFinite(phi) ? { osmoticCoefficient: phi } : {}),
     ...(aw !== undefined && Number.isFinite(aw) ? { waterActivity: aw } : {}),
     chargeExcessEqPerKg: balance.excessEqPerKg,
+    chargeBalance: {
+      balanced: balance.balanced,
+      excessEqPerKg: balance.excessEqPerKg,
+      offers: balance.offers,
+    },
     constants,
     model: {
       requested,
@@ -183,6 +175,8 @@ export function computeSolution(input: SolutionInput): SolutionResult {
       label: model.label,
       reason: choice ? choice.reason : `${model.label} was requested`,
     },
+    ...(choice?.change ? { modelChange: choice.change } : {}),
+    ...(speciation ? { speciation } : {}),
     formulaTex: model.substitutedTex ? model.substitutedTex(modelInput) : model.formulaTex,
     formulaTexGeneral: model.formulaTex,
     validity: { ok: messages.length === 0, messages },

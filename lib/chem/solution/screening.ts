@@ -1,5 +1,5 @@
 /**
- * Ionic strength on both scales, charge balance, and Debye screening:
+ * Ionic strength on both scales and Debye screening (charge balance: charge-balance.ts):
  *   I = ½ Σ mi zi²  (mol/kg),  I_c = ½ Σ ci zi²  (mol/L)
  *   κ² = 2 N_A e² I_c / (ε0 εr k T)   with I_c in mol/m³;  Debye length λ_D = 1/κ
  * (the general expression for any solvent; CODATA 2018 constants).
@@ -45,25 +45,6 @@ export function kappaPerNm(
         kelvin(temperatureC)),
   );
   return kappaPerM * 1e-9;
-}
-
-/** Charge excess in equivalents per kg (Σ mi zi) and a warning when it is not ~0. */
-export function chargeBalance(ions: readonly IonAmount[]): {
-  excessEqPerKg: number;
-  warning?: string;
-} {
-  let sum = 0;
-  let scale = 0;
-  for (const ion of ions) {
-    sum += ion.molality * ion.charge;
-    scale += ion.molality * Math.abs(ion.charge);
-  }
-  if (scale === 0 || Math.abs(sum) <= 1e-9 * scale) return { excessEqPerKg: 0 };
-  const sign = sum > 0 ? "positive" : "negative";
-  return {
-    excessEqPerKg: sum,
-    warning: `The ions do not balance: ${Math.abs(sum).toPrecision(3)} mol/kg of excess ${sign} charge (${((100 * Math.abs(sum)) / scale).toPrecision(2)} % of all charge). Add the counter-ions, or check the formulas.`,
-  };
 }
 
 /** Bjerrum length e² / (4π ε0 εr k T) in nm: the distance at which ion–ion energy equals kT. */

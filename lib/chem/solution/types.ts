@@ -1,6 +1,9 @@
 /** Input and result of `computeSolution` (docs/architecture.md, "The computation contract"). */
 import type { ActivityModelId, ActivityModelOptions, DebyeHuckelConstants } from "../models/types";
 import type { SpeciesKind } from "../species/salts";
+import type { DensityUsed } from "../density/solution-density";
+import type { CounterIonOffer } from "./charge-balance";
+import type { SpeciationResult } from "./speciation-result";
 
 export interface SolutionComponentInput {
   formula: string;
@@ -17,6 +20,11 @@ export interface SolutionInput {
   components: SolutionComponentInput[];
   densityGPerMl?: number;
   modelOptions?: ActivityModelOptions;
+  /**
+   * Ion-association speciation with free-ion models (the Debye–Hückel family) in water:
+   * on unless false. Pitzer and SIT parameters already describe pairing; they ignore it.
+   */
+  ionAssociation?: boolean;
 }
 
 export interface IonResult {
@@ -29,6 +37,9 @@ export interface IonResult {
   activity: number;
   log10Gamma: number;
   lnGamma: number;
+  /** With ion association: molality and γ of the free ion (activity = freeGamma × freeMolality). */
+  freeMolality?: number;
+  freeGamma?: number;
 }
 
 export interface SaltResult {
@@ -57,6 +68,8 @@ export interface SolutionResult {
   temperatureC: number;
   solvent: { id: string; name: string; relativePermittivity: number; densityGPerMl: number };
   ionicStrength: { molal: number; molar: number };
+  /** The density used for molar ↔ molal conversion, and where it came from. */
+  density: DensityUsed;
   /** null when no ions are present (the screening length is unbounded). */
   debyeLengthNm: number | null;
   kappaPerNm: number;
@@ -66,6 +79,16 @@ export interface SolutionResult {
   osmoticCoefficient?: number;
   waterActivity?: number;
   chargeExcessEqPerKg: number;
+  /** Charge balance and the counter-ions that would balance it (component rows to append). */
+  chargeBalance: {
+    balanced: boolean;
+    excessEqPerKg: number;
+    offers: CounterIonOffer[];
+  };
+  /** Set when "auto" had to leave a more accurate model at a range limit: what changed and why. */
+  modelChange?: string;
+  /** Free ions and ion pairs, when ion association was applied. */
+  speciation?: SpeciationResult;
   constants: DebyeHuckelConstants;
   model: {
     requested: ActivityModelId | "auto";

@@ -98,9 +98,11 @@ function fromParsed(parsed: ParsedFormula, field: string): ResolvedSpecies {
 
 /** "C6H12O6(aq)": a neutral molecule the user declares as a non-electrolyte. */
 function nonElectrolyte(text: string, field: string): ResolvedSpecies | null {
-  const m = /^(.*\S)\s*\(aq\)$/.exec(text.trim());
-  if (!m) return null;
-  const parsed = parseFormula(m[1]);
+  const trimmed = text.trim();
+  if (!trimmed.endsWith("(aq)")) return null;
+  const body = trimmed.slice(0, -4).trimEnd();
+  if (!body) return null;
+  const parsed = parseFormula(body);
   if (parsed.charge !== 0) return null;
   const salt = saltByKey(parsed.anhydrousKey);
   if (salt && salt.ions.length > 0) {

@@ -98,7 +98,7 @@ export const SALTS: readonly SaltData[] = [
   S("(NH4)2SO4", "ammonium sulfate", "2 NH4+ + SO4^2-"),
   S("MgSO4", "magnesium sulfate", "Mg^2+ + SO4^2-", {
     hydrates: [7],
-    note: "2:2 salts form ion pairs; Debye–Hückel models overestimate γ± above about 1 mmol/kg.",
+    note: "Mg²⁺ and SO4²⁻ pair (MgSO4°): free-ion models are used with ion association; Pitzer's parameters describe the pairing.",
   }),
   S("CuSO4", "copper(II) sulfate", "Cu^2+ + SO4^2-", { hydrates: [5] }),
   S("ZnSO4", "zinc sulfate", "Zn^2+ + SO4^2-", { hydrates: [7] }),

@@ -62,12 +62,14 @@ describe("amounts in every unit the issue names (through mathjs)", () => {
     expect(back.components[0].molarity).toBeCloseTo(c, 9);
   });
 
-  it("without a density, uses the solvent density and warns that it is a dilute-solution approximation", () => {
-    const r = solve([{ formula: "KCl", amount: 10, unit: "mmol/L" }]);
+  it("without a density, a solute the density model lacks uses the solvent density and says it is a dilute-solution approximation", () => {
+    // LiPF6 has no Laliberté (2009) coefficients; KCl has (density.test.ts).
+    const r = solve([{ formula: "LiPF6", amount: 10, unit: "mmol/L" }]);
     expect(r.components[0].molality).toBeCloseTo(0.01 / 0.997045, 5);
     expect(r.warnings.join(" ")).toMatch(
       /No solution density given.*approximation for dilute solutions/,
     );
+    expect(r.density.source).toBe("solvent");
   });
 
   it("a mass per final volume: 1.25 g CuSO4·5H2O in 50 mL is 0.1001 mol/L", () => {

@@ -69,12 +69,16 @@ describe('model "auto" among the Debye–Hückel family: the most accurate that 
     expect(choice.reason).toMatch(/Kielland/);
   });
 
-  it("Truesdell–Jones in b-dot form up to 0.5 mol/kg when sizes are tabulated but b is not fitted", () => {
-    expect(dh([ion("H+", 1, 0.3), ion("Cl-", -1, 0.3)], 0.3).id).toBe("truesdell-jones");
+  it("Truesdell–Jones in b-dot form up to 0.1 mol/kg when sizes are tabulated but b is not fitted", () => {
+    const inside = dh([ion("H+", 1, 0.08), ion("Cl-", -1, 0.08)], 0.08);
+    expect(inside).toMatchObject({ id: "truesdell-jones", covered: true });
+    // Beyond, no Debye–Hückel-family model is inside its range: the least poor one, said.
+    const beyond = dh([ion("H+", 1, 0.3), ion("Cl-", -1, 0.3)], 0.3);
+    expect(beyond).toMatchObject({ id: "truesdell-jones", covered: false });
   });
 
   it("Davies when some ion has no tabulated size", () => {
-    const choice = dh([ion("Li+", 1, 0.2), ion("PF6-", -1, 0.2)], 0.2);
+    const choice = dh([ion("Li+", 1, 0.04), ion("PF6-", -1, 0.04)], 0.04);
     expect(choice.id).toBe("davies");
     expect(choice.reason).toMatch(/Davies needs none/);
   });
@@ -88,7 +92,8 @@ describe('model "auto" among the Debye–Hückel family: the most accurate that 
   it("says when nothing covers the composition", () => {
     const choice = dh([ion("Li+", 1, 3), ion("PF6-", -1, 3)], 3);
     expect(choice.covered).toBe(false);
-    expect(choice.reason).toMatch(/no available model covers/);
+    expect(choice.reason).toMatch(/no model covers this solution/);
+    expect(choice.change).toMatch(/No model is inside its range here/);
   });
 });
 

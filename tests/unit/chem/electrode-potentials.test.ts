@@ -1,5 +1,6 @@
 // @vitest-environment node
 import { describe, expect, it } from "vitest";
+import { pKwAt } from "@/lib/chem/electrochem/water-ionization";
 import {
   ChemInputError,
   convertPotential,
@@ -8,6 +9,7 @@ import {
   nernstPotential,
   nernstPotentialDetailed,
   nernstSlopeV,
+  referencePotentialVsShe,
 } from "@/lib/chem";
 import { readFixture } from "../../support/read-reference";
 
@@ -53,7 +55,7 @@ describe("Nernst equation with activities", () => {
     ).toBeCloseTo(0.3419 - nernstSlopeV(37, 2) * 2, 10);
   });
 
-  it("AgCl/Ag E° follows Bates & Bower (1954) 0–60 °C", () => {
+  it("AgCl/Ag E° follows the Bates & Bower (1954) table at 0–60 °C within 0.1 mV (their smoothing equation; table and equation from memory)", () => {
     const bb = potentials.filter((r) => r.original_source.startsWith("Bates & Bower"));
     expect(bb.length).toBe(13);
     for (const row of bb) {
@@ -62,8 +64,47 @@ describe("Nernst equation with activities", () => {
         activities: { "Cl-": 1 },
         temperatureC: Number(row.temperature_C),
       }).standardPotentialV;
-      expect(e).toBeCloseTo(Number(row.E0_V_vs_SHE), 5);
+      expect(Math.abs(e - Number(row.E0_V_vs_SHE)), `${row.temperature_C} °C`).toBeLessThan(1e-4);
     }
+  });
+
+  it("standard and reference potentials are continuous over 0–100 °C (no step above 0.5 mV per 0.1 K; self-consistency)", () => {
+    const e0 = (couple: string, t: number) =>
+      nernstPotentialDetailed({
+        couple,
+        activities: { "Cl-": 1, "OH-": 1, H2: 1 },
+        temperatureC: t,
+      }).standardPotentialV;
+    let steps = 0;
+    for (const couple of ["AgCl/Ag", "H2O/H2,OH-", "Hg2Cl2/Hg"]) {
+      for (let t = 0.1; t <= 100; t += 0.1) {
+        expect(Math.abs(e0(couple, t) - e0(couple, t - 0.1)), `${couple} at ${t} °C`).toBeLessThan(
+          5e-4,
+        );
+        steps++;
+      }
+    }
+    for (const ref of ["SCE", "Ag/AgCl-satKCl", "Ag/AgCl-3MKCl", "Hg/HgO-1MNaOH"]) {
+      for (let t = 0.1; t <= 100; t += 0.1) {
+        const jump =
+          referencePotentialVsShe(ref, { temperatureC: t }) -
+          referencePotentialVsShe(ref, { temperatureC: t - 0.1 });
+        expect(Math.abs(jump), `${ref} at ${t} °C`).toBeLessThan(5e-4);
+        steps++;
+      }
+    }
+    expect(steps).toBe(7 * 1000);
+  });
+
+  it("OH⁻ from pH uses Kw at the temperature (WATEQ4F: pKw 14.942 at 0 °C, 13.999 at 25 °C, 12.265 at 100 °C)", () => {
+    // Harned & Owen (1958) give pKw 14.943 at 0 °C and 13.996 at 25 °C (from memory): within 0.005.
+    expect(pKwAt(0)).toBeCloseTo(14.943, 2);
+    expect(pKwAt(25)).toBeCloseTo(13.996, 2);
+    const at = (t: number) =>
+      nernstPotentialDetailed({ couple: "O2/OH-", activities: { O2: 1 }, pH: 12, temperatureC: t });
+    const r = at(60);
+    expect(r.log10Q).toBeCloseTo(4 * (12 - pKwAt(60)), 10);
+    expect(r.notes.join(" ")).toMatch(/pKw = 13.03/);
   });
 
   it("offers formal potentials where the trade uses them (hexacyanoferrate: Skoog et al.)", () => {

@@ -1,8 +1,9 @@
 /**
- * SIT (NEA-TDB form) against tabulated γ± (CRC Handbook 92nd ed.; Robinson & Stokes 1959) up
- * to its stated range, I ≤ 3.5 mol/kg. SIT with one ε per salt is expected to be good to a few
- * per cent there (the NEA quote ε to ±0.01–0.02 kg/mol, i.e. ±2–5 % in γ± at 1–2 mol/kg);
- * the test states the tolerance per salt as measured.
+ * SIT (NEA-TDB form) against tabulated γ± (CRC Handbook 92nd ed.; Robinson & Stokes 1959) to
+ * I = 3.5 mol/kg, the range NEA-TDB quote. SIT with one ε per salt is good to a few per cent
+ * there (the NEA quote ε to ±0.01–0.02 kg/mol, i.e. ±2–5 % in γ± at 1–2 mol/kg); the test
+ * states the tolerance per salt as measured. Ionleaf's stated SIT range is narrower (where it
+ * stays within 2 %, sit-model.ts): points between the two carry a validity message.
  */
 import { describe, expect, it } from "vitest";
 import { computeSit, sitCoverage } from "@/lib/chem/models/sit";
@@ -58,7 +59,7 @@ describe("SIT γ± at 25 °C against published tables, I ≤ 3.5 mol/kg", () => 
       for (const row of GAMMA_REFERENCE.filter((r) => r.salt === salt && r.temperatureC === 25)) {
         const { gamma, I, out } = sitMeanGamma(salt, row.molality);
         if (I > 3.5) {
-          expect(out.validityMessages.join(" ")).toMatch(/above the SIT range/);
+          expect(out.validityMessages.join(" ")).toMatch(/SIT is stated up to/);
           continue;
         }
         const dev = (100 * (gamma - row.gammaPm)) / row.gammaPm;
@@ -130,7 +131,7 @@ describe("SIT internals", () => {
     expect(Math.abs(lhs - rhs)).toBeLessThan(1e-7);
   });
 
-  it("outside 0–50 °C and above I = 3.5 mol/kg the result says so (NEA-TDB range)", () => {
+  it("outside 20–30 °C and above Ionleaf's stated I the result says so", () => {
     const run = (t: number, m: number) =>
       computeSit({
         ions: [
@@ -142,20 +143,20 @@ describe("SIT internals", () => {
         solvent: "water",
         constants: C25,
       }).validityMessages.join(" ");
-    expect(run(25, 1)).toBe("");
-    expect(run(70, 1)).toMatch(/25 °C/);
-    expect(run(25, 5)).toMatch(/above the SIT range/);
+    expect(run(25, 0.2)).toBe("");
+    expect(run(70, 0.2)).toMatch(/SIT is stated for 20–30 °C/);
+    expect(run(25, 1)).toMatch(/SIT is stated up to I = 0.2 mol\/kg for 1:1 electrolytes/);
   });
 
   it("coverage: NaCl is covered; Na+ with HEPES- is not, and says why", () => {
     expect(
       sitCoverage(
         [
-          { formula: "Na+", charge: 1, molality: 1 },
-          { formula: "Cl-", charge: -1, molality: 1 },
+          { formula: "Na+", charge: 1, molality: 0.1 },
+          { formula: "Cl-", charge: -1, molality: 0.1 },
         ],
         25,
-        1,
+        0.1,
       ).covered,
     ).toBe(true);
     const c = sitCoverage(

@@ -1,6 +1,7 @@
 // @vitest-environment node
 import { describe, expect, it } from "vitest";
 import { computeCellPotential } from "@/lib/document/evaluate-cell-block";
+import { evaluateSolutionBlock } from "@/lib/document/evaluate-solution-block";
 import { defaultCellBlockInput, defaultSolutionBlockInput } from "@/lib/document/block-defaults";
 
 const acid = defaultSolutionBlockInput({
@@ -36,5 +37,37 @@ describe("computeCellPotential", () => {
     const potential = computeCellPotential(cell, acid);
     expect(potential.status).toBe("error");
     if (potential.status === "error") expect(potential.message).toMatch(/Fe/);
+  });
+
+  it("uses free-ion activities: the hexacyanoferrates pair with K+ and the note says how much", () => {
+    const ferri = defaultSolutionBlockInput({
+      name: "Ferri/ferro in KCl",
+      model: "davies",
+      components: [
+        { formula: "KCl", amount: 0.1, unit: "mol/kg" },
+        { formula: "K3Fe(CN)6", amount: 0.005, unit: "mol/kg" },
+        { formula: "K4Fe(CN)6", amount: 0.005, unit: "mol/kg" },
+      ],
+    });
+    const cell = defaultCellBlockInput({
+      electrolyteBlockId: ferri.blockId,
+      couple: "Fe(CN)6 3-/4-",
+      temperatureC: 25,
+    });
+    const potential = computeCellPotential(cell, ferri);
+    if (potential.status !== "ok") throw new Error(JSON.stringify(potential));
+    const solution = evaluateSolutionBlock(ferri);
+    if (solution.status !== "ok" || !solution.result.speciation) throw new Error("no speciation");
+    const free = (f: string) => solution.result.speciation!.free.find((s) => s.formula === f)!;
+    // Self-consistency: E = E° − (RT ln10/F) log10(a_red/a_ox) with the free activities the
+    // block shows (the cell's own E° and slope; RT ln10/F = 0.05916 V at 25 °C, CODATA).
+    const expected =
+      potential.standardPotentialV -
+      0.05916 * Math.log10(free("Fe(CN)6^4-").activity / free("Fe(CN)6^3-").activity);
+    expect(potential.vsShe).toBeCloseTo(expected, 4);
+    expect(free("Fe(CN)6^4-").molality).toBeLessThan(0.005 * 0.99);
+    expect(potential.notes.join(" ")).toMatch(
+      /Free-ion activities after ion association \(.*Fe\(CN\)6\^4- \d+ % paired/,
+    );
   });
 });

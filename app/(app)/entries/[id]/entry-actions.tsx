@@ -56,7 +56,6 @@ export function EntryActions(props: {
           <button type="submit" className="btn-primary w-full" disabled={submitting}>
             Submit for countersignature
           </button>
-          <Message state={submitState} />
         </form>
       ) : null}
       {props.canAmend ? (
@@ -96,7 +95,6 @@ export function EntryActions(props: {
                 Cancel
               </button>
             </div>
-            <Message state={amendState} />
           </form>
         ) : (
           <button type="button" className="btn-quiet w-full" onClick={() => setAmendOpen(true)}>
@@ -111,9 +109,13 @@ export function EntryActions(props: {
           <button type="submit" className="btn-quiet w-full">
             {props.archived ? "Restore from archive" : "Archive entry"}
           </button>
-          <Message state={archiveState} />
         </form>
       ) : null}
+      {/* Outside the forms: an action that succeeds can remove its own form (a submitted
+          entry has no submit button), and its message must stay. */}
+      <Message state={submitState} />
+      <Message state={amendState} />
+      <Message state={archiveState} />
     </div>
   );
 }

@@ -44,11 +44,11 @@ export function assemblePitzerSystem(
         missingPairs.push(`${s.cations[c].key}–${s.anions[a].key}`);
         return null;
       }
-      usedSources.add(p.row.source.split(",")[0]);
+      usedSources.add(p.source.split(",")[0]);
       if (ionicStrengthMolal > p.maxI * (1 + 1e-9)) {
         validityMessages.push(
           `I = ${fmt(ionicStrengthMolal)} mol/kg is beyond the fitted range of the ${p.row.salt} parameters ` +
-            `(${p.row.maxIonicStrengthMolal ? "in mixtures" : `${p.row.salt} to ${fmt(p.row.maxMolality, 4)} mol/kg,`} I ≤ ${fmt(p.maxI)}; ${p.row.source}).`,
+            `(${p.row.maxIonicStrengthMolal ? "in mixtures" : `${p.row.salt} to ${fmt(p.maxMolality, 4)} mol/kg,`} I ≤ ${fmt(p.maxI)}; ${p.source}).`,
         );
       }
       validityMessages.push(...p.temperatureMessages);

@@ -4,11 +4,16 @@ import { pitzerCoverage } from "./coverage";
 
 export const PITZER_AUTO_CANDIDATE: AutoCandidate = {
   id: "pitzer",
-  covers: (c) => {
-    if (c.solvent !== "water") return null;
+  label: "Pitzer",
+  assess: (c) => {
+    if (c.solvent !== "water") return { applicable: false, outside: [], reason: "" };
+    if (c.chargeBalanced === false) return { applicable: false, outside: [], reason: "" };
     const coverage = pitzerCoverage(c.ions, c.temperatureC, c.ionicStrengthMolal);
-    return coverage.covered
-      ? "every cation–anion pair has Pitzer parameters (May et al. 2011; Harvie, Møller & Weare 1984; Pitzer & Mayorga 1973) inside their fitted molality range at this temperature"
-      : null;
+    return {
+      applicable: coverage.parameters,
+      outside: coverage.reasons,
+      reason:
+        "every cation–anion pair has Pitzer parameters (published temperature functions, May et al. 2011, Harvie, Møller & Weare 1984, Pitzer & Mayorga 1973) inside their fitted molality and temperature range",
+    };
   },
 };

@@ -18,9 +18,13 @@ import { HMW_1984_MIXING } from "./data/mixing-hmw-1984";
 import { PITZER_KIM_1974_MIXING } from "./data/mixing-pitzer-kim-1974";
 import type { PitzerMixingRow } from "./data/mixing-row";
 import { PITZER_TEMPERATURE_DERIVATIVES } from "./data/temperature-derivatives";
+import {
+  PITZER_TEMPERATURE_FUNCTIONS,
+  type PitzerTemperatureFunctionRow,
+} from "./data/temperature-functions";
 import { pairKey } from "./ion-key";
 
-const BINARY_SETS_IN_PRIORITY: readonly (readonly PitzerBinaryRow[])[] = [
+export const BINARY_SETS_IN_PRIORITY: readonly (readonly PitzerBinaryRow[])[] = [
   MAY_2011_BINARY,
   HMW_1984_BINARY,
   PITZER_MAYORGA_1973_BINARY,
@@ -52,6 +56,17 @@ for (const set of [HMW_1984_MIXING, PITZER_KIM_1974_MIXING]) {
 const temperatureByPair = new Map<string, PitzerTemperatureRow>();
 firstWins(PITZER_TEMPERATURE_DERIVATIVES, (r) => pairKey(r.cation, r.anion), temperatureByPair);
 
+const functionByPair = new Map<string, PitzerTemperatureFunctionRow>();
+firstWins(PITZER_TEMPERATURE_FUNCTIONS, (r) => pairKey(r.cation, r.anion), functionByPair);
+
+/** The full temperature function of a pair, where one is published (data/temperature-functions.ts). */
+export function temperatureFunction(
+  cation: string,
+  anion: string,
+): PitzerTemperatureFunctionRow | undefined {
+  return functionByPair.get(pairKey(cation, anion));
+}
+
 export function binaryParameters(cation: string, anion: string): PitzerBinaryRow | undefined {
   return binaryByPair.get(pairKey(cation, anion));
 }
@@ -74,5 +89,3 @@ export function psiParameter(
 ): PitzerMixingRow | undefined {
   return psiByTriple.get(pairKey(ionI, ionJ, common));
 }
-
-/** Every distinct cation–anion pair Ionleaf has binary parameters for. */

@@ -7,24 +7,8 @@ import type { ModelIon } from "../types";
 import type { PitzerBinaryRow } from "./data/binary-row";
 import type { PitzerBinaryTerms } from "./equations";
 import { ionKey } from "./ion-key";
-import {
-  binaryParameters,
-  psiParameter,
-  temperatureDerivatives,
-  thetaParameter,
-} from "./parameter-tables";
-
-const REFERENCE_TEMPERATURE_C = 25;
-/** Within this many kelvin of 25 °C no correction is applied (common practice, no source). */
-const TEMPERATURE_TOLERANCE_K = 0.5;
-/**
- * First-order derivative corrections hold within about ±15 K of 25 °C: measured against
- * Pitzer, Peiper & Busey (1984) NaCl, γ± stays within 2 % at 10–40 °C but errs by up to 5 %
- * at 0 °C and 3–5 mol/kg, where the curvature of β0(T) matters (tests/unit/chem/pitzer-temperature).
- */
-const DERIVATIVE_SPAN_K = 15;
-
-import { saltIonicStrength } from "./stoichiometry";
+import { binaryParameters, psiParameter, thetaParameter } from "./parameter-tables";
+import { pairAtTemperature } from "./temperature/pair-at-temperature";
 
 export function fmt(x: number, digits = 3): string {
   return Number(x.toPrecision(digits)).toString();
@@ -35,6 +19,11 @@ interface PairStructure {
   row: PitzerBinaryRow;
   terms: PitzerBinaryTerms;
   maxI: number;
+  /** Top of the fitted molality range and source of the parameter set used at this T. */
+  maxMolality: number;
+  source: string;
+  /** Temperatures (°C) the set used is stated for. */
+  rangeC: { min: number; max: number };
   derivativeMaxI: number | null;
   /** Temperature messages that hold whatever the composition. */
   temperatureMessages: string[];
@@ -64,33 +53,18 @@ function pairStructure(
 ): PairStructure | null {
   const row = binaryParameters(c.key, a.key);
   if (!row) return null;
-  const dT = temperatureC - REFERENCE_TEMPERATURE_C;
-  const terms: PitzerBinaryTerms = { ...row };
-  const temperatureMessages: string[] = [];
-  let temperatureNote: string | null = null;
-  let derivativeMaxI: number | null = null;
-  if (Math.abs(dT) >= TEMPERATURE_TOLERANCE_K) {
-    const d = temperatureDerivatives(c.key, a.key);
-    if (!d) {
-      temperatureMessages.push(
-        `Pitzer parameters for ${row.salt} exist at 25 °C only; the result at ${fmt(temperatureC)} °C uses them unchanged.`,
-      );
-    } else {
-      terms.beta0 += d.dBeta0 * dT;
-      terms.beta1 += d.dBeta1 * dT;
-      terms.beta2 += d.dBeta2 * dT;
-      terms.cPhi += d.dCPhi * dT;
-      temperatureNote = `${row.salt}: β and Cφ moved from 25 °C with the ∂P/∂T of ${d.source}.`;
-      derivativeMaxI = saltIonicStrength(c.charge, a.charge, d.maxMolality);
-      if (Math.abs(dT) > DERIVATIVE_SPAN_K) {
-        temperatureMessages.push(
-          `${row.salt}: the first-order temperature correction from 25 °C holds for about 10–40 °C; ${fmt(temperatureC)} °C is outside it.`,
-        );
-      }
-    }
-  }
-  const maxI = row.maxIonicStrengthMolal ?? saltIonicStrength(c.charge, a.charge, row.maxMolality);
-  return { row, terms, maxI, derivativeMaxI, temperatureMessages, temperatureNote };
+  const at = pairAtTemperature(row, { cation: c.charge, anion: a.charge }, temperatureC);
+  return {
+    row,
+    terms: at.terms,
+    maxI: at.maxI,
+    maxMolality: at.maxMolality,
+    source: at.source,
+    rangeC: at.rangeC,
+    derivativeMaxI: at.derivativeMaxI,
+    temperatureMessages: at.temperatureMessages,
+    temperatureNote: at.temperatureNote,
+  };
 }
 
 function mixingTerms(list: { key: string }[], others: { key: string }[]) {

@@ -4,8 +4,16 @@ import { sitCoverage } from "./sit-model";
 
 export const SIT_AUTO_CANDIDATE: AutoCandidate = {
   id: "sit",
-  covers: (c) =>
-    c.solvent === "water" && sitCoverage(c.ions, c.temperatureC, c.ionicStrengthMolal).covered
-      ? "not every pair has Pitzer parameters in range, but every cation–anion pair has an SIT ε (NEA-TDB) and I ≤ 3.5 mol/kg"
-      : null,
+  label: "SIT",
+  assess: (c) => {
+    if (c.solvent !== "water" || c.chargeBalanced === false)
+      return { applicable: false, outside: [], reason: "" };
+    const coverage = sitCoverage(c.ions, c.temperatureC, c.ionicStrengthMolal);
+    return {
+      applicable: coverage.parameters,
+      outside: coverage.parameters ? coverage.reasons : [],
+      reason:
+        "every cation–anion pair has an SIT ε (NEA-TDB) and the solution is inside the SIT range (20–30 °C)",
+    };
+  },
 };

@@ -138,7 +138,22 @@ export const PITZER_MAYORGA_1973_BINARY: readonly PitzerBinaryRow[] = [
     LIMIT,
     `${PM73}, Table VIII`,
   ),
-  r("InCl3", "In^3+", "Cl-", -1.12, -2.566667, 0, 2, 12, 0, 1, LIMIT, `${PM73}, Table VIII`),
+  // Cut from 1 to 0.05 mol/kg: with these parameters φ falls to 0 at 0.21 mol/kg and below
+  // (φ = −0.56 at 0.5), which no solution has; at 0.05 mol/kg φ = 0.46 (In(III) chloro-complexes).
+  r(
+    "InCl3",
+    "In^3+",
+    "Cl-",
+    -1.12,
+    -2.566667,
+    0,
+    2,
+    12,
+    0,
+    0.05,
+    "Ionleaf: cut where φ stays well above 0 (φ = 0 at 0.21 mol/kg with these parameters)",
+    `${PM73}, Table VIII`,
+  ),
   r(
     "Na3AsO4",
     "Na+",

@@ -1,0 +1,193 @@
+import "server-only";
+import type { TraceViewDto } from "@/lib/contract/traces";
+import type { Readable } from "node:stream";
+import { findLabAttachment, findTraceMapping, saveTraceMapping } from "@/db/queries/attachments";
+import { insertAuditEvent } from "@/db/queries/audit";
+import { AppError } from "@/lib/errors";
+import { loadEntryFor } from "@/lib/notebook/entry-access";
+import { assertCan, type Actor } from "@/lib/rules/authorize";
+import { getDb } from "@/lib/server/database";
+import { getStorage } from "@/lib/storage";
+import {
+  analyseVoltammogram,
+  createTraceParser,
+  downsampleForPlot,
+  traceColumn,
+  type ColumnMapping,
+  type ParsedTrace,
+  type TraceSummary,
+} from "@/lib/traces";
+import { layoutKeyOf } from "./trace-layout";
+
+/** Points per plotted series: enough for a crisp line, few enough for a quick first paint. */
+const MAX_PLOT_POINTS = 4000;
+
+type TraceView = TraceViewDto;
+type TraceSeries = TraceViewDto["series"][number];
+
+async function parseStream(stream: Readable, mapping: ColumnMapping | null): Promise<ParsedTrace> {
+  const parser = createTraceParser(mapping ? { mapping } : {});
+  let decoder: TextDecoder | null = null;
+  for await (const piece of stream) {
+    let bytes = piece as Buffer;
+    if (!decoder) {
+      const le = bytes[0] === 0xff && bytes[1] === 0xfe;
+      const be = bytes[0] === 0xfe && bytes[1] === 0xff;
+      const utf8Bom = bytes[0] === 0xef && bytes[1] === 0xbb && bytes[2] === 0xbf;
+      decoder = new TextDecoder(le ? "utf-16le" : be ? "utf-16be" : "utf-8");
+      bytes = bytes.subarray(le || be ? 2 : utf8Bom ? 3 : 0);
+    }
+    parser.push(decoder.decode(bytes, { stream: true }));
+  }
+  if (decoder) parser.push(decoder.decode());
+  return parser.finish();
+}
+
+const plain = (a: ArrayLike<number>) => Array.from(a, (v) => (Number.isFinite(v) ? v : 0));
+
+function seriesOf(trace: ParsedTrace): Pick<TraceView, "series" | "axes" | "bode" | "peaks"> {
+  const { summary } = trace;
+  const potential = traceColumn(trace, "potential");
+  const current = traceColumn(trace, "current");
+  const time = traceColumn(trace, "time");
+  const series: TraceSeries[] = [];
+  if (summary.technique === "impedance") {
+    const re = traceColumn(trace, "impedanceReal");
+    const im = traceColumn(trace, "impedanceImaginaryNegated");
+    const f = traceColumn(trace, "frequency");
+    const mod = traceColumn(trace, "impedanceModulus");
+    const phase = traceColumn(trace, "phase");
+    if (re && im) {
+      const d = downsampleForPlot(re, im, MAX_PLOT_POINTS);
+      series.push({ label: "Nyquist", x: plain(d.x), y: plain(d.y) });
+    }
+    const bode =
+      f && re && im
+        ? {
+            frequencyHz: plain(f),
+            modulusOhm: mod ? plain(mod) : Array.from(f, (_, i) => Math.hypot(re[i], im[i])),
+            phaseDeg: phase
+              ? Array.from(phase, (p) => (p * 180) / Math.PI)
+              : Array.from(f, (_, i) => (-Math.atan2(im[i], re[i]) * 180) / Math.PI),
+          }
+        : null;
+    return { series, axes: { x: "Z′ / Ω", y: "−Z″ / Ω" }, bode, peaks: [] };
+  }
+  if (
+    (summary.technique === "cyclic-voltammetry" ||
+      summary.technique === "linear-sweep-voltammetry") &&
+    potential &&
+    current
+  ) {
+    const cycles = summary.cycles.length
+      ? summary.cycles
+      : [{ number: 1, startRow: 0, endRow: summary.points }];
+    const perCycle = Math.max(200, Math.floor(MAX_PLOT_POINTS / cycles.length));
+    for (const c of cycles) {
+      const d = downsampleForPlot(
+        potential.subarray(c.startRow, c.endRow),
+        current.subarray(c.startRow, c.endRow),
+        perCycle,
+      );
+      series.push({ label: `Cycle ${c.number}`, x: plain(d.x), y: plain(d.y) });
+    }
+    const peaks = analyseVoltammogram({
+      potentialV: potential,
+      currentA: current,
+      cycles: summary.cycles,
+    });
+    return { series, axes: { x: "E / V", y: "I / A" }, bode: null, peaks };
+  }
+  const y = current ?? potential;
+  if (time && y) {
+    const d = downsampleForPlot(time, y, MAX_PLOT_POINTS);
+    series.push({ label: current ? "Current" : "Potential", x: plain(d.x), y: plain(d.y) });
+    return { series, axes: { x: "t / s", y: current ? "I / A" : "E / V" }, bode: null, peaks: [] };
+  }
+  return { series, axes: { x: "", y: "" }, bode: null, peaks: [] };
+}
+
+/** Recent views by content and mapping: reopening an entry does not parse a big file again. */
+const cache = new Map<string, Omit<TraceView, "attachmentId" | "name">>();
+
+async function loadAttachment(actor: Actor, attachmentId: string) {
+  assertCan(actor, "entry.read");
+  if (!/^[0-9a-f-]{36}$/i.test(attachmentId))
+    throw new AppError("not_found", "Attachment not found.");
+  const row = await findLabAttachment(getDb(), actor.labId, attachmentId);
+  if (!row) throw new AppError("not_found", "Attachment not found.");
+  await loadEntryFor(getDb(), actor, row.entryId, "view");
+  return row;
+}
+
+/**
+ * A stored instrument export read back from the storage and turned into plot series and
+ * voltammetric peaks. The parse runs on demand; the database holds only the summary.
+ */
+export async function getTraceView(
+  actor: Actor,
+  attachmentId: string,
+  given: ColumnMapping | null = null,
+): Promise<TraceView> {
+  const row = await loadAttachment(actor, attachmentId);
+  if (row.kind !== "trace" && row.kind !== "file")
+    throw new AppError("invalid_input", "This attachment is not an instrument export.");
+  const summary = row.parsedSummary as unknown as TraceSummary | null;
+  const saved =
+    !given && summary
+      ? await findTraceMapping(
+          getDb(),
+          actor.labId,
+          layoutKeyOf(summary.columns.map((c) => c.name)),
+        )
+      : null;
+  const mapping = given ?? (saved?.mapping as ColumnMapping | undefined) ?? null;
+  const key = `${row.sha256}:${JSON.stringify(mapping)}`;
+  let view = cache.get(key);
+  if (!view) {
+    const trace = await parseStream(await getStorage().read(row.storedPath), mapping);
+    view = { summary: trace.summary, mapping, ...seriesOf(trace) };
+    cache.set(key, view);
+    if (cache.size > 16) cache.delete(cache.keys().next().value!);
+  }
+  return { attachmentId: row.id, name: row.originalName, ...view };
+}
+
+/** The mapping dialog's answer: remembered for the lab's files with these columns. */
+export async function saveTraceMappingFor(
+  actor: Actor,
+  attachmentId: string,
+  mapping: ColumnMapping,
+): Promise<TraceView> {
+  assertCan(actor, "entry.write");
+  const row = await loadAttachment(actor, attachmentId);
+  const view = await getTraceView(actor, attachmentId, mapping);
+  if (view.summary.points === 0) {
+    throw new AppError(
+      "invalid_input",
+      "With that mapping no row could be read; nothing was saved.",
+      {
+        details: { problems: view.summary.problems },
+      },
+    );
+  }
+  const columns = (
+    (row.parsedSummary as unknown as TraceSummary | null)?.columns ?? view.summary.columns
+  ).map((c) => c.name);
+  await saveTraceMapping(getDb(), {
+    labId: actor.labId,
+    layoutKey: layoutKeyOf(columns),
+    columns,
+    mapping: mapping,
+    createdById: actor.userId,
+  });
+  await insertAuditEvent(getDb(), {
+    labId: actor.labId,
+    actorId: actor.userId,
+    action: "trace.mapping_saved",
+    targetType: "attachment",
+    targetId: row.id,
+    details: { columns },
+  });
+  return view;
+}
