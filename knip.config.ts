@@ -24,8 +24,6 @@ const config: KnipConfig = {
     // that does not resolve against the rest of tiptap 3.31.
     "@tiptap/extension-bubble-menu",
     "@tiptap/extension-floating-menu",
-    // The load and finder benchmarks (bench/) are being written against it.
-    "autocannon",
   ],
 };
 
