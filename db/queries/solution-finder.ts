@@ -160,11 +160,8 @@ export interface FinderRow {
   /** The block's components as typed: formula, amount, unit. */
   components: unknown;
   createdAt: Date;
-  /** created_at at full precision (microseconds), the CSV export's keyset. */
-  savedKey: string;
   entryTitle: string;
   entryStatus: string;
-  currentRevision: number;
   authorName: string;
   projectName: string;
 }
@@ -175,8 +172,7 @@ const DETAIL_COLUMNS = sql`
   b.ionic_strength_molar as "ionicStrengthMolar", b.debye_length_nm as "debyeLengthNm",
   b.temperature_c as "temperatureC", b.solvent, b.model_used as "modelUsed", b.species,
   r.inputs -> 'components' as components, b.created_at as "createdAt",
-  b.created_at::text as "savedKey",
-  e.title as "entryTitle", e.status as "entryStatus", e.current_revision_number as "currentRevision",
+  e.title as "entryTitle", e.status as "entryStatus",
   u.name as "authorName", p.name as "projectName"`;
 
 const DETAIL_FROM = sql`
@@ -291,19 +287,20 @@ export async function findSolutionBatch(
   f: FinderFilter,
   after: { savedKey: string; id: string } | null,
   size: number,
-): Promise<FinderRow[]> {
+): Promise<(FinderRow & { savedKey: string })[]> {
   const keyset = after
     ? sql` and (b.created_at, b.id) < (${after.savedKey}::timestamptz, ${after.id}::uuid)`
     : sql``;
   const union = sql.join(
     branches(f).map(
       (open) =>
-        sql`(select ${DETAIL_COLUMNS} from ${DETAIL_FROM} where ${conditions(f, open)}${keyset} order by b.created_at desc, b.id desc limit ${size})`,
+        sql`(select ${DETAIL_COLUMNS}, b.created_at::text as "savedKey" from ${DETAIL_FROM} where ${conditions(f, open)}${keyset} order by b.created_at desc, b.id desc limit ${size})`,
     ),
     sql` union all `,
   );
-  const result = await db.execute<Record<string, unknown>>(
+  const result = await db.execute<Record<string, unknown> & { savedKey: string }>(
     sql`select * from (${union}) u order by u."createdAt" desc, u.id desc limit ${size}`,
   );
-  return result.rows.map(rowOf);
+  // savedKey: created_at at full precision (microseconds), the keyset of the next batch.
+  return result.rows.map((r) => ({ ...rowOf(r), savedKey: r.savedKey }));
 }
