@@ -3,7 +3,7 @@ import { QueryProvider } from "@/components/providers/query-provider";
 import { AppHeader } from "@/components/shell/app-header";
 import { getActor } from "@/lib/access/actor";
 import { signOut } from "@/lib/auth";
-import { recordSignOut } from "@/lib/auth/sign-out";
+import { endSessions } from "@/lib/auth/sign-out";
 import { getLabName } from "@/lib/labs/members";
 import { navigationFor } from "@/lib/shell/navigation";
 
@@ -15,7 +15,7 @@ export default async function AppLayout({ children }: { children: React.ReactNod
   async function signOutAction() {
     "use server";
     const current = await getActor();
-    if (current) await recordSignOut(current);
+    if (current) await endSessions(current);
     await signOut({ redirectTo: "/sign-in" });
   }
 

@@ -85,3 +85,11 @@ export async function listLabSupervisors(db: Executor, labId: string) {
     .where(and(eq(users.labId, labId), eq(users.role, "supervisor"), eq(users.active, true)))
     .orderBy(asc(users.name));
 }
+
+/** Ends every session of the member: tokens carrying the old version no longer count. */
+export async function bumpSessionVersion(db: Executor, userId: string) {
+  await db
+    .update(users)
+    .set({ sessionVersion: sql`${users.sessionVersion} + 1` })
+    .where(eq(users.id, userId));
+}

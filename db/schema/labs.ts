@@ -4,6 +4,7 @@ import {
   boolean,
   check,
   index,
+  integer,
   jsonb,
   pgTable,
   text,
@@ -38,6 +39,11 @@ export const users = pgTable(
     passwordHash: text("password_hash").notNull(),
     role: text("role").$type<Role>().notNull(),
     active: boolean("active").notNull().default(true),
+    /**
+     * Part of every session token of the member; raising it ends all of them at once
+     * (sign-out, deactivation, role or password change).
+     */
+    sessionVersion: integer("session_version").notNull().default(1),
     deactivatedAt: timestamp("deactivated_at", { withTimezone: true }),
     createdAt: createdAt(),
   },
@@ -86,10 +92,15 @@ export const signInAttempts = pgTable(
   {
     id: bigserial("id", { mode: "number" }).primaryKey(),
     email: text("email").notNull(),
+    /** Where the attempt came from (the client's address), for per-client limits. */
+    clientKey: text("client_key").notNull().default(""),
     succeeded: boolean("succeeded").notNull(),
     at: timestamp("at", { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [index("sign_in_attempts_email_at_idx").on(sql`lower(${t.email})`, t.at)],
+  (t) => [
+    index("sign_in_attempts_email_at_idx").on(sql`lower(${t.email})`, t.at),
+    index("sign_in_attempts_client_at_idx").on(t.clientKey, t.at),
+  ],
 );
 
 export const auditEvents = pgTable(

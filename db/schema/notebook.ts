@@ -224,7 +224,7 @@ export const blockResults = pgTable(
     // The finder's range scans on either ionic-strength scale use two covering partial
     // indexes, block_results_current_molal_idx and block_results_current_molar_idx:
     // (lab_id, ionic_strength_molal|molar) INCLUDE (species, entry_id, created_at, id)
-    // WHERE to_revision IS NULL. They are written in SQL in drizzle/0006_finder_search.sql
+    // WHERE to_revision IS NULL. They are written in SQL in drizzle/0007_finder_search.sql
     // because Drizzle cannot declare INCLUDE; a range + species query is answered from the
     // index alone (docs/architecture.md, "The solution finder").
     index("block_results_current_species_idx")

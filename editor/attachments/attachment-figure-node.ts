@@ -1,4 +1,5 @@
 import { Node, mergeAttributes } from "@tiptap/core";
+import { insertBlockContent } from "../insert-block";
 import { ReactNodeViewRenderer } from "@tiptap/react";
 import { AttachmentFigureView } from "./attachment-figure-view";
 
@@ -53,8 +54,8 @@ export const AttachmentFigure = Node.create({
     return {
       insertAttachmentFigure:
         ({ attachmentId, caption = "" }) =>
-        ({ commands }) =>
-          commands.insertContent({ type: this.name, attrs: { attachmentId, caption } }),
+        (props) =>
+          insertBlockContent(props, { type: this.name, attrs: { attachmentId, caption } }),
     };
   },
 

@@ -1,4 +1,5 @@
 import { Node, mergeAttributes } from "@tiptap/core";
+import { insertBlockContent } from "../insert-block";
 
 declare module "@tiptap/core" {
   interface Commands<ReturnType> {
@@ -51,10 +52,8 @@ export const AttachmentFile = Node.create({
 
   addCommands() {
     return {
-      insertAttachmentFile:
-        (attrs) =>
-        ({ commands }) =>
-          commands.insertContent({ type: this.name, attrs }),
+      insertAttachmentFile: (attrs) => (props) =>
+        insertBlockContent(props, { type: this.name, attrs }),
     };
   },
 });

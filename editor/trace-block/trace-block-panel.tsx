@@ -27,6 +27,19 @@ interface TraceBlockPanelProps {
 
 const REFERENCES = listReferenceElectrodes().filter((r) => r.id !== "RHE");
 
+const PREFIXES = [
+  { factor: 1, symbol: "" },
+  { factor: 1e3, symbol: "m" },
+  { factor: 1e6, symbol: "µ" },
+  { factor: 1e9, symbol: "n" },
+];
+
+/** The SI prefix that puts the largest current between 1 and 1000 in its unit. */
+function currentPrefix(values: number[]) {
+  const largest = values.reduce((m, v) => Math.max(m, Math.abs(v)), 0);
+  return PREFIXES.find((p) => largest * p.factor >= 1) ?? PREFIXES[PREFIXES.length - 1];
+}
+
 /**
  * An instrument export plotted: current against potential per cycle for voltammetry, current
  * or potential against time, Nyquist and Bode plots for impedance. Current can be shown per
@@ -59,18 +72,27 @@ export function TraceBlockPanel({ editor, value, onChange, editable }: TraceBloc
         ? convertPotential(0, fileReference, value.potentialScale, { temperatureC: 25 })
         : 0;
     const perArea = value.showCurrentDensity && areaCm2 && areaCm2 > 0 ? 1 / areaCm2 : 1;
-    const series = view.series
-      .filter((s, i) => !isVoltammetry || !value.cycles || value.cycles.includes(i + 1))
+    const isCurrent = isVoltammetry || view.axes.y === "I / A";
+    const raw = view.series
+      .filter((_, i) => !isVoltammetry || !value.cycles || value.cycles.includes(i + 1))
       .map((s) => ({
         label: s.label,
         x: isVoltammetry ? s.x.map((x) => x + shift) : s.x,
-        y: isVoltammetry || view.axes.y === "I / A" ? s.y.map((y) => y * perArea) : s.y,
+        y: isCurrent ? s.y.map((y) => y * perArea) : s.y,
       }));
+    // Currents are read in the prefix that suits their size (µA for a microelectrode).
+    const prefix = isCurrent ? currentPrefix(raw.flatMap((s) => s.y)) : { factor: 1, symbol: "" };
+    const series = raw.map((s) => ({ ...s, y: s.y.map((y) => y * prefix.factor) }));
     const xLabel = isVoltammetry
       ? `E / V vs ${referenceElectrodeLabel(value.potentialScale ?? fileReference ?? "the file's reference")}`
       : view.axes.x;
-    const yLabel = perArea !== 1 ? "j / A cm⁻²" : view.axes.y;
-    return { series, xLabel, yLabel, shift, perArea };
+    const yLabel = !isCurrent
+      ? view.axes.y
+      : perArea !== 1
+        ? `j / ${prefix.symbol}A cm⁻²`
+        : `I / ${prefix.symbol}A`;
+    const scale = prefix.factor;
+    return { series, xLabel, yLabel, shift, perArea, scale };
   }, [view, isVoltammetry, value, fileReference, areaCm2]);
 
   return (
@@ -201,7 +223,7 @@ export function TraceBlockPanel({ editor, value, onChange, editable }: TraceBloc
                       : []
                   }
                   shift={shown.shift}
-                  perArea={shown.perArea}
+                  perArea={shown.perArea * shown.scale}
                   bode={view.bode}
                 />
               </Suspense>

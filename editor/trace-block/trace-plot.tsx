@@ -36,8 +36,11 @@ function XYPlot({
   useEffect(() => {
     const el = host.current;
     if (!el) return;
-    const width = Math.max(280, el.clientWidth);
-    const height = equalAxes ? Math.min(width, 420) : 300;
+    // A Nyquist plot is square, so one ohm is as long on both axes.
+    const width = equalAxes
+      ? Math.min(Math.max(280, el.clientWidth), 420)
+      : Math.max(280, el.clientWidth);
+    const height = equalAxes ? width : 300;
     let range: [number, number] | undefined;
     if (equalAxes) {
       const all = series.flatMap((s) => [...s.x, ...s.y]);
@@ -53,9 +56,6 @@ function XYPlot({
     const data: uPlot.AlignedData = [
       null as unknown as number[],
       ...series.map((s) => [s.x, s.y] as unknown as number[]),
-      ...(markers.length
-        ? [[markers.map((m) => m.x), markers.map((m) => m.y)] as unknown as number[]]
-        : []),
     ];
     const plot = new uPlot(
       {
@@ -63,6 +63,25 @@ function XYPlot({
         height,
         mode: 2,
         legend: { show: true, live: false },
+        // Peaks are marked with rings drawn over the curves.
+        hooks: {
+          draw: [
+            (u: uPlot) => {
+              const ctx = u.ctx;
+              ctx.save();
+              ctx.strokeStyle = "#b91c1c";
+              ctx.lineWidth = 2 * devicePixelRatio;
+              for (const m of markers) {
+                const px = u.valToPos(m.x, "x", true);
+                const py = u.valToPos(m.y, "y", true);
+                ctx.beginPath();
+                ctx.arc(px, py, 5 * devicePixelRatio, 0, 2 * Math.PI);
+                ctx.stroke();
+              }
+              ctx.restore();
+            },
+          ],
+        },
         cursor: { drag: { x: true, y: true, uni: 50 } },
         scales: {
           x: { time: false, ...(range ? { range } : {}) },
@@ -80,17 +99,6 @@ function XYPlot({
             width: 1.5,
             points: { show: false },
           })),
-          ...(markers.length
-            ? [
-                {
-                  label: "Peaks",
-                  stroke: "#b91c1c",
-                  width: 0,
-                  paths: () => null,
-                  points: { show: true, size: 8, fill: "#b91c1c", stroke: "#b91c1c" },
-                },
-              ]
-            : []),
         ],
       },
       data,

@@ -8,10 +8,17 @@ import type { Actor } from "@/lib/rules/authorize";
 
 export { assertCan, type Actor } from "@/lib/rules/authorize";
 
-/** Resolves a session user id to an Actor; null when the member is unknown or deactivated. */
-export async function actorForUserId(userId: string): Promise<Actor | null> {
+/**
+ * Resolves a session to an Actor; null when the member is unknown or deactivated, or when the
+ * session was ended (its version is older than the member's: signed out, role changed…).
+ */
+export async function actorForUserId(
+  userId: string,
+  sessionVersion?: number,
+): Promise<Actor | null> {
   const user = await findUserById(getDb(), userId);
   if (!user || !user.active) return null;
+  if (sessionVersion !== undefined && sessionVersion !== user.sessionVersion) return null;
   return {
     userId: user.id,
     labId: user.labId,
@@ -24,8 +31,8 @@ export async function actorForUserId(userId: string): Promise<Actor | null> {
 /** Once per request: the session's member, or null. */
 export const getActor = cache(async (): Promise<Actor | null> => {
   const session = await auth();
-  const userId = session?.user?.id;
-  return userId ? actorForUserId(userId) : null;
+  const user = session?.user;
+  return user?.id ? actorForUserId(user.id, user.sessionVersion ?? 0) : null;
 });
 
 export async function requireActor(): Promise<Actor> {

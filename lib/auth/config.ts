@@ -14,10 +14,11 @@ export const authConfig = {
   callbacks: {
     jwt({ token, user }) {
       if (user) {
-        const u = user as { id?: string; labId?: string; role?: string };
+        const u = user as { id?: string; labId?: string; role?: string; sessionVersion?: number };
         token.uid = u.id;
         token.labId = u.labId;
         token.role = u.role;
+        token.sv = u.sessionVersion;
       }
       return token;
     },
@@ -25,6 +26,10 @@ export const authConfig = {
       // Display hints only: the server reloads the member from the database for every
       // decision (lib/auth/session.ts), so a role change or deactivation takes effect at once.
       session.user.id = typeof token.uid === "string" ? token.uid : "";
+      // The member's session version when this token was issued: compared with the database
+      // on every request (lib/access/actor.ts), so a revoked session stops working at once.
+      (session.user as { sessionVersion?: number }).sessionVersion =
+        typeof token.sv === "number" ? token.sv : 0;
       (session.user as { labId?: string }).labId = token.labId as string | undefined;
       (session.user as { role?: string }).role = token.role as string | undefined;
       return session;

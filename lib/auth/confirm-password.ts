@@ -1,31 +1,28 @@
 import "server-only";
-import type { Executor } from "@/db/client";
-import { recentSignInAttempts, recordSignInAttempt } from "@/db/queries/sign-in-attempts";
-import { findUserById } from "@/db/queries/users";
+import type { Database } from "@/db/client";
 import { AppError } from "@/lib/errors";
 import type { Actor } from "@/lib/rules/authorize";
-import { verifyPassword } from "./password";
-import { throttleDecision, WINDOW_MS } from "./throttle";
+import { checkPasswordThrottled } from "./check-password";
 
 /**
- * Re-entry of the signed-in member's own password, as an electronic signature asks. It
- * counts toward the same throttle as signing in: a wrong password here is a failed attempt
- * for that address, and a throttled address cannot sign either.
+ * Re-entry of the signed-in member's own password, as an electronic signature asks. It counts
+ * toward the same throttle as signing in: a wrong password here is a failed attempt for that
+ * address, and a throttled address cannot sign either.
  */
-export async function confirmPassword(db: Executor, actor: Actor, password: string): Promise<void> {
-  const attempts = await recentSignInAttempts(db, actor.email, new Date(Date.now() - WINDOW_MS));
-  const decision = throttleDecision(attempts, new Date());
-  if (!decision.allowed) {
+export async function confirmPassword(db: Database, actor: Actor, password: string): Promise<void> {
+  const check = await checkPasswordThrottled(db, {
+    email: actor.email,
+    password,
+    clientKey: `signature:${actor.userId}`,
+  });
+  if (check.kind === "throttled") {
     throw new AppError(
       "rate_limited",
-      `Too many wrong passwords. Try again in ${Math.ceil(decision.retryAfterSeconds / 60)} min.`,
-      { details: { retryAfterSeconds: decision.retryAfterSeconds } },
+      `Too many wrong passwords. Try again in ${Math.ceil(check.retryAfterSeconds / 60)} min.`,
+      { details: { retryAfterSeconds: check.retryAfterSeconds } },
     );
   }
-  const user = await findUserById(db, actor.userId);
-  const ok = Boolean(user?.active && (await verifyPassword(user.passwordHash, password)));
-  await recordSignInAttempt(db, actor.email, ok);
-  if (!ok) {
+  if (!check.ok || check.user?.id !== actor.userId) {
     throw new AppError("invalid_input", "That password is not yours; nothing was signed.", {
       fieldErrors: { password: ["Enter your own password."] },
     });

@@ -5,6 +5,12 @@ import { getDb } from "@/lib/server/database";
 import { authConfig } from "./config";
 import { verifyCredentials } from "./verify-credentials";
 
+/** The client's address as the reverse proxy or the server saw it: the per-client throttle key. */
+function clientKeyOf(request: Request | undefined): string {
+  const forwarded = request?.headers.get("x-forwarded-for")?.split(",")[0]?.trim();
+  return (forwarded || request?.headers.get("x-real-ip") || "direct").slice(0, 100);
+}
+
 class ThrottledSignIn extends CredentialsSignin {
   code = "throttled";
 }
@@ -28,8 +34,8 @@ export const { handlers, auth, signIn, signOut } = NextAuth({
         email: { label: "E-mail", type: "email" },
         password: { label: "Password", type: "password" },
       },
-      async authorize(credentials) {
-        const result = await verifyCredentials(getDb(), credentials);
+      async authorize(credentials, request) {
+        const result = await verifyCredentials(getDb(), credentials, clientKeyOf(request));
         if (result.kind === "throttled") {
           const error = new ThrottledSignIn();
           error.code = `throttled:${result.retryAfterSeconds}`;

@@ -5,6 +5,7 @@ import {
   countActiveAdmins,
   findLabMember,
   listLabMembers,
+  bumpSessionVersion,
   setMemberActive,
   updateMemberRole,
 } from "@/db/queries/users";
@@ -73,6 +74,8 @@ export async function changeMemberRole(actor: Actor, raw: unknown): Promise<Memb
       );
     }
     const updated = await updateMemberRole(tx, actor.labId, userId, role);
+    // A new role starts with a new sign-in: existing sessions end.
+    if (updated) await bumpSessionVersion(tx, userId);
     if (!updated) throw new AppError("not_found", "That person is not a member of your lab.");
     await insertAuditEvent(tx, {
       labId: actor.labId,
@@ -107,6 +110,7 @@ export async function setMemberActivation(
       throw new AppError("conflict", "A lab needs at least one active admin.");
     }
     const updated = await setMemberActive(tx, actor.labId, userId, active);
+    if (updated && !active) await bumpSessionVersion(tx, userId);
     if (!updated) throw new AppError("not_found", "That person is not a member of your lab.");
     await insertAuditEvent(tx, {
       labId: actor.labId,

@@ -53,6 +53,7 @@ describe("migrations on an empty database", () => {
       "signatures",
       "solution_results",
       "species",
+      "trace_mappings",
       "users",
     ]);
     const triggers = await withClient(targetUrl, (c) =>

@@ -1,6 +1,7 @@
 // @vitest-environment node
 import { describe, expect, it } from "vitest";
-import { MAX_FAILURES } from "@/lib/auth/throttle";
+import { eq } from "drizzle-orm";
+import { signInAttempts } from "@/db/schema";
 import { verifyCredentials } from "@/lib/auth/verify-credentials";
 import { setMemberActivation } from "@/lib/labs/members";
 import { getDb } from "@/lib/server/database";
@@ -34,32 +35,72 @@ describe("sign-in against the real database", () => {
     expect(unknown).toEqual({ kind: "invalid" });
   });
 
-  it("throttles an address after repeated failures, even with the right password", async () => {
+  it("counts parallel guesses one by one: of 12 at once, only the first 3 reach the password", async () => {
     const { members } = await createLabWithMembers(["admin", "researcher"]);
-    for (let i = 0; i < MAX_FAILURES; i += 1) {
-      expect(
-        (
-          await verifyCredentials(getDb(), {
-            email: members.researcher.email,
-            password: `wrong-${i}-password`,
-          })
-        ).kind,
-      ).toBe("invalid");
-    }
-    const blocked = await verifyCredentials(getDb(), {
-      email: members.researcher.email,
-      password: TEST_PASSWORD,
-    });
-    expect(blocked).toMatchObject({ kind: "throttled" });
-    // The window is 15 minutes from the oldest counted failure (lib/auth/throttle.ts).
-    expect((blocked as { retryAfterSeconds: number }).retryAfterSeconds).toBeGreaterThan(14 * 60);
-    expect((blocked as { retryAfterSeconds: number }).retryAfterSeconds).toBeLessThanOrEqual(
-      15 * 60,
+    const guesses = await Promise.all(
+      Array.from({ length: 12 }, (_, i) =>
+        verifyCredentials(
+          getDb(),
+          { email: members.researcher.email, password: `wrong-${i}-pw` },
+          "guesser",
+        ),
+      ),
     );
-    // Another member of the same lab is not affected.
+    expect(guesses.filter((g) => g.kind === "invalid")).toHaveLength(3);
+    expect(guesses.filter((g) => g.kind === "throttled")).toHaveLength(9);
+    const checked = await getDb()
+      .select()
+      .from(signInAttempts)
+      .where(eq(signInAttempts.email, members.researcher.email.toLowerCase()));
+    expect(checked).toHaveLength(3);
+    // The guesser's own next try must wait; the member on their own computer signs in at once.
     expect(
-      (await verifyCredentials(getDb(), { email: members.admin.email, password: TEST_PASSWORD }))
-        .kind,
+      (
+        await verifyCredentials(
+          getDb(),
+          { email: members.researcher.email, password: TEST_PASSWORD },
+          "guesser",
+        )
+      ).kind,
+    ).toBe("throttled");
+    expect(
+      (
+        await verifyCredentials(
+          getDb(),
+          { email: members.researcher.email, password: TEST_PASSWORD },
+          "member-laptop",
+        )
+      ).kind,
+    ).toBe("ok");
+  });
+
+  it("gives a guesser with many clients no lockout: the member waits at most 30 s", async () => {
+    const { members } = await createLabWithMembers(["admin", "researcher"]);
+    for (let i = 0; i < 20; i += 1) {
+      await verifyCredentials(
+        getDb(),
+        { email: members.researcher.email, password: `x-${i}-wrong` },
+        `bot-${i}`,
+      );
+    }
+    const slowed = await verifyCredentials(
+      getDb(),
+      { email: members.researcher.email, password: TEST_PASSWORD },
+      "member-laptop",
+    );
+    expect(slowed).toMatchObject({ kind: "throttled" });
+    expect((slowed as { retryAfterSeconds: number }).retryAfterSeconds).toBeLessThanOrEqual(30);
+    // Half a minute later the member is in (the guesses stopped).
+    const later = new Date(Date.now() + 31_000);
+    expect(
+      (
+        await verifyCredentials(
+          getDb(),
+          { email: members.researcher.email, password: TEST_PASSWORD },
+          "member-laptop",
+          later,
+        )
+      ).kind,
     ).toBe("ok");
   });
 
