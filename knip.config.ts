@@ -9,6 +9,9 @@ const config: KnipConfig = {
     "tests/support/reset-and-seed.ts",
     "tests/support/empty-module.ts",
     "vitest.e2e.config.mts",
+    // The finder bench runs in a child process (bench/finder.ts); the profiler is run by hand.
+    "bench/finder-run.ts",
+    "bench/finder-profile.ts",
     // The engine's public API (docs/architecture.md, "The computation contract").
     "lib/chem/index.ts",
     // The trace parser's public API, wired into the upload route and trace block by main.
@@ -21,8 +24,6 @@ const config: KnipConfig = {
     // that does not resolve against the rest of tiptap 3.31.
     "@tiptap/extension-bubble-menu",
     "@tiptap/extension-floating-menu",
-    // The load and finder benchmarks (bench/) are being written against it.
-    "autocannon",
   ],
 };
 

@@ -10,6 +10,7 @@ import { printEditorRecomputeBench } from "./editor-recompute";
 import { printSeawaterBench } from "./chem-seawater";
 import { printSweepBench } from "./chem-sweep";
 import { printTraceParseBench } from "./trace-parse";
+import { printFinderBench } from "./finder";
 
 console.log(
   `Node ${process.version}, ${os.cpus().length} CPU(s), load average ${os
@@ -26,6 +27,7 @@ const reports = [
   printSeawaterBench(),
   printSweepBench(),
   printTraceParseBench(),
+  printFinderBench(),
 ];
 
 const failed = reports.filter((r) => !r.pass).length;

@@ -12,6 +12,7 @@ import { EditorToolbar, type ToolbarPrompt } from "./toolbar/editor-toolbar";
 import { looksLikeExport } from "./attachments/looks-like-export";
 import { UploadPanel } from "./attachments/upload-panel";
 import { useUploads } from "./attachments/use-uploads";
+import { useBlockHighlight } from "./use-block-highlight";
 
 export interface NotebookEditorProps {
   /** The entry's tiptap JSON as saved (a revision's document). Read once, at mount. */
@@ -134,6 +135,8 @@ export function NotebookEditor({
   const uploads = useUploads(uploadEntryId ?? "", editor);
   const canUpload = Boolean(uploadEntryId) && editable;
   uploadRef.current = canUpload ? uploads.upload : null;
+
+  useBlockHighlight(editor !== null);
 
   return (
     <div

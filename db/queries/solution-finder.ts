@@ -1,60 +1,306 @@
-import { and, desc, eq, gte, isNull, lte, sql, type SQL } from "drizzle-orm";
+import { sql, type SQL } from "drizzle-orm";
 import type { Executor } from "../client";
-import { blockResults, entries, users } from "../schema";
+import { revisionMatches } from "./solution-finder-text";
 
-export interface SolutionFinderFilter {
+/**
+ * The solution finder's queries. Current solutions are the open block rows
+ * (`to_revision IS NULL`); with `includeHistory` the closed rows of earlier revisions are
+ * searched as well, through their own partial indexes, in a second branch of a UNION ALL so
+ * that neither branch can wander into the other's rows. Every branch has the lab id in its
+ * WHERE clause. Archived entries are left out by an anti-join over the small
+ * `entries_archived_idx`; entry-level filters (author, project, status, text) are
+ * semi-joins, so a range + species query reads nothing but one covering index
+ * (docs/architecture.md, "The solution finder").
+ */
+
+export interface FinderFilter {
   labId: string;
+  scale: "molal" | "molar";
   ionicStrengthMin?: number;
   ionicStrengthMax?: number;
+  /** Canonical formulas; "all" must all be present, "any" at least one. */
   species: string[];
+  speciesMatch: "all" | "any";
   temperatureMin?: number;
   temperatureMax?: number;
   solvent?: string;
+  modelUsed?: string;
   authorId?: string;
-  createdFrom?: Date;
-  createdTo?: Date;
-  limit: number;
+  projectId?: string;
+  status?: string;
+  /** Block rows written at or after this instant … */
+  savedFrom?: Date;
+  /** … and strictly before this one. */
+  savedBefore?: Date;
+  /** A prefix tsquery (prefixTsquery) over the entry's title and text. */
+  tsquery?: string;
+  includeHistory: boolean;
 }
 
-/** Solutions as they stand in each entry's current revision: the open block rows. */
-export async function findSolutions(db: Executor, f: SolutionFinderFilter) {
+type FinderSortColumn =
+  "saved" | "name" | "ionicStrength" | "debye" | "temperature" | "entry" | "author" | "status";
+
+export interface FinderSort {
+  column: FinderSortColumn;
+  direction: "asc" | "desc";
+}
+
+/** Sorts that need the entry (and its author) joined before ordering. */
+const ENTRY_SORTS = new Set<FinderSortColumn>(["entry", "author", "status"]);
+
+function ionicColumn(scale: FinderFilter["scale"]): SQL {
+  return sql.raw(scale === "molar" ? "b.ionic_strength_molar" : "b.ionic_strength_molal");
+}
+
+function sortExpression(f: FinderFilter, column: FinderSortColumn): SQL {
+  switch (column) {
+    case "saved":
+      return sql.raw("b.created_at");
+    case "name":
+      return sql.raw("lower(b.name)");
+    case "ionicStrength":
+      return ionicColumn(f.scale);
+    case "debye":
+      return sql.raw("b.debye_length_nm");
+    case "temperature":
+      return sql.raw("b.temperature_c");
+    case "entry":
+      return sql.raw("lower(e.title)");
+    case "author":
+      return sql.raw("lower(u.name)");
+    case "status":
+      return sql.raw("e.status");
+  }
+}
+
+/** The WHERE clause of one branch (open or closed rows) for the filter. */
+function conditions(f: FinderFilter, open: boolean): SQL {
   const where: SQL[] = [
-    eq(blockResults.labId, f.labId),
-    isNull(blockResults.toRevision),
-    isNull(entries.archivedAt),
+    sql`b.lab_id = ${f.labId}`,
+    open ? sql`b.to_revision is null` : sql`b.to_revision is not null`,
+    sql`not exists (select 1 from entries xa where xa.id = b.entry_id and xa.archived_at is not null)`,
   ];
-  if (f.ionicStrengthMin !== undefined)
-    where.push(gte(blockResults.ionicStrengthMolal, f.ionicStrengthMin));
-  if (f.ionicStrengthMax !== undefined)
-    where.push(lte(blockResults.ionicStrengthMolal, f.ionicStrengthMax));
-  if (f.species.length) where.push(sql`${blockResults.species} @> ${sql.param(f.species)}::text[]`);
-  if (f.temperatureMin !== undefined) where.push(gte(blockResults.temperatureC, f.temperatureMin));
-  if (f.temperatureMax !== undefined) where.push(lte(blockResults.temperatureC, f.temperatureMax));
-  if (f.solvent) where.push(eq(blockResults.solvent, f.solvent));
-  if (f.authorId) where.push(eq(entries.authorId, f.authorId));
-  if (f.createdFrom) where.push(gte(blockResults.createdAt, f.createdFrom));
-  if (f.createdTo) where.push(lte(blockResults.createdAt, f.createdTo));
-  return db
-    .select({
-      id: blockResults.id,
-      name: blockResults.name,
-      blockId: blockResults.blockId,
-      entryId: entries.id,
-      entryTitle: entries.title,
-      ionicStrengthMolal: blockResults.ionicStrengthMolal,
-      ionicStrengthMolar: blockResults.ionicStrengthMolar,
-      debyeLengthNm: blockResults.debyeLengthNm,
-      temperatureC: blockResults.temperatureC,
-      solvent: blockResults.solvent,
-      modelUsed: blockResults.modelUsed,
-      species: blockResults.species,
-      authorName: users.name,
-      createdAt: blockResults.createdAt,
-    })
-    .from(blockResults)
-    .innerJoin(entries, eq(entries.id, blockResults.entryId))
-    .innerJoin(users, eq(users.id, entries.authorId))
-    .where(and(...where))
-    .orderBy(desc(blockResults.createdAt))
-    .limit(f.limit);
+  const ionic = ionicColumn(f.scale);
+  if (f.ionicStrengthMin !== undefined) where.push(sql`${ionic} >= ${f.ionicStrengthMin}`);
+  if (f.ionicStrengthMax !== undefined) where.push(sql`${ionic} <= ${f.ionicStrengthMax}`);
+  if (f.species.length) {
+    const list = sql`${sql.param(f.species)}::text[]`;
+    where.push(f.speciesMatch === "all" ? sql`b.species @> ${list}` : sql`b.species && ${list}`);
+  }
+  if (f.temperatureMin !== undefined) where.push(sql`b.temperature_c >= ${f.temperatureMin}`);
+  if (f.temperatureMax !== undefined) where.push(sql`b.temperature_c <= ${f.temperatureMax}`);
+  if (f.solvent) where.push(sql`b.solvent = ${f.solvent}`);
+  if (f.modelUsed) where.push(sql`b.model_used = ${f.modelUsed}`);
+  if (f.savedFrom) where.push(sql`b.created_at >= ${f.savedFrom.toISOString()}::timestamptz`);
+  if (f.savedBefore) where.push(sql`b.created_at < ${f.savedBefore.toISOString()}::timestamptz`);
+  if (f.authorId || f.projectId || f.status) {
+    const entry: SQL[] = [sql`xe.lab_id = ${f.labId}`];
+    if (f.authorId) entry.push(sql`xe.author_id = ${f.authorId}`);
+    if (f.projectId) entry.push(sql`xe.project_id = ${f.projectId}`);
+    if (f.status) entry.push(sql`xe.status = ${f.status}`);
+    where.push(
+      sql`b.entry_id in (select xe.id from entries xe where ${sql.join(entry, sql` and `)})`,
+    );
+  }
+  if (f.tsquery) {
+    // Current solutions: the entry's current revision must match. The matching entries are
+    // collected first (an array, so the planner cannot turn it into a hash join over every
+    // entry of the lab) and their open rows read through block_results_current_entry_idx.
+    // History: a revision the row was shown in must match.
+    where.push(
+      open
+        ? sql`b.entry_id = any(array(select xr.entry_id from revisions xr join entries xc on xc.id = xr.entry_id and xc.current_revision_number = xr.number where xc.lab_id = ${f.labId} and ${revisionMatches("xr", f.tsquery)}))`
+        : sql`exists (select 1 from revisions xr where xr.entry_id = b.entry_id and xr.number >= b.from_revision and xr.number < b.to_revision and ${revisionMatches("xr", f.tsquery)})`,
+    );
+  }
+  return sql.join(where, sql` and `);
+}
+
+/** The rows a branch reads, with the entry and author joined only when the sort needs them. */
+function branchFrom(sort: FinderSort): SQL {
+  return ENTRY_SORTS.has(sort.column)
+    ? sql`block_results b join entries e on e.id = b.entry_id join users u on u.id = e.author_id`
+    : sql`block_results b`;
+}
+
+/** Sort columns that may be null (a block whose inputs the engine refused has no I). */
+const NULLABLE_SORTS = new Set<FinderSortColumn>(["ionicStrength", "debye"]);
+
+/**
+ * ORDER BY for a sort, ties broken by id. Nulls go last; "nulls last" is written only for
+ * columns that can be null, because on a NOT NULL column it would still stop PostgreSQL
+ * from reading an index backwards (newest first) in index order.
+ */
+function orderBy(f: FinderFilter, sort: FinderSort, prefix = ""): SQL {
+  const dir = sql.raw(sort.direction === "asc" ? "asc" : "desc");
+  const nulls = sql.raw(NULLABLE_SORTS.has(sort.column) ? " nulls last" : "");
+  const key = prefix ? sql.raw(`${prefix}k`) : sortExpression(f, sort.column);
+  const id = sql.raw(prefix ? `${prefix}id` : "b.id");
+  return sql`${key} ${dir}${nulls}, ${id} ${dir}`;
+}
+
+function branches(f: FinderFilter): boolean[] {
+  return f.includeHistory ? [true, false] : [true];
+}
+
+export interface FinderRow {
+  id: string;
+  entryId: string;
+  blockId: string;
+  fromRevision: number;
+  toRevision: number | null;
+  name: string;
+  ionicStrengthMolal: number | null;
+  ionicStrengthMolar: number | null;
+  debyeLengthNm: number | null;
+  temperatureC: number;
+  solvent: string;
+  modelUsed: string | null;
+  species: string[];
+  /** The block's components as typed: formula, amount, unit. */
+  components: unknown;
+  createdAt: Date;
+  entryTitle: string;
+  entryStatus: string;
+  authorName: string;
+  projectName: string;
+}
+
+const DETAIL_COLUMNS = sql`
+  b.id, b.entry_id as "entryId", b.block_id as "blockId", b.from_revision as "fromRevision",
+  b.to_revision as "toRevision", b.name, b.ionic_strength_molal as "ionicStrengthMolal",
+  b.ionic_strength_molar as "ionicStrengthMolar", b.debye_length_nm as "debyeLengthNm",
+  b.temperature_c as "temperatureC", b.solvent, b.model_used as "modelUsed", b.species,
+  r.inputs -> 'components' as components, b.created_at as "createdAt",
+  e.title as "entryTitle", e.status as "entryStatus",
+  u.name as "authorName", p.name as "projectName"`;
+
+const DETAIL_FROM = sql`
+  block_results b
+  join solution_results r on r.id = b.result_id
+  join entries e on e.id = b.entry_id
+  join users u on u.id = e.author_id
+  join projects p on p.id = e.project_id`;
+
+function rowOf(r: Record<string, unknown>): FinderRow {
+  return { ...(r as unknown as FinderRow), createdAt: new Date(r.createdAt as string) };
+}
+
+export interface FinderPage {
+  /** Matches counted, up to the cap (more than the cap is reported as capped). */
+  total: number;
+  capped: boolean;
+  rows: FinderRow[];
+}
+
+/**
+ * The finder's main statement: every match up to cap + 1 with its sort key, counted, and one
+ * page of them in order with what the table shows, in one round trip. Exported so that the
+ * plan tests EXPLAIN exactly what runs.
+ */
+export function solutionPageSql(
+  f: FinderFilter,
+  sort: FinderSort,
+  page: { limit: number; offset: number },
+  cap: number,
+): SQL {
+  const key = sortExpression(f, sort.column);
+  const union = sql.join(
+    branches(f).map(
+      (open) =>
+        sql`(select b.id, ${key} as k from ${branchFrom(sort)} where ${conditions(f, open)} limit ${cap + 1})`,
+    ),
+    sql` union all `,
+  );
+  return sql`
+    with m as materialized (select * from (${union}) u limit ${cap + 1}),
+         pg as materialized (select m.id, row_number() over (order by ${orderBy(f, sort, "m.")}) as n
+                               from m order by ${orderBy(f, sort, "m.")}
+                              limit ${page.limit} offset ${page.offset})
+    select (select count(*) from m)::int as total, d.*
+      from (select 1) one
+      left join lateral (
+        select ${DETAIL_COLUMNS}, pg.n from pg join ${DETAIL_FROM} on b.id = pg.id
+         where b.lab_id = ${f.labId}) d on true
+     order by d.n`;
+}
+
+/**
+ * One page of matches in the requested order, and how many match (counted up to `cap`):
+ * one statement (solutionPageSql) when there are at most `cap`; past that the page is read
+ * again in index order, the cheaper way for a broad search, and its rows fetched by id.
+ */
+export async function findSolutionPage(
+  db: Executor,
+  f: FinderFilter,
+  sort: FinderSort,
+  page: { limit: number; offset: number },
+  cap: number,
+): Promise<FinderPage> {
+  const first = await db.execute<Record<string, unknown> & { total: number }>(
+    solutionPageSql(f, sort, page, cap),
+  );
+  const total = first.rows[0]?.total ?? 0;
+  if (total <= cap) {
+    return { total, capped: false, rows: first.rows.filter((r) => r.id !== null).map(rowOf) };
+  }
+  const key = sortExpression(f, sort.column);
+  const reach = page.limit + page.offset;
+  const ordered = sql.join(
+    branches(f).map(
+      (open) =>
+        sql`(select b.id, ${key} as k from ${branchFrom(sort)} where ${conditions(f, open)} order by ${orderBy(f, sort)} limit ${reach})`,
+    ),
+    sql` union all `,
+  );
+  const second = await db.execute<{ id: string }>(sql`
+    select u.id from (${ordered}) u order by ${orderBy(f, sort, "u.")}
+     limit ${page.limit} offset ${page.offset}`);
+  const rows = await findSolutionRows(
+    db,
+    f.labId,
+    second.rows.map((r) => r.id),
+  );
+  return { total: cap, capped: true, rows };
+}
+
+/** What the table shows for the given block rows of the lab, in the order of `ids`. */
+export async function findSolutionRows(
+  db: Executor,
+  labId: string,
+  ids: string[],
+): Promise<FinderRow[]> {
+  if (!ids.length) return [];
+  const result = await db.execute<Record<string, unknown>>(sql`
+    select ${DETAIL_COLUMNS} from ${DETAIL_FROM}
+     where b.lab_id = ${labId} and b.id = any(${sql.param(ids)}::uuid[])`);
+  const byId = new Map(result.rows.map((r) => [r.id as string, rowOf(r)]));
+  return ids.flatMap((id) => byId.get(id) ?? []);
+}
+
+/**
+ * The next batch of the whole result set for the CSV export, newest first, after the keyset
+ * (created_at, id) of the previous batch: a stream of any length reads each row once.
+ */
+export async function findSolutionBatch(
+  db: Executor,
+  f: FinderFilter,
+  after: { savedKey: string; id: string } | null,
+  size: number,
+): Promise<(FinderRow & { savedKey: string })[]> {
+  const keyset = after
+    ? sql` and (b.created_at, b.id) < (${after.savedKey}::timestamptz, ${after.id}::uuid)`
+    : sql``;
+  const union = sql.join(
+    branches(f).map(
+      (open) =>
+        sql`(select ${DETAIL_COLUMNS}, b.created_at::text as "savedKey" from ${DETAIL_FROM} where ${conditions(f, open)}${keyset} order by b.created_at desc, b.id desc limit ${size})`,
+    ),
+    sql` union all `,
+  );
+  const result = await db.execute<Record<string, unknown> & { savedKey: string }>(
+    sql`select * from (${union}) u order by u."createdAt" desc, u.id desc limit ${size}`,
+  );
+  // savedKey: created_at at full precision (microseconds), the keyset of the next batch.
+  return result.rows.map((r) => ({ ...rowOf(r), savedKey: r.savedKey }));
 }

@@ -79,7 +79,12 @@ export const entries = pgTable(
     index("entries_lab_updated_idx").on(t.labId, t.updatedAt),
     index("entries_project_idx").on(t.projectId),
     index("entries_author_idx").on(t.authorId),
-    index("entries_title_fts_idx").using("gin", sql`to_tsvector('simple', ${t.title})`),
+    // The solution finder: its status filter, and archived entries (few) left out of every
+    // search by an anti-join over this small index.
+    index("entries_lab_status_idx").on(t.labId, t.status),
+    index("entries_archived_idx")
+      .on(t.id)
+      .where(sql`${t.archivedAt} is not null`),
     check("entries_status_valid", sql.raw(`status in ${sqlList(ENTRY_STATUSES)}`)),
     check("entries_title_not_blank", sql`length(trim(${t.title})) > 0`),
     check("entries_revision_number_nonnegative", sql`${t.currentRevisionNumber} >= 0`),
@@ -115,7 +120,12 @@ export const revisions = pgTable(
       "revisions_amendment_consistent",
       sql`(${t.amendsRevisionNumber} is null) = (${t.amendmentReason} is null)`,
     ),
-    index("revisions_text_fts_idx").using("gin", sql`to_tsvector('simple', ${t.contentText})`),
+    // Full-text search of title and text with English stemming; the solution finder writes
+    // the same expression (db/queries/solution-finder-text.ts) so the planner can use it.
+    index("revisions_search_idx").using(
+      "gin",
+      sql`to_tsvector('english', ${t.title} || ' ' || ${t.contentText})`,
+    ),
     check("revisions_number_positive", sql`${t.number} >= 1`),
     check("revisions_hash_format", sql`${t.contentHash} ~ '^[0-9a-f]{64}$'`),
   ],
@@ -211,19 +221,36 @@ export const blockResults = pgTable(
   (t) => [
     unique("block_results_entry_block_from_unique").on(t.entryId, t.blockId, t.fromRevision),
     index("block_results_entry_idx").on(t.entryId, t.fromRevision),
-    index("block_results_current_ionic_strength_idx")
-      .on(t.labId, t.ionicStrengthMolal)
-      .where(sql`${t.toRevision} is null`),
-    index("block_results_current_ionic_strength_molar_idx")
-      .on(t.labId, t.ionicStrengthMolar)
-      .where(sql`${t.toRevision} is null`),
+    // The finder's range scans on either ionic-strength scale use two covering partial
+    // indexes, block_results_current_molal_idx and block_results_current_molar_idx:
+    // (lab_id, ionic_strength_molal|molar) INCLUDE (species, entry_id, created_at, id)
+    // WHERE to_revision IS NULL. They are written in SQL in drizzle/0007_finder_search.sql
+    // because Drizzle cannot declare INCLUDE; a range + species query is answered from the
+    // index alone (docs/architecture.md, "The solution finder").
     index("block_results_current_species_idx")
       .using("gin", t.species)
+      .where(sql`${t.toRevision} is null`),
+    // An entry's current solutions: the save's open rows, and the finder's text search.
+    index("block_results_current_entry_idx")
+      .on(t.entryId)
       .where(sql`${t.toRevision} is null`),
     index("block_results_current_created_idx")
       .on(t.labId, t.createdAt)
       .where(sql`${t.toRevision} is null`),
-    index("block_results_lab_ionic_strength_idx").on(t.labId, t.ionicStrengthMolal),
+    // Closed rows (earlier revisions), searched only when the finder includes history; kept
+    // apart so that a search of current solutions never wanders into them.
+    index("block_results_closed_ionic_strength_idx")
+      .on(t.labId, t.ionicStrengthMolal)
+      .where(sql`${t.toRevision} is not null`),
+    index("block_results_closed_ionic_strength_molar_idx")
+      .on(t.labId, t.ionicStrengthMolar)
+      .where(sql`${t.toRevision} is not null`),
+    index("block_results_closed_species_idx")
+      .using("gin", t.species)
+      .where(sql`${t.toRevision} is not null`),
+    index("block_results_closed_created_idx")
+      .on(t.labId, t.createdAt)
+      .where(sql`${t.toRevision} is not null`),
     check("block_results_from_positive", sql`${t.fromRevision} >= 1`),
     check(
       "block_results_interval_valid",

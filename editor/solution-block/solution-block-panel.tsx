@@ -7,6 +7,7 @@ import { ComponentsTable, MAX_COMPONENT_ROWS } from "./components-table";
 import { evaluateSolutionBlockCached } from "@/lib/document/evaluate-solution-block";
 import { NO_MESSAGES, type FieldMessages } from "./field-messages";
 import { SolutionResults } from "./solution-results";
+import { SimilarLink } from "./similar-link";
 import { SolutionSettings } from "./solution-settings";
 import { StoredNotice } from "./stored-notice";
 import { useStoredSolution } from "../stored-results";
@@ -49,9 +50,10 @@ export function SolutionBlockPanel({ value, onChange, editable = true }: Solutio
 
   return (
     <section
+      id={value.blockId ? `block-${value.blockId}` : undefined}
       data-live-block="solution"
       aria-label={`Solution block ${value.name || "(unnamed)"}`}
-      className="my-4 rounded-lg border border-ink-faint/40 bg-white/70 shadow-sm"
+      className="my-4 scroll-mt-24 rounded-lg border border-ink-faint/40 bg-white/70 shadow-sm data-[highlighted=true]:ring-2 data-[highlighted=true]:ring-copper-500"
     >
       <header className="flex items-center gap-2 border-b border-ink-faint/30 bg-paper-deep/60 px-3 py-1.5">
         <span
@@ -81,6 +83,7 @@ export function SolutionBlockPanel({ value, onChange, editable = true }: Solutio
         >
           #{String(value.blockId ?? "").slice(0, 8)}
         </span>
+        <SimilarLink blockId={value.blockId} />
       </header>
       <div className="space-y-4 px-3 py-3">
         <SolutionSettings value={value} errors={errors} editable={editable} onChange={patch} />

@@ -1,25 +1,196 @@
 import "server-only";
-import { findSolutions } from "@/db/queries/solution-finder";
+import Papa from "papaparse";
+import {
+  findSolutionBatch,
+  findSolutionPage,
+  type FinderFilter,
+} from "@/db/queries/solution-finder";
+import { prefixTsquery } from "@/db/queries/solution-finder-text";
+import { toFound, type FoundSolution } from "@/lib/finder/found-solution";
+import { formulaAsText } from "@/lib/finder/formula-text";
+import { resolveSpeciesTerms } from "@/lib/finder/resolve-species";
+import { AppError } from "@/lib/errors";
 import { assertCan, type Actor } from "@/lib/rules/authorize";
 import { getDb } from "@/lib/server/database";
-import { solutionFinderQuerySchema } from "@/lib/validation/solution-finder";
+import {
+  FINDER_PAGE_SIZE,
+  solutionFinderQuerySchema,
+  type SolutionFinderQuery,
+} from "@/lib/validation/solution-finder";
 import { parseInput } from "@/lib/validation/parse";
 
-export async function searchSolutions(actor: Actor, rawQuery: unknown) {
+/**
+ * Matches are counted up to this many; past it the page says "more than 1 000" and pages on
+ * without a last page (counting a broad search to the end would cost more than the search).
+ */
+const FINDER_COUNT_CAP = 1_000;
+const DAY_MS = 86_400_000;
+const CSV_BATCH = 500;
+
+/** Validates a raw query (422 by field) and turns it into the database filter. */
+async function filterFor(
+  actor: Actor,
+  raw: unknown,
+): Promise<{ q: SolutionFinderQuery; filter: FinderFilter }> {
+  const q = parseInput(solutionFinderQuerySchema, raw);
+  const tsquery = q.q ? prefixTsquery(q.q) : null;
+  if (q.q && !tsquery) {
+    throw new AppError("invalid_input", "Some fields need attention.", {
+      fieldErrors: { q: ["Search for words: letters or digits."] },
+    });
+  }
+  const species = await resolveSpeciesTerms(getDb(), actor.labId, q.species);
+  return {
+    q,
+    filter: {
+      labId: actor.labId,
+      scale: q.scale,
+      ionicStrengthMin: q.iMin,
+      ionicStrengthMax: q.iMax,
+      species,
+      speciesMatch: q.match,
+      temperatureMin: q.tMin,
+      temperatureMax: q.tMax,
+      solvent: q.solvent,
+      modelUsed: q.model,
+      authorId: q.author === "me" ? actor.userId : q.author,
+      projectId: q.project,
+      status: q.status,
+      savedFrom: q.from ? new Date(`${q.from}T00:00:00Z`) : undefined,
+      // "until" is a whole day: rows before the next midnight (UTC).
+      savedBefore: q.to ? new Date(new Date(`${q.to}T00:00:00Z`).getTime() + DAY_MS) : undefined,
+      tsquery: tsquery ?? undefined,
+      includeHistory: q.history,
+    },
+  };
+}
+
+export interface SolutionSearchResult {
+  solutions: FoundSolution[];
+  /** Matches, counted up to FINDER_COUNT_CAP. */
+  total: number;
+  /** More matches than FINDER_COUNT_CAP: `pages` is then this page, plus one if it is full. */
+  capped: boolean;
+  page: number;
+  pages: number;
+  pageSize: number;
+  /** The species searched, as formulas (names resolved). */
+  species: string[];
+}
+
+/** One page of the lab's solutions under the query's filters and sort. */
+export async function searchSolutions(actor: Actor, raw: unknown): Promise<SolutionSearchResult> {
   assertCan(actor, "solution.search");
-  const q = parseInput(solutionFinderQuerySchema, rawQuery);
-  const rows = await findSolutions(getDb(), {
-    labId: actor.labId,
-    ionicStrengthMin: q.iMin,
-    ionicStrengthMax: q.iMax,
-    species: q.species,
-    temperatureMin: q.tMin,
-    temperatureMax: q.tMax,
-    solvent: q.solvent,
-    authorId: q.author === "me" ? actor.userId : undefined,
-    createdFrom: q.from,
-    createdTo: q.to,
-    limit: 200,
+  const { q, filter } = await filterFor(actor, raw);
+  const db = getDb();
+  const found = await findSolutionPage(
+    db,
+    filter,
+    { column: q.sort, direction: q.dir },
+    { limit: FINDER_PAGE_SIZE, offset: (q.page - 1) * FINDER_PAGE_SIZE },
+    FINDER_COUNT_CAP,
+  );
+  // Past the count cap the number of pages is unknown: a page is past the end when it is empty.
+  const pages = found.capped
+    ? Math.max(q.page + (found.rows.length === FINDER_PAGE_SIZE ? 1 : 0), 1)
+    : Math.max(1, Math.ceil(found.total / FINDER_PAGE_SIZE));
+  if (q.page > pages || (found.capped && found.rows.length === 0 && q.page > 1)) {
+    throw new AppError("invalid_input", "Some fields need attention.", {
+      fieldErrors: {
+        page: [
+          found.capped
+            ? `Page ${q.page} is past the end of this search.`
+            : `This search has ${pages === 1 ? "one page" : `${pages} pages`}; page ${q.page} is past the end.`,
+        ],
+      },
+    });
+  }
+  return {
+    solutions: found.rows.map(toFound),
+    total: found.total,
+    capped: found.capped,
+    page: q.page,
+    pages,
+    pageSize: FINDER_PAGE_SIZE,
+    species: filter.species,
+  };
+}
+
+const CSV_HEADER = [
+  "solution",
+  "composition",
+  "species",
+  "ionic_strength_mol_per_kg",
+  "ionic_strength_mol_per_l",
+  "debye_length_nm",
+  "temperature_c",
+  "solvent",
+  "model",
+  "entry",
+  "entry_status",
+  "project",
+  "author",
+  "saved_utc",
+  "revisions",
+  "link",
+];
+
+function csvCells(s: FoundSolution): (string | number)[] {
+  return [
+    s.name,
+    s.composition,
+    s.species.map(formulaAsText).join(" "),
+    s.ionicStrengthMolal ?? "",
+    s.ionicStrengthMolar ?? "",
+    s.debyeLengthNm ?? "",
+    s.temperatureC,
+    s.solvent,
+    s.modelUsed ?? "",
+    s.entryTitle,
+    s.entryStatus,
+    s.projectName,
+    s.authorName,
+    s.savedAt,
+    s.toRevision === null ? `${s.fromRevision}–` : `${s.fromRevision}–${s.toRevision - 1}`,
+    s.href,
+  ];
+}
+
+/**
+ * Every match as CSV, newest first, streamed in batches of 500 read by keyset (never built in
+ * memory). The query is validated and its species resolved before the first byte, so a bad
+ * query is still a 422; cells that a spreadsheet would run as a formula are escaped.
+ */
+export async function solutionsCsvStream(
+  actor: Actor,
+  raw: unknown,
+): Promise<ReadableStream<Uint8Array>> {
+  assertCan(actor, "solution.search");
+  const { filter } = await filterFor(actor, raw);
+  const encoder = new TextEncoder();
+  let after: { savedKey: string; id: string } | null = null;
+  let headerSent = false;
+  return new ReadableStream<Uint8Array>({
+    async pull(controller) {
+      if (!headerSent) {
+        headerSent = true;
+        controller.enqueue(
+          encoder.encode(`${Papa.unparse([CSV_HEADER], { newline: "\r\n" })}\r\n`),
+        );
+        return;
+      }
+      const batch = await findSolutionBatch(getDb(), filter, after, CSV_BATCH);
+      if (batch.length === 0) {
+        controller.close();
+        return;
+      }
+      const last = batch[batch.length - 1];
+      after = { savedKey: last.savedKey, id: last.id };
+      const csv = Papa.unparse(
+        batch.map((r) => csvCells(toFound(r))),
+        { newline: "\r\n", escapeFormulae: true },
+      );
+      controller.enqueue(encoder.encode(`${csv}\r\n`));
+    },
   });
-  return rows.map((r) => ({ ...r, createdAt: r.createdAt.toISOString() }));
 }

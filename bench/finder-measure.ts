@@ -1,0 +1,103 @@
+/** Timing helpers for the finder bench: percentiles of sequential runs, and autocannon. */
+// @ts-expect-error -- autocannon ships no type declarations; the little used here is typed below.
+import autocannonUntyped from "autocannon";
+
+export interface Percentiles {
+  p50: number;
+  p95: number;
+  runs: number;
+}
+
+function percentile(sorted: number[], p: number): number {
+  return sorted[Math.min(sorted.length - 1, Math.floor((p / 100) * sorted.length))];
+}
+
+/** Runs `once` `warmup` times unmeasured, then `runs` times one after another (ms). */
+export async function timeRuns(
+  once: () => Promise<unknown>,
+  runs = 200,
+  warmup = 20,
+): Promise<Percentiles> {
+  for (let i = 0; i < warmup; i++) await once();
+  const times: number[] = [];
+  for (let i = 0; i < runs; i++) {
+    const started = performance.now();
+    await once();
+    times.push(performance.now() - started);
+  }
+  times.sort((a, b) => a - b);
+  return { p50: percentile(times, 50), p95: percentile(times, 95), runs };
+}
+
+/**
+ * Two things measured in alternation, `runs` times each after a warm-up: on a shared machine a
+ * burst of load then slows both alike, so their ratio stays meaningful.
+ */
+export async function timePairs(
+  first: () => Promise<unknown>,
+  second: () => Promise<unknown>,
+  runs = 300,
+  warmup = 20,
+): Promise<[Percentiles, Percentiles]> {
+  for (let i = 0; i < warmup; i++) {
+    await first();
+    await second();
+  }
+  const a: number[] = [];
+  const b: number[] = [];
+  for (let i = 0; i < runs; i++) {
+    let started = performance.now();
+    await first();
+    a.push(performance.now() - started);
+    started = performance.now();
+    await second();
+    b.push(performance.now() - started);
+  }
+  const summary = (times: number[]): Percentiles => {
+    times.sort((x, y) => x - y);
+    return { p50: percentile(times, 50), p95: percentile(times, 95), runs };
+  };
+  return [summary(a), summary(b)];
+}
+
+/** A GET that must answer 200 (a bench of error pages would measure nothing). */
+export async function getOk(url: string, cookie: string): Promise<void> {
+  const response = await fetch(url, { headers: { cookie } });
+  await response.arrayBuffer();
+  if (response.status !== 200) throw new Error(`${url} answered ${response.status}`);
+}
+
+interface AutocannonResult {
+  requests: { average: number; total: number };
+  non2xx: number;
+  errors: number;
+}
+type Autocannon = (options: {
+  url: string;
+  connections: number;
+  duration: number;
+  headers?: Record<string, string>;
+}) => Promise<AutocannonResult>;
+
+const autocannon = autocannonUntyped as Autocannon;
+
+/** Requests per second at `connections` concurrent clients for `seconds`, all answered 200. */
+export async function requestsPerSecond(
+  url: string,
+  cookie: string | null,
+  connections = 4,
+  seconds = 8,
+): Promise<number> {
+  const result = await autocannon({
+    url,
+    connections,
+    duration: seconds,
+    headers: cookie ? { cookie } : undefined,
+  });
+  if (result.non2xx || result.errors) {
+    throw new Error(`${url}: ${result.non2xx} answers other than 2xx, ${result.errors} errors`);
+  }
+  return result.requests.total / seconds;
+}
+
+export const ms = (x: number) => `${x.toFixed(1)} ms`;
