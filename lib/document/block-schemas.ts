@@ -1,4 +1,4 @@
-import { z } from "zod";
+import { z } from "@/lib/validation/zod";
 
 /**
  * Input schemas of the two live blocks. The node views and the server share these, so the

@@ -1,5 +1,5 @@
 import "server-only";
-import { z } from "zod";
+import { z } from "@/lib/validation/zod";
 import { getEnv } from "@/lib/env";
 
 const caughtMessageSchema = z.object({

@@ -1,4 +1,4 @@
-import { z } from "zod";
+import { z } from "@/lib/validation/zod";
 import { ROLES } from "@/db/schema/enums";
 
 /** Shared by the sign-in form, the server action and the credentials provider. */

@@ -1,4 +1,4 @@
-import { z } from "zod";
+import { z } from "@/lib/validation/zod";
 import { ENTRY_STATUSES } from "@/db/schema/enums";
 
 const entryTitleSchema = z

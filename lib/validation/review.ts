@@ -1,4 +1,4 @@
-import { z } from "zod";
+import { z } from "@/lib/validation/zod";
 import { SIGNATURE_MEANINGS } from "@/lib/contract/vocabulary";
 
 const revisionNumber = z.coerce

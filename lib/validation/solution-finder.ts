@@ -1,4 +1,4 @@
-import { z } from "zod";
+import { z } from "@/lib/validation/zod";
 import { ENTRY_STATUSES } from "@/lib/contract/vocabulary";
 
 /**

@@ -1,4 +1,4 @@
-import { z } from "zod";
+import { z } from "@/lib/validation/zod";
 
 const entry = z.strictObject({
   column: z.union([z.string().trim().min(1).max(200), z.number().int().min(0).max(10_000)]),

@@ -91,13 +91,17 @@ describe("the finder's plans at 24 000 current solutions", () => {
     }
     // As autovacuum would: statistics, and a visibility map for index-only scans. A first
     // VACUUM right after the load may leave pages not yet all-visible; repeat until it has.
+    // Other test files write to the same table while this one runs, so the last few pages
+    // may be dirtied again at any moment: 97 % all-visible is what the plans below need (the
+    // synthetic lab alone fills several hundred pages), not the whole table.
     let visible = false;
     for (let attempt = 0; attempt < 20 && !visible; attempt++) {
       if (attempt) await new Promise((r) => setTimeout(r, 250)); // an autovacuum may be busy
       await getDb().execute(sql`vacuum (freeze, analyze, disable_page_skipping) block_results`);
       await getDb().execute(sql`vacuum (analyze) entries`);
       const map = await getDb().execute<{ done: boolean }>(sql`
-        select relallvisible >= relpages as done from pg_class where relname = 'block_results'`);
+        select relallvisible >= 0.97 * relpages as done
+          from pg_class where relname = 'block_results'`);
       visible = map.rows[0].done;
     }
     const holders = await getDb().execute<{ query: string; state: string }>(sql`
