@@ -21,6 +21,7 @@ interface CaughtMessage {
   text: string;
   html: string | null;
   receivedAt: string;
+  labId: string | null;
 }
 
 function arg(name: string, fallback: string): string {
@@ -49,6 +50,10 @@ function persist() {
   renameSync(tmp, storeFile); // atomic: a crash never leaves half a file
 }
 
+function headerText(value: unknown): string | null {
+  return typeof value === "string" && value ? value : null;
+}
+
 function addressList(value: unknown): string[] {
   if (!value) return [];
   const list = Array.isArray(value) ? value : [value];
@@ -70,6 +75,9 @@ const smtp = new SMTPServer({
           from: addressList(parsed.from)[0] ?? "",
           to: addressList(parsed.to),
           subject: parsed.subject ?? "",
+          // Which lab the mail concerns (set by lib/mail/transport.ts): the app shows an
+          // admin only their own lab's messages.
+          labId: headerText(parsed.headers.get("x-ionleaf-lab")),
           text: parsed.text ?? "",
           html: typeof parsed.html === "string" ? parsed.html : null,
           receivedAt: new Date().toISOString(),

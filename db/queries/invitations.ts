@@ -61,15 +61,30 @@ export async function listOpenInvitations(db: Executor, labId: string) {
     .orderBy(desc(invitations.createdAt));
 }
 
+/** Withdraws an invitation that is still open; false when it was used or withdrawn already. */
 export async function revokeInvitation(db: Executor, labId: string, id: string) {
   const rows = await db
     .update(invitations)
     .set({ revokedAt: new Date() })
     .where(
-      and(eq(invitations.labId, labId), eq(invitations.id, id), isNull(invitations.acceptedAt)),
+      and(
+        eq(invitations.labId, labId),
+        eq(invitations.id, id),
+        isNull(invitations.acceptedAt),
+        isNull(invitations.revokedAt),
+      ),
     )
     .returning({ id: invitations.id });
   return rows.length === 1;
+}
+
+export async function findInvitationInLab(db: Executor, labId: string, id: string) {
+  const rows = await db
+    .select()
+    .from(invitations)
+    .where(and(eq(invitations.labId, labId), eq(invitations.id, id)))
+    .limit(1);
+  return rows[0] ?? null;
 }
 
 /** A new invitation replaces any open one for the same address in the lab. */

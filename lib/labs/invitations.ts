@@ -2,6 +2,7 @@ import "server-only";
 import { insertAuditEvent } from "@/db/queries/audit";
 import {
   findInvitationByTokenHash,
+  findInvitationInLab,
   insertInvitation,
   markInvitationAccepted,
   revokeInvitation,
@@ -15,7 +16,7 @@ import { hashPassword } from "@/lib/auth/password";
 import { getEnv } from "@/lib/env";
 import { AppError } from "@/lib/errors";
 import { sendMail } from "@/lib/mail/transport";
-import { invitationMail } from "@/lib/mail/templates";
+import { alreadyRegisteredMail, invitationMail } from "@/lib/mail/templates";
 import { getDb } from "@/lib/server/database";
 import { acceptInvitationSchema, inviteMemberSchema } from "@/lib/validation/auth";
 import { parseInput } from "@/lib/validation/parse";
@@ -23,7 +24,12 @@ import { hashLinkToken, newLinkToken } from "./tokens";
 
 const INVITATION_LIFETIME_MS = 7 * 24 * 60 * 60 * 1000;
 
-/** Invites a person by e-mail; the link goes only into the mail, its hash into the database. */
+/**
+ * Invites a person by e-mail; the link goes only into the mail, its hash into the database.
+ * An address that already has an account in another lab gets the same answer on screen (the
+ * admin must not learn who is a member elsewhere) and a notice by mail instead of a link;
+ * the open invitation it leaves can never be accepted and expires like any other.
+ */
 export async function inviteMember(
   actor: Actor,
   raw: unknown,
@@ -31,9 +37,10 @@ export async function inviteMember(
   assertCan(actor, "lab.manage");
   const { email, role } = parseInput(inviteMemberSchema, raw);
   const db = getDb();
-  if (await findUserByEmail(db, email)) {
-    throw new AppError("conflict", "Someone with that e-mail already has an Ionleaf account.", {
-      fieldErrors: { email: ["Already has an account."] },
+  const existing = await findUserByEmail(db, email);
+  if (existing?.labId === actor.labId) {
+    throw new AppError("conflict", "That person is already a member of this lab.", {
+      fieldErrors: { email: ["Already a member of this lab."] },
     });
   }
   const lab = await findLabById(db, actor.labId);
@@ -65,7 +72,10 @@ export async function inviteMember(
   // Sent after the commit: a mail for an invitation that was rolled back would be a dead link.
   await sendMail({
     to: email,
-    ...invitationMail({ labName: lab.name, inviterName: actor.name, role, link, expiresAt }),
+    labId: actor.labId,
+    ...(existing
+      ? alreadyRegisteredMail({ labName: lab.name, inviterName: actor.name })
+      : invitationMail({ labName: lab.name, inviterName: actor.name, role, link, expiresAt })),
   });
   return { invitationId: invitation.id, link };
 }
@@ -101,6 +111,13 @@ export async function acceptInvitation(raw: unknown): Promise<{ userId: string; 
   const input = parseInput(acceptInvitationSchema, raw);
   const state = await inspectInvitation(input.token);
   if (state.kind !== "open") throw new AppError("gone", invitationStateMessage(state.kind));
+  // The link alone is not enough: whoever follows it must also know the address it was sent
+  // to, so a forwarded or leaked link does not make an account for someone else.
+  if (state.email.toLowerCase() !== input.email.toLowerCase()) {
+    throw new AppError("invalid_input", "Check the e-mail address.", {
+      fieldErrors: { email: ["This invitation was sent to a different address."] },
+    });
+  }
   const passwordHash = await hashPassword(input.password);
   const db = getDb();
   return db.transaction(async (tx) => {
@@ -136,7 +153,16 @@ export async function acceptInvitation(raw: unknown): Promise<{ userId: string; 
 export async function withdrawInvitation(actor: Actor, invitationId: string): Promise<void> {
   assertCan(actor, "lab.manage");
   const done = await revokeInvitation(getDb(), actor.labId, invitationId);
-  if (!done) throw new AppError("not_found", "That invitation is not open.");
+  if (!done) {
+    const found = await findInvitationInLab(getDb(), actor.labId, invitationId);
+    if (!found) throw new AppError("not_found", "Invitation not found.");
+    throw new AppError(
+      "conflict",
+      found.acceptedAt
+        ? "That invitation was already accepted."
+        : "That invitation was already withdrawn.",
+    );
+  }
   await insertAuditEvent(getDb(), {
     labId: actor.labId,
     actorId: actor.userId,

@@ -10,6 +10,7 @@ const caughtMessageSchema = z.object({
   text: z.string(),
   html: z.string().nullable(),
   receivedAt: z.string(),
+  labId: z.string().nullable().optional(),
 });
 export type CaughtMessage = z.infer<typeof caughtMessageSchema>;
 
@@ -18,10 +19,16 @@ export function mailCatcherConfigured(): boolean {
   return Boolean(getEnv().MAIL_CATCHER_URL);
 }
 
-export async function listCaughtMessages(): Promise<CaughtMessage[]> {
+/**
+ * The caught messages that concern one lab. The catcher holds every lab's mail (invitation
+ * links among them), so an admin sees only the messages tagged with their own lab; untagged
+ * ones (none are sent today) are shown to nobody.
+ */
+export async function listCaughtMessages(labId: string): Promise<CaughtMessage[]> {
   const base = getEnv().MAIL_CATCHER_URL;
   if (!base) return [];
   const response = await fetch(new URL("/messages", base), { cache: "no-store" });
   if (!response.ok) throw new Error(`mail catcher answered ${response.status}`);
-  return z.array(caughtMessageSchema).parse(await response.json());
+  const all = z.array(caughtMessageSchema).parse(await response.json());
+  return all.filter((m) => m.labId === labId);
 }

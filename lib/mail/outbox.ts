@@ -51,7 +51,7 @@ async function sendDue(now: Date): Promise<{ sent: number; failed: number }> {
   await getDb().transaction(async (tx) => {
     for (const mail of await claimDueMails(tx, now, 20, MAX_SEND_ATTEMPTS)) {
       try {
-        await sendMail({ to: mail.to, subject: mail.subject, text: mail.text });
+        await sendMail({ to: mail.to, labId: mail.labId, subject: mail.subject, text: mail.text });
         await markMailSent(tx, mail.id);
         sent += 1;
       } catch (error) {

@@ -20,6 +20,22 @@ export function invitationMail(input: {
   return { subject: `Join ${input.labName} on Ionleaf`, text };
 }
 
+/**
+ * Sent instead of an invitation when the address already has an account in another lab, so
+ * the inviting admin learns nothing about other labs' members and the owner of the address
+ * learns what happened. It carries no link: one account belongs to one lab.
+ */
+export function alreadyRegisteredMail(input: { labName: string; inviterName: string }) {
+  const text = [
+    `${input.inviterName} tried to invite this address to ${input.labName} on Ionleaf.`,
+    "",
+    "This address already has an Ionleaf account in another lab, and an account belongs to",
+    "one lab, so no invitation link was made. If you want to join, ask them to invite another",
+    "address of yours; if you did not expect this, ignore it.",
+  ].join("\n");
+  return { subject: `An invitation to ${input.labName} on Ionleaf`, text };
+}
+
 const entryLink = (appUrl: string, path: string) => new URL(path, appUrl).toString();
 
 export function reviewRequestedMail(input: {

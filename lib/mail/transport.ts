@@ -19,13 +19,21 @@ function getTransport(): Transporter {
   return transporter;
 }
 
+const LAB_HEADER = "X-Ionleaf-Lab";
+
 export interface OutgoingMail {
   to: string;
+  /** The lab the mail concerns: sent as a header so the local catcher's inbox can be scoped. */
+  labId: string | null;
   subject: string;
   text: string;
   html?: string;
 }
 
-export async function sendMail(mail: OutgoingMail): Promise<void> {
-  await getTransport().sendMail({ from: getEnv().MAIL_FROM, ...mail });
+export async function sendMail({ labId, ...mail }: OutgoingMail): Promise<void> {
+  await getTransport().sendMail({
+    from: getEnv().MAIL_FROM,
+    ...mail,
+    headers: labId ? { [LAB_HEADER]: labId } : {},
+  });
 }

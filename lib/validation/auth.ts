@@ -36,6 +36,7 @@ export const inviteMemberSchema = z.object({
 export const acceptInvitationSchema = z
   .object({
     token: z.string().min(20, "This invitation link is incomplete.").max(200),
+    email: emailSchema,
     name: z
       .string()
       .trim()

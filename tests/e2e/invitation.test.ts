@@ -3,6 +3,7 @@ import { DEMO_LABS, DEMO_PASSWORD } from "@/lib/demo/scenario";
 import { BASE_URL, openBrowser, useBrowser, signIn } from "../support/e2e-browser";
 
 const admin = DEMO_LABS[1].members.find((m) => m.role === "admin")!;
+const otherLabAdmin = DEMO_LABS[0].members.find((m) => m.role === "admin")!;
 
 describe("inviting a member through the mail catcher", () => {
   const browser = useBrowser();
@@ -28,17 +29,37 @@ describe("inviting a member through the mail catcher", () => {
     expect(link).toBeDefined();
     await page.close();
 
+    // The other lab's admin reads the same catcher but never sees this lab's mail.
+    const other = await openBrowser();
+    const otherPage = await other.context.newPage();
+    await signIn(otherPage, otherLabAdmin.email, DEMO_PASSWORD);
+    await otherPage.getByTestId("current-user").waitFor();
+    await otherPage.goto(`${BASE_URL}/lab/mail`);
+    await otherPage.getByRole("heading", { name: "Mail catcher" }).waitFor();
+    expect(await otherPage.getByText(email).count()).toBe(0);
+    expect(await otherPage.getByText(/\/invitations\/[A-Za-z0-9_-]{20,}/).count()).toBe(0);
+    await other.close();
+
     // The invitee is another person with another browser.
     const invitee = await openBrowser();
     const page2 = await invitee.context.newPage();
     await page2.goto(link!);
     await page2.getByRole("heading", { name: /Join Ridgeback Battery Cells Lab/ }).waitFor();
+    // The page does not say whom the link was for; the one who follows it must know.
+    expect(await page2.getByText(email).count()).toBe(0);
+    await page2.getByLabel("E-mail").fill("someone.else@ridgeback.example");
     await page2.getByLabel("Your name").fill("Newcomer E2E");
     await page2.getByLabel("Choose a password").fill("short");
     await page2.getByLabel("Repeat the password").fill("short");
     await page2.getByRole("button", { name: "Join the lab" }).click();
     await page2.getByText("Use at least 10 characters.").waitFor(); // field error from the shared schema
 
+    await page2.getByLabel("Choose a password").fill("lithium-foil-88");
+    await page2.getByLabel("Repeat the password").fill("lithium-foil-88");
+    await page2.getByRole("button", { name: "Join the lab" }).click();
+    await page2.getByText("This invitation was sent to a different address.").waitFor();
+
+    await page2.getByLabel("E-mail").fill(email.toUpperCase());
     await page2.getByLabel("Choose a password").fill("lithium-foil-88");
     await page2.getByLabel("Repeat the password").fill("lithium-foil-88");
     await page2.getByRole("button", { name: "Join the lab" }).click();

@@ -15,7 +15,7 @@ export default async function MailCatcherPage() {
   let messages: Awaited<ReturnType<typeof listCaughtMessages>> = [];
   let unreachable = false;
   try {
-    messages = await listCaughtMessages();
+    messages = await listCaughtMessages(actor.labId);
   } catch {
     unreachable = true;
   }
@@ -24,8 +24,8 @@ export default async function MailCatcherPage() {
       <div>
         <h1 className="text-2xl font-semibold tracking-tight">Mail catcher</h1>
         <p className="text-sm text-ink-soft">
-          Messages Ionleaf sent while mail goes to the local catcher. Nothing here left this
-          machine.
+          Messages Ionleaf sent about this lab while mail goes to the local catcher. Nothing here
+          left this machine.
         </p>
       </div>
       {unreachable ? (

@@ -6,16 +6,29 @@ import { SubmitButton } from "@/components/ui/submit-button";
 import { initialActionState } from "@/lib/contract/action-state";
 import { acceptInvitationAction } from "./actions";
 
-export function AcceptInvitationForm({ token, email }: { token: string; email: string }) {
+export function AcceptInvitationForm({ token }: { token: string }) {
   const [state, formAction] = useActionState(acceptInvitationAction, initialActionState);
   return (
     <form action={formAction} className="space-y-4" noValidate>
       <input type="hidden" name="token" value={token} />
       <FormMessage message={state.message} />
-      <div className="space-y-1.5">
-        <p className="label">E-mail</p>
-        <p className="rounded-md bg-paper-deep px-3 py-2 text-sm">{email}</p>
-      </div>
+      <Field
+        id="email"
+        label="E-mail"
+        hint="The address this invitation was sent to."
+        errors={state.fieldErrors?.email}
+      >
+        {(aria) => (
+          <input
+            {...aria}
+            name="email"
+            type="email"
+            autoComplete="email"
+            className="input"
+            defaultValue={state.values?.email ?? ""}
+          />
+        )}
+      </Field>
       <Field id="name" label="Your name" errors={state.fieldErrors?.name}>
         {(aria) => (
           <input

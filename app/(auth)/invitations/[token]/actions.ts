@@ -12,7 +12,7 @@ export async function acceptInvitationAction(
     async (values) => {
       await acceptInvitation(values);
     },
-    (values) => ({ name: values.name ?? "" }),
+    (values) => ({ name: values.name ?? "", email: values.email ?? "" }),
   );
   if (state.ok) redirect("/sign-in?joined=1");
   return state;

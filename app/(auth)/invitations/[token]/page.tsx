@@ -23,9 +23,10 @@ export default async function InvitationPage({ params }: { params: Promise<{ tok
     <section className="card p-7">
       <h1 className="text-lg font-semibold">Join {state.labName}</h1>
       <p className="mt-1 mb-6 text-sm text-ink-soft">
-        You were invited as a <strong>{state.role}</strong>. Choose a password to finish.
+        You were invited as a <strong>{state.role}</strong>. Confirm the address the invitation was
+        sent to and choose a password to finish.
       </p>
-      <AcceptInvitationForm token={token} email={state.email} />
+      <AcceptInvitationForm token={token} />
     </section>
   );
 }
