@@ -38,6 +38,7 @@ export function EntryWorkspace(props: EntryWorkspaceProps) {
         title: draft.title,
         content: draft.content,
         unsaved: true,
+        unanswered: draft.unanswered,
       });
     } else {
       setStart({

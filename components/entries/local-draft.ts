@@ -7,6 +7,18 @@ export interface LocalDraft {
   title: string;
   content: unknown;
   keptAt: string;
+  /** Saves sent on this base whose answer never came (see UnansweredSaves). */
+  unanswered?: UnansweredSaves;
+}
+
+/**
+ * Saves sent against `base` whose answer was lost (network error or 5xx): the server may have
+ * committed one of them as revision base + 1 before it went away. `hashes` are their content
+ * hashes, newest last, so a later 409 can tell "my own save" from "someone else's".
+ */
+export interface UnansweredSaves {
+  base: number;
+  hashes: string[];
 }
 
 const key = (entryId: string) => `ionleaf:entry-draft:${entryId}`;

@@ -1,7 +1,9 @@
 "use client";
 import { useCallback, useEffect, useRef, useState } from "react";
+import { canonicalHash } from "@/lib/document/canonical-hash";
+import { safeParseEntryDocument } from "@/lib/document/document-schema";
 import { ApiError, apiFetch } from "@/lib/ui/api-client";
-import { clearLocalDraft, writeLocalDraft } from "./local-draft";
+import { clearLocalDraft, writeLocalDraft, type UnansweredSaves } from "./local-draft";
 
 type SaveStatus = "saved" | "unsaved" | "saving" | "offline" | "conflict" | "refused";
 
@@ -21,10 +23,19 @@ export interface AutosaveStart {
   content: unknown;
   /** True when the content came back from this browser and is not on the server yet. */
   unsaved: boolean;
+  /** Saves on this base that were sent but never answered (kept with the local copy). */
+  unanswered?: UnansweredSaves;
 }
 
 const DEBOUNCE_MS = 1200;
 const RETRY_MS = 5000;
+const MAX_UNANSWERED = 20;
+
+/** The content hash the server would record for this save (as lib/document/prepare-revision). */
+function saveHash(title: string, content: unknown): string | null {
+  const parsed = safeParseEntryDocument(content);
+  return parsed.success ? canonicalHash({ title: title.trim(), content: parsed.data }) : null;
+}
 
 /**
  * Debounced autosave against the revision the editor started from. The newest edit always
@@ -43,6 +54,17 @@ export function useAutosave(entryId: string, start: AutosaveStart) {
   const dirty = useRef(start.unsaved);
   // While a conflict waits for the user's choice, autosave holds back (no PUT every 1.2 s).
   const inConflict = useRef(false);
+  // A save whose answer was lost may still have been committed (the server died between the
+  // commit and the reply). A later 409 naming exactly base + 1 with one of these hashes is
+  // that save, not someone else's: the editor adopts it instead of asking the user.
+  const unanswered = useRef<UnansweredSaves | null>(start.unanswered ?? null);
+  const keepLocal = useCallback(() => {
+    writeLocalDraft(entryId, {
+      baseRevision: base.current,
+      ...latest.current,
+      unanswered: unanswered.current ?? undefined,
+    });
+  }, [entryId]);
 
   const save = useCallback(
     async (force = false) => {
@@ -53,6 +75,7 @@ export function useAutosave(entryId: string, start: AutosaveStart) {
       inFlight.current = true;
       dirty.current = false;
       const sent = latest.current;
+      const sentBase = base.current;
       setState((s) => ({ ...s, status: "saving", message: undefined, choiceFailed: undefined }));
       let retryIn: number | null = null;
       try {
@@ -65,8 +88,8 @@ export function useAutosave(entryId: string, start: AutosaveStart) {
           }),
         });
         base.current = result.revision;
-        if (dirty.current)
-          writeLocalDraft(entryId, { baseRevision: base.current, ...latest.current });
+        unanswered.current = null;
+        if (dirty.current) keepLocal();
         else clearLocalDraft(entryId);
         setState({ status: dirty.current ? "unsaved" : "saved", revision: result.revision });
         if (dirty.current) retryIn = DEBOUNCE_MS;
@@ -76,10 +99,33 @@ export function useAutosave(entryId: string, start: AutosaveStart) {
           error instanceof ApiError
             ? error
             : new ApiError(0, "offline", "The server cannot be reached.");
-        if (e.status === 409 && e.details && "currentRevision" in e.details) {
+        const lost = unanswered.current;
+        if (
+          e.status === 409 &&
+          lost !== null &&
+          e.details?.currentRevision === lost.base + 1 &&
+          typeof e.details.currentContentHash === "string" &&
+          lost.hashes.includes(e.details.currentContentHash)
+        ) {
+          // Our own save, committed before the server went away: build on it and save again.
+          base.current = lost.base + 1;
+          unanswered.current = null;
+          keepLocal();
+          setState({ status: "unsaved", revision: base.current });
+          retryIn = 0;
+        } else if (e.status === 409 && e.details && "currentRevision" in e.details) {
           inConflict.current = true;
           setState((s) => ({ ...s, status: "conflict", message: e.message }));
         } else if (e.status === 0 || e.status >= 500) {
+          const hash = saveHash(sent.title, sent.content);
+          if (hash !== null) {
+            const kept = unanswered.current?.base === sentBase ? unanswered.current.hashes : [];
+            unanswered.current = {
+              base: sentBase,
+              hashes: [...kept.filter((h) => h !== hash), hash].slice(-MAX_UNANSWERED),
+            };
+            keepLocal();
+          }
           setState((s) => ({ ...s, status: "offline", message: e.message }));
           retryIn = RETRY_MS;
         } else {
@@ -93,14 +139,14 @@ export function useAutosave(entryId: string, start: AutosaveStart) {
       }
       if (retryIn !== null) timer.current = setTimeout(() => void save(), retryIn);
     },
-    [entryId],
+    [entryId, keepLocal],
   );
 
   const change = useCallback(
     (next: { title?: string; content?: unknown }) => {
       latest.current = { ...latest.current, ...next };
       dirty.current = true;
-      writeLocalDraft(entryId, { baseRevision: base.current, ...latest.current });
+      keepLocal();
       // Same object when nothing changes, so a keystroke does not re-render the page.
       setState((s) =>
         s.status === "conflict" || s.status === "unsaved" ? s : { ...s, status: "unsaved" },
@@ -108,7 +154,7 @@ export function useAutosave(entryId: string, start: AutosaveStart) {
       if (timer.current) clearTimeout(timer.current);
       timer.current = setTimeout(() => void save(), DEBOUNCE_MS);
     },
-    [entryId, save],
+    [keepLocal, save],
   );
 
   /** After a 409: put my version on top of the newer revision (it becomes the next revision). */

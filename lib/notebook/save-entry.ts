@@ -31,8 +31,18 @@ export async function saveEntryContent(
   return getDb().transaction(async (tx) => {
     const entry = await loadEntryFor(tx, actor, entryId, "edit", { forUpdate: true });
     if (entry.currentRevisionNumber !== input.baseRevision) {
+      // The current revision's hash lets an editor whose earlier save was committed but never
+      // answered (the server died before replying) recognise that revision as its own.
+      const current =
+        entry.currentRevisionNumber > 0
+          ? await findRevision(tx, entry.id, entry.currentRevisionNumber)
+          : null;
       throw new AppError("conflict", "This entry was saved elsewhere since you opened it.", {
-        details: { currentRevision: entry.currentRevisionNumber, baseRevision: input.baseRevision },
+        details: {
+          currentRevision: entry.currentRevisionNumber,
+          baseRevision: input.baseRevision,
+          currentContentHash: current?.revision.contentHash ?? null,
+        },
       });
     }
     if (entry.currentRevisionNumber > 0) {
