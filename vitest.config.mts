@@ -3,7 +3,8 @@ import react from "@vitejs/plugin-react";
 import { fileURLToPath } from "node:url";
 
 // Unit, component and integration tests. End-to-end tests have their own config
-// (vitest.e2e.config.mts) because they need a built, running app.
+// (vitest.e2e.config.mts) because they need a built, running app; so does the crash-safety
+// test (vitest.reliability.config.mts, `npm run test:crash`), which starts its own.
 export default defineConfig({
   plugins: [react()],
   resolve: {
@@ -16,7 +17,7 @@ export default defineConfig({
   test: {
     environment: "jsdom",
     include: ["tests/**/*.test.{ts,tsx}"],
-    exclude: ["tests/e2e/**", "node_modules/**"],
+    exclude: ["tests/e2e/**", "tests/reliability/**", "node_modules/**"],
     setupFiles: ["./tests/setup.ts"],
     // Integration tests share one database: run files one at a time, tests in order.
     fileParallelism: false,

@@ -1,18 +1,19 @@
 /**
  * The production build of Ionleaf against the scratch benchmark database, for the finder
- * bench: built once per version of the app's sources into `.next-test` (the folder `npm test` builds into, so no
- * other build is touched), started with `next start`, and a member signed in through
+ * and load benches: built once per version of the app's sources into `.next-test`
+ * (scripts/support/production-build.ts), started with `next start`, and a member signed in through
  * Auth.js's own credentials endpoint, as a browser would.
  */
-import { execFileSync, spawn, type ChildProcess } from "node:child_process";
-import { createHash } from "node:crypto";
-import { existsSync, lstatSync, readFileSync, writeFileSync } from "node:fs";
+import { spawn, type ChildProcess } from "node:child_process";
 import { createServer, type Server } from "node:http";
 import path from "node:path";
+import {
+  ensureBuild as ensureProductionBuild,
+  PRODUCTION_DIST,
+} from "@/scripts/support/production-build";
 
 const ROOT = new URL("..", import.meta.url).pathname;
-const DIST = ".next-test";
-const STAMP = path.join(ROOT, DIST, "IONLEAF_BENCH_COMMIT");
+const DIST = PRODUCTION_DIST;
 
 const BENCH_AUTH_SECRET = "bench-secret-not-for-production-0123456789abcdef";
 
@@ -31,61 +32,9 @@ function appEnv(databaseUrl: string, port: number): NodeJS.ProcessEnv {
   };
 }
 
-/** What the build is made of: the committed tree of these paths, or "uncommitted". */
-const BUILD_INPUTS = [
-  "app",
-  "lib",
-  "db",
-  "components",
-  "editor",
-  "proxy.ts",
-  "next.config.mjs",
-  "package-lock.json",
-];
-
-function currentCommit(): string {
-  const tree = execFileSync("git", ["ls-tree", "HEAD", "--", ...BUILD_INPUTS], {
-    cwd: ROOT,
-    encoding: "utf8",
-  });
-  const dirty = execFileSync("git", ["status", "--porcelain", "--", ...BUILD_INPUTS], {
-    cwd: ROOT,
-    encoding: "utf8",
-  }).trim();
-  const id = createHash("sha256").update(tree).digest("hex");
-  return dirty ? `${id}+uncommitted` : id;
-}
-
 /** Builds the app unless this commit's build is already there (an uncommitted tree always builds). */
 export function ensureBuild(databaseUrl: string): void {
-  const commit = currentCommit();
-  if (
-    !commit.endsWith("+uncommitted") &&
-    existsSync(STAMP) &&
-    readFileSync(STAMP, "utf8") === commit
-  ) {
-    console.log(`production build of ${commit.slice(0, 10)} found in ${DIST}`);
-    return;
-  }
-  console.log(
-    `building the app for ${commit.slice(0, 10)} (next build into ${DIST}; a few minutes)`,
-  );
-  const started = performance.now();
-  // Turbopack refuses a node_modules that is a link to outside the project (a git worktree
-  // sharing another checkout's packages); webpack builds the same app from it.
-  const linked = lstatSync(path.join(ROOT, "node_modules")).isSymbolicLink();
-  const args = [
-    path.join(ROOT, "node_modules/next/dist/bin/next"),
-    "build",
-    ...(linked ? ["--webpack"] : []),
-  ];
-  execFileSync(process.execPath, args, {
-    cwd: ROOT,
-    env: appEnv(databaseUrl, 0),
-    stdio: ["ignore", "ignore", "inherit"],
-  });
-  writeFileSync(STAMP, commit);
-  console.log(`built in ${((performance.now() - started) / 1000).toFixed(0)} s`);
+  ensureProductionBuild(appEnv(databaseUrl, 0));
 }
 
 export interface RunningApp {

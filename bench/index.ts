@@ -11,6 +11,7 @@ import { printSeawaterBench } from "./chem-seawater";
 import { printSweepBench } from "./chem-sweep";
 import { printTraceParseBench } from "./trace-parse";
 import { printFinderBench } from "./finder";
+import { printLoadBench } from "./load";
 
 console.log(
   `Node ${process.version}, ${os.cpus().length} CPU(s), load average ${os
@@ -28,6 +29,7 @@ const reports = [
   printSweepBench(),
   printTraceParseBench(),
   printFinderBench(),
+  printLoadBench(),
 ];
 
 const failed = reports.filter((r) => !r.pass).length;

@@ -99,7 +99,7 @@ describe("entries, revisions and server-computed solutions", () => {
       title: "Two tabs",
       content: docWith(paragraph("tab A")),
     });
-    await saveEntryContent(researcher, id, {
+    const second = await saveEntryContent(researcher, id, {
       baseRevision: 1,
       title: "Two tabs",
       content: docWith(paragraph("tab A again")),
@@ -112,7 +112,11 @@ describe("entries, revisions and server-computed solutions", () => {
       }),
     );
     expect(conflict.status).toBe(409);
-    expect(conflict.details).toMatchObject({ currentRevision: 2 });
+    // The current revision's hash lets an editor whose answer was lost recognise its own save.
+    expect(conflict.details).toMatchObject({
+      currentRevision: 2,
+      currentContentHash: second.contentHash,
+    });
     expect((await getCurrentContent(researcher, id)).content).toEqual(
       docWith(paragraph("tab A again")),
     );
