@@ -9,7 +9,6 @@ const config: KnipConfig = {
     "tests/support/reset-and-seed.ts",
     "tests/support/empty-module.ts",
     "vitest.e2e.config.mts",
-    "vitest.reliability.config.mts",
     // The finder and load benches run in child processes (bench/finder.ts, bench/load.ts); the
     // profiler is run by hand.
     "bench/finder-run.ts",
