@@ -2,7 +2,7 @@ import { defineConfig } from "vitest/config";
 import { fileURLToPath } from "node:url";
 
 // `npm run test:crash`: the crash-safety test (tests/reliability), which provisions its own
-// durable PostgreSQL cluster and production server and kills them. Minutes long, so it is not
+// durable PostgreSQL cluster and production server and kills them. About ten minutes, so it is not
 // part of `npm test`.
 export default defineConfig({
   resolve: {
