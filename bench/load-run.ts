@@ -34,6 +34,8 @@ const MEMBERS = 50;
 const SECOND_TABS = 10;
 const APP_PORT = Number(process.env.IONLEAF_LOAD_APP_PORT ?? 3470);
 const PASSWORD = "load-bench-password-5";
+/** A request without an answer after this long counts as a timeout (autocannon's default). */
+const TIMEOUT_S = 10;
 
 interface RequestSpec {
   method: "GET" | "PUT";
@@ -96,6 +98,12 @@ function parseDuration(): number {
 
 async function main() {
   const duration = parseDuration();
+  console.log(
+    `load average at the start ${os
+      .loadavg()
+      .map((l) => l.toFixed(2))
+      .join(" ")}`,
+  );
   const scratch = ensureScratchDatabase("ionleaf_load");
   await runMigrations(scratch.url);
   ensureBuild(scratch.url);
@@ -168,7 +176,7 @@ async function main() {
           url: app.url,
           connections: 1,
           duration: baselineSeconds,
-          timeout: 10,
+          timeout: TIMEOUT_S,
           headers: { cookie: c.cookie },
           requests: [timed(ping, { method: "GET", path: "/api/ping" })],
         }),
@@ -233,7 +241,7 @@ async function main() {
           url: app.url,
           connections: 1,
           duration,
-          timeout: 10,
+          timeout: TIMEOUT_S,
           headers: { cookie: c.cookie },
           requests: [timed(saves, save), timed(searches, search)],
         });
@@ -281,8 +289,9 @@ async function main() {
       saves.count(409) +
       (searches.total - searches.count(200)) +
       (ping.total - ping.count(200));
-    const errors = sum(mixed, (r) => r.errors) + sum(baseline, (r) => r.errors);
+    // autocannon counts a timeout as an error too; the two are reported apart.
     const timeouts = sum(mixed, (r) => r.timeouts) + sum(baseline, (r) => r.timeouts);
+    const errors = sum(mixed, (r) => r.errors) + sum(baseline, (r) => r.errors) - timeouts;
     const pingRps = ping.total / baselineSeconds;
     const mixedRps = (saves.total + searches.total) / duration;
     const ms = (x: number) => `${x.toFixed(0)} ms`;
@@ -299,10 +308,11 @@ async function main() {
       `  searches: ${searches.total} (${searches.describe()}), p50 ${ms(searches.percentile(50))}, p95 ${ms(searches.percentile(95))} (${(searches.percentile(95) / ping.percentile(95)).toFixed(1)}× the baseline's p95)`,
     );
     console.log(
-      `  expected 409s (stale base from the other tab): ${saves.count(409)}; unexpected answers: ${unexpected}; connection errors: ${errors}; timeouts: ${timeouts}`,
+      `  expected 409s (stale base from the other tab): ${saves.count(409)}; unexpected answers: ${unexpected}; connection errors: ${errors}; timeouts (no answer within ${TIMEOUT_S} s): ${timeouts}`,
     );
     console.log(
-      `  database: ${stored} revisions in ${rows.rows.length} entries, ${answered.length} answered 200; entries with a gap: ${gaps}; answered but lost: ${lost}; answered twice: ${duplicated}`,
+      `  database: ${stored} revisions in ${rows.rows.length} entries, ${answered.length} answered 200 ` +
+        `(${stored - answered.length} committed after their client had given up); entries with a gap: ${gaps}; answered but lost: ${lost}; answered twice: ${duplicated}`,
     );
     console.log(
       `load average now ${os
