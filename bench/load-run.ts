@@ -111,7 +111,7 @@ async function main() {
   const tag = Date.now().toString(36);
   const lab = await insertLab(db, { name: `Load lab ${tag}`, slug: `load-${tag}` });
   const hash = await hashPassword(PASSWORD);
-  const members = [];
+  const members: { id: string; email: string; name: string }[] = [];
   for (let i = 0; i < MEMBERS; i++)
     members.push(
       await insertUser(db, {
@@ -134,18 +134,20 @@ async function main() {
     // Sign in once each, and each member creates an entry through the API.
     const clients: Client[] = [];
     const signInStarted = performance.now();
-    for (const member of members) {
+    const openSession = async (member: (typeof members)[number]): Promise<Client> => {
       const cookie = await signIn(app.url, member.email, PASSWORD);
       const created = await fetch(`${app.url}/api/entries`, {
         method: "POST",
         headers: { cookie, "content-type": "application/json" },
         body: JSON.stringify({ projectId: project.id, title: `Load ${member.name}` }),
       });
-      if (created.status !== 201 && created.status !== 200)
-        throw new Error(`creating an entry answered ${created.status}`);
+      if (created.status !== 201) throw new Error(`creating an entry answered ${created.status}`);
       const { id } = (await created.json()) as { id: string };
-      clients.push({ cookie, entryId: id });
-    }
+      return { cookie, entryId: id };
+    };
+    // Five at a time: each sign-in verifies an argon2id hash.
+    for (let i = 0; i < members.length; i += 5)
+      clients.push(...(await Promise.all(members.slice(i, i + 5).map(openSession))));
     for (let i = 0; i < SECOND_TABS; i++) clients.push({ ...clients[i] });
     console.log(
       `${MEMBERS} members signed in and created their entries in ${((performance.now() - signInStarted) / 1000).toFixed(1)} s; ${clients.length} clients (${SECOND_TABS} members with a second tab)`,
