@@ -314,7 +314,7 @@ async function main() {
     );
     console.log(
       `  database: ${stored} revisions in ${rows.rows.length} entries, ${answered.length} answered 200 ` +
-        `(${stored - answered.length} committed after their client had given up); entries with a gap: ${gaps}; answered but lost: ${lost}; answered twice: ${duplicated}`,
+        `(${stored - answered.length} committed without an answer recorded: in flight when the run ended, or timed out); entries with a gap: ${gaps}; answered but lost: ${lost}; answered twice: ${duplicated}`,
     );
     console.log(
       `load average now ${os

@@ -18,7 +18,9 @@ async function main() {
   const databaseUrl = takeOption(argv, "--database-url") ?? installationDatabaseUrl();
   const uploadDir = path.resolve(takeOption(argv, "--upload-dir") ?? installationUploadDir());
   if (argv.length > 1 || argv[0]?.startsWith("--"))
-    throw new Error("usage: npm run backup -- [folder] [--database-url URL] [--upload-dir DIR]");
+    throw new Error(
+      "usage: npm run backup -- [folder] [--database-url OWNER_URL] [--upload-dir DIR]",
+    );
   const outDir = path.resolve(argv[0] ?? path.join(ROOT, ".data/backups"));
   const result = await createBackup({ databaseUrl, uploadDir, outDir });
   console.log(

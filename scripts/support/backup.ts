@@ -14,7 +14,8 @@ import { createHash } from "node:crypto";
 import { createReadStream, existsSync, readdirSync } from "node:fs";
 import { copyFile, mkdir, readFile, readdir, rename, rm, stat, writeFile } from "node:fs/promises";
 import path from "node:path";
-import { Client } from "pg";
+import { Client, Pool } from "pg";
+import { grantAppRolePrivileges } from "@/db/app-role-privileges";
 
 export const MANIFEST_NAME = "manifest.json";
 const DUMP_NAME = "database.dump";
@@ -249,9 +250,12 @@ export interface RestoreResult {
  */
 export async function restoreBackup(options: {
   folder: string;
+  /** The owner of the tables to be (migrations' DATABASE_OWNER_URL): restoring is DDL. */
   databaseUrl: string;
   uploadDir: string;
   force?: boolean;
+  /** The role the app serves as, granted its privileges again (db/app-role-privileges.ts). */
+  appRole?: string;
 }): Promise<RestoreResult> {
   const started = performance.now();
   const { folder, force = false } = options;
@@ -281,6 +285,16 @@ export async function restoreBackup(options: {
     `--dbname=${options.databaseUrl}`,
     path.join(folder, manifest.database.path),
   ]);
+  // The dump's grants are left out (the roles may differ here); the app role gets exactly its
+  // privileges again, as `npm run db:migrate` gives them.
+  if (options.appRole) {
+    const pool = new Pool({ connectionString: options.databaseUrl, max: 1 });
+    try {
+      await grantAppRolePrivileges(pool, options.appRole);
+    } finally {
+      await pool.end();
+    }
+  }
 
   let skipped = 0;
   for (const f of manifest.files) {

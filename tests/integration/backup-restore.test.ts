@@ -25,7 +25,10 @@ import { createLabWithMembers } from "../support/db";
 // A backup taken with `npm run backup`'s code, restored into a brand-new database and upload
 // folder, must hold every row of every table and every file byte for byte; a backup altered
 // afterwards must be refused before anything is touched.
-const sourceUrl = process.env.DATABASE_URL!;
+// Backups and restores run as the owner of the tables; the app's role owns nothing.
+const sourceUrl = process.env.DATABASE_OWNER_URL ?? process.env.DATABASE_URL!;
+const appUrl = process.env.DATABASE_URL!;
+const appRole = decodeURIComponent(new URL(appUrl).username);
 const superuserUrl = process.env.TEST_SUPERUSER_URL;
 const uploadDir = process.env.UPLOAD_DIR!;
 const suffix = `${process.pid}`;
@@ -178,6 +181,7 @@ describe("backup and restore", () => {
       folder: backup.folder,
       databaseUrl: target,
       uploadDir: restoredUploads,
+      appRole,
     });
     expect(result.files).toBe(backup.manifest.files.length);
     const [before, after] = await Promise.all([fingerprint(sourceUrl), fingerprint(target)]);
@@ -189,6 +193,14 @@ describe("backup and restore", () => {
       ]),
     );
     expect(revisions.rows.map((r) => r.number)).toEqual([1, 2]);
+    // The app's role has its privileges again, and still no more than them.
+    const asApp = appUrl.replace(/\/[^/?]+(\?|$)/, `/${databases[0]}$1`);
+    await withClient(asApp, async (c) => {
+      const r = await c.query("select count(*) from revisions where entry_id = $1", [entryId]);
+      expect(Number(r.rows[0].count)).toBe(2);
+      if (appRole !== decodeURIComponent(new URL(sourceUrl).username))
+        await expect(c.query("delete from revisions")).rejects.toThrow(/permission denied/);
+    });
     expect(await fileHashes(restoredUploads)).toEqual(await fileHashes(uploadDir));
 
     // A second restore into the now filled database is refused, unless forced.
