@@ -165,3 +165,42 @@ export function dilutionComponents(
     notes,
   };
 }
+
+interface JsonNode {
+  type?: unknown;
+  attrs?: Record<string, unknown>;
+  content?: unknown;
+}
+
+/**
+ * A copy of the document in which one solution block uses a stock at another revision: the
+ * only change "use the newer revision of this stock" makes. Returns how many references moved
+ * (0 when the block does not use that stock).
+ */
+export function moveStockRevision(
+  doc: unknown,
+  target: { blockId: string; parentEntryId: string; parentBlockId: string; toRevision: number },
+): { content: unknown; moved: number } {
+  const content = structuredClone(doc);
+  let moved = 0;
+  const stack: unknown[] = [content];
+  while (stack.length > 0) {
+    const node = stack.pop() as JsonNode | null | undefined;
+    if (!node || typeof node !== "object") continue;
+    if (node.type === "solutionBlock" && node.attrs?.blockId === target.blockId) {
+      const dilution = node.attrs.dilution as DilutionInput | null | undefined;
+      for (const ref of dilution?.stocks ?? []) {
+        if (
+          ref.entryId === target.parentEntryId &&
+          ref.blockId === target.parentBlockId &&
+          ref.revision !== target.toRevision
+        ) {
+          ref.revision = target.toRevision;
+          moved += 1;
+        }
+      }
+    }
+    if (Array.isArray(node.content)) stack.push(...(node.content as unknown[]));
+  }
+  return { content, moved };
+}
