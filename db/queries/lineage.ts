@@ -95,6 +95,9 @@ export async function listStockUses(db: Executor, labId: string) {
       parentCurrentRevision: parentEntries.currentRevisionNumber,
       stockName: parentResults.name,
       stockSpecies: parentResults.species,
+      stockHazards: sql<string[]>`coalesce(${parentResults.results} -> 'hazards', '[]'::jsonb)`.as(
+        "stock_hazards",
+      ),
       madeById: parentRevisions.authorId,
       madeByName: users.name,
       madeAt: parentRevisions.createdAt,

@@ -53,6 +53,8 @@ export async function listLabStocks(actor: Actor) {
       href: string;
       name: string;
       species: string[];
+      /** The engine's hazard notes for the stock's species (lib/chem's hazard table). */
+      hazards: string[];
       currentRevision: number;
       made: { revision: number; byName: string; at: string; href: string }[];
       uses: {
@@ -79,6 +81,7 @@ export async function listLabStocks(actor: Actor) {
         href: `/entries/${r.parentEntryId}#block-${encodeURIComponent(r.parentBlockId)}`,
         name: r.stockName,
         species: r.stockSpecies,
+        hazards: Array.isArray(r.stockHazards) ? r.stockHazards : [],
         currentRevision: r.parentCurrentRevision,
         made: [],
         uses: [],
