@@ -204,3 +204,28 @@ export function moveStockRevision(
   }
   return { content, moved };
 }
+
+/**
+ * The stock compositions a stored result was computed with, read back from its arithmetic
+ * (`results.dilution.lines`), so a saved revision shows its own numbers without asking anyone.
+ */
+export function stockLookupsFromStored(
+  dilution: DilutionInput | null | undefined,
+  results: Record<string, unknown>,
+): Map<string, StockLookup> {
+  const lookups = new Map<string, StockLookup>();
+  if (!hasStocks(dilution)) return lookups;
+  const stored = results.dilution as { lines?: DilutionLine[] } | undefined;
+  const lines = Array.isArray(stored?.lines) ? stored.lines : [];
+  for (const [i, ref] of dilution.stocks.entries()) {
+    const components = lines
+      .filter((l) => l.stockIndex === i)
+      .map((l) => ({ formula: l.formula, molarity: l.stockMolarity }));
+    if (components.length === 0) continue;
+    lookups.set(stockKey(ref), {
+      status: "ok",
+      stock: { ...ref, name: "", entryTitle: "", solvent: "", temperatureC: 25, components },
+    });
+  }
+  return lookups;
+}
