@@ -85,7 +85,8 @@ export interface BenchReport {
 
 function runEditorRecomputeBench(rounds = 40): BenchReport {
   // Warm-up: the JIT and lib/chem's species caches, as after the first render of an entry.
-  for (let r = 0; r < 20; r++) typicalEntryBlocks(50, -r - 1).forEach((b) => evaluateSolutionBlock(b));
+  for (let r = 0; r < 20; r++)
+    typicalEntryBlocks(50, -r - 1).forEach((b) => evaluateSolutionBlock(b));
 
   const cold: number[] = [];
   const coldCpu: number[] = [];

@@ -19,6 +19,8 @@ import { StockPicker } from "./stock-picker";
 import { stockUrl } from "./use-stock-lookups";
 
 const UNIT_OPTIONS = VOLUME_UNITS.map((u) => ({ value: u, label: u }));
+/** A volume as measured: up to four significant digits, no padding ("10 mL", "99.82 mL"). */
+const volumeText = (ml: number) => `${Number(ml.toPrecision(4))} mL`;
 const EMPTY_DILUTION: DilutionInput = { stocks: [], finalVolume: null, finalVolumeUnit: "mL" };
 
 /**
@@ -225,9 +227,8 @@ export function StocksSection({
         <ul className="font-mono text-xs text-ink-soft" aria-label="Dilution arithmetic">
           {lines.map((l, i) => (
             <li key={i}>
-              {l.formula}: {formatSignificant(l.stockMolarity)} mol/L ×{" "}
-              {formatSignificant(l.volumeMl)} mL / {formatSignificant(l.finalVolumeMl)} mL ={" "}
-              {formatSignificant(l.molarity)} mol/L
+              {l.formula}: {formatSignificant(l.stockMolarity)} mol/L × {volumeText(l.volumeMl)} /{" "}
+              {volumeText(l.finalVolumeMl)} = {formatSignificant(l.molarity)} mol/L
             </li>
           ))}
         </ul>

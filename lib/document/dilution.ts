@@ -34,7 +34,7 @@ export type StockLookup =
 export type StockLookups = ReadonlyMap<string, StockLookup>;
 
 /** One line of the arithmetic, for the block: c₁ → c₂ of each component of each stock. */
-export interface DilutionLine {
+interface DilutionLine {
   stockIndex: number;
   formula: string;
   stockMolarity: number;

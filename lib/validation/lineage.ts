@@ -37,4 +37,3 @@ export const updateStockSchema = z.object({
     .optional()
     .transform((r) => (r ? r : undefined)),
 });
-export type UpdateStockInput = z.infer<typeof updateStockSchema>;
