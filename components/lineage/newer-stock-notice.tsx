@@ -100,7 +100,9 @@ function NoticeItem({
         {item.removed
           ? `Revision ${item.currentRevision} of that entry no longer has this solution.`
           : `The stock changed in revision ${item.changedInRevision ?? item.currentRevision}; its entry is now at revision ${item.currentRevision}.`}
-        {item.amendmentReason ? ` Amendment: “${item.amendmentReason}”.` : null}{" "}
+        {item.amendmentReason
+          ? ` Amendment: “${item.amendmentReason}”${/[.!?]$/.test(item.amendmentReason) ? "" : "."}`
+          : null}{" "}
         <Link className="font-medium text-copper-700 underline" href={item.diffHref}>
           See what changed
         </Link>

@@ -1,6 +1,5 @@
 "use client";
 
-import { useQueryClient } from "@tanstack/react-query";
 import { useState } from "react";
 import {
   VOLUME_UNITS,
@@ -16,7 +15,7 @@ import { NumberField } from "../ui/number-field";
 import { SelectField } from "../ui/select-field";
 import type { FieldMessages } from "./field-messages";
 import { StockPicker } from "./stock-picker";
-import { stockUrl } from "./use-stock-lookups";
+import { rememberStock, stockUrl } from "./use-stock-lookups";
 
 const UNIT_OPTIONS = VOLUME_UNITS.map((u) => ({ value: u, label: u }));
 /** A volume as measured: up to four significant digits, no padding ("10 mL", "99.82 mL"). */
@@ -45,7 +44,6 @@ export function StocksSection({
 }) {
   const [picking, setPicking] = useState(false);
   const [pickError, setPickError] = useState<string | null>(null);
-  const queryClient = useQueryClient();
   const dilution = value.dilution ?? null;
   const setDilution = (next: DilutionInput | null) => onChange({ dilution: next });
 
@@ -84,7 +82,7 @@ export function StocksSection({
         volume: null,
         volumeUnit: "mL",
       };
-      queryClient.setQueryData(["stock", ref.entryId, ref.blockId, ref.revision], lookup);
+      rememberStock(lookup);
       setDilution({ ...dilution!, stocks: [...dilution!.stocks, ref] });
       setPicking(false);
     } catch (error) {

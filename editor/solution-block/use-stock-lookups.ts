@@ -1,7 +1,6 @@
 "use client";
 
-import { useQueries } from "@tanstack/react-query";
-import { useMemo } from "react";
+import { useEffect, useMemo, useState } from "react";
 import type { DilutionInput, StockRef } from "@/lib/document/block-schemas";
 import { hasStocks, stockKey, type StockLookup, type StockLookups } from "@/lib/document/dilution";
 import { apiFetch } from "@/lib/ui/api-client";
@@ -13,29 +12,57 @@ export function stockUrl(ref: Pick<StockRef, "entryId" | "blockId"> & { revision
   return `/api/solutions/stock?${params.toString()}`;
 }
 
-const NO_REFS: StockRef[] = [];
-
-/**
- * The stored composition of each stock a block names, fetched once per reference (a saved
- * revision never changes, so the answer is kept for good).
+/*
+ * A saved revision's stored composition never changes, so an answer is kept for the life of
+ * the page; a failure is shown but not kept (the next block that names the stock asks again).
  */
+const answers = new Map<string, StockLookup>();
+const failures = new Map<string, StockLookup>();
+const pending = new Set<string>();
+const listeners = new Set<() => void>();
+
+function load(ref: StockRef) {
+  const key = stockKey(ref);
+  if (answers.has(key) || pending.has(key)) return;
+  pending.add(key);
+  failures.delete(key);
+  apiFetch<StockLookup>(stockUrl(ref))
+    .then(
+      (lookup) => void answers.set(key, lookup),
+      (error: Error) => void failures.set(key, { status: "unavailable", message: error.message }),
+    )
+    .finally(() => {
+      pending.delete(key);
+      listeners.forEach((notify) => notify());
+    });
+}
+
+/** Keeps a composition the picker already fetched, so the block needs no second request. */
+export function rememberStock(lookup: StockLookup) {
+  if (lookup.status === "ok") answers.set(stockKey(lookup.stock), lookup);
+}
+
+/** The stored composition of each stock a block names, fetched once per reference. */
 export function useStockLookups(dilution: DilutionInput | null | undefined): StockLookups {
-  const refs = hasStocks(dilution) ? dilution.stocks : NO_REFS;
-  const results = useQueries({
-    queries: refs.map((ref) => ({
-      queryKey: ["stock", ref.entryId, ref.blockId, ref.revision],
-      queryFn: () => apiFetch<StockLookup>(stockUrl(ref)),
-      staleTime: Infinity,
-      retry: false,
-    })),
-  });
-  const entries: [string, StockLookup][] = refs.map((ref, i) => {
-    const q = results[i];
-    if (q?.data) return [stockKey(ref), q.data];
-    if (q?.error) return [stockKey(ref), { status: "unavailable", message: q.error.message }];
-    return [stockKey(ref), { status: "loading" }];
-  });
-  const signature = JSON.stringify(entries);
-  // eslint-disable-next-line react-hooks/exhaustive-deps -- keyed by content, not identity
-  return useMemo(() => new Map(entries), [signature]);
+  const [version, setVersion] = useState(0);
+  useEffect(() => {
+    const notify = () => setVersion((v) => v + 1);
+    listeners.add(notify);
+    return () => void listeners.delete(notify);
+  }, []);
+  const refs = useMemo(() => (hasStocks(dilution) ? dilution.stocks : []), [dilution]);
+  const signature = refs.map(stockKey).join("|");
+  useEffect(() => refs.forEach(load), [refs]);
+  return useMemo(
+    () =>
+      new Map(
+        refs.map((ref): [string, StockLookup] => {
+          const key = stockKey(ref);
+          return [key, answers.get(key) ?? failures.get(key) ?? { status: "loading" }];
+        }),
+      ),
+    // version: an answer arrived; signature: the references changed.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+    [signature, version],
+  );
 }

@@ -17,6 +17,7 @@ import {
   updateStock,
 } from "@/lib/notebook/lineage/stocks";
 import { countersignEntry, startAmendment, submitEntry } from "@/lib/notebook/review";
+import { getRevisionComparison } from "@/lib/notebook/review-view";
 import { getCurrentContent } from "@/lib/notebook/revisions";
 import { saveEntryContent } from "@/lib/notebook/save-entry";
 import { getDb } from "@/lib/server/database";
@@ -231,6 +232,12 @@ describe("stocks and lineage", () => {
         diffHref: `/entries/${stockEntry}/revisions/compare?from=1&to=2`,
       }),
     ]);
+
+    // The notice's link: the stock entry's revisions 1 → 2, with the stored numbers.
+    const change = await getRevisionComparison(author, stockEntry, 1, 2);
+    const stockDiff = change.comparison.blocks.find((b) => b.blockId === "stock-kcl")!;
+    expect(stockDiff.status).toBe("changed");
+    expect((await errorOf(getRevisionComparison(outsider, stockEntry, 1, 2))).status).toBe(404);
 
     const offer = {
       blockId: "mid-kcl",
