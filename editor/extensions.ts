@@ -6,7 +6,7 @@ import { Mathematics } from "@tiptap/extension-mathematics";
 import { Placeholder } from "@tiptap/extensions";
 import { BlockIdGuard } from "./block-id-guard";
 import { CellBlock } from "./cell-block/cell-block-node";
-import { linkOptions } from "./link-policy";
+import { EntryLink } from "./link-policy";
 import { PasteSanitizer } from "./paste-sanitizer";
 import { SolutionBlock } from "./solution-block/solution-block-node";
 import { TraceBlock } from "./trace-block/trace-block-node";
@@ -27,8 +27,9 @@ export function buildEditorExtensions({
   return [
     StarterKit.configure({
       heading: { levels: [1, 2, 3, 4] },
-      link: linkOptions,
+      link: false, // EntryLink below: the same mark, storing only its href
     }),
+    EntryLink,
     TableKit.configure({ table: { resizable: false } }),
     TaskList,
     TaskItem.configure({ nested: true }),

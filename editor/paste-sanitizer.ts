@@ -1,4 +1,5 @@
 import { Extension } from "@tiptap/core";
+import DOMPurify from "dompurify";
 import { isSafeHref } from "@/lib/document/safe-href";
 
 /**
@@ -6,9 +7,10 @@ import { isSafeHref } from "@/lib/document/safe-href";
  * nodes and attributes it does not know; this is the second line, so no script, event
  * handler, style or foreign URL scheme survives even a future schema mistake.
  *
- * Pasting happens only in a browser, so this uses the browser's own inert parser
- * (DOMParser runs no script and loads nothing) and an allowlist walk, instead of
- * sanitize-html, which would add about 68 kB gzip to every page with an editor.
+ * DOMPurify (well kept, parses with the browser's inert parser) does the walk; the lists
+ * below narrow it to what an entry can hold, per element, which is stricter than its
+ * defaults: no images, forms, media, SVG or MathML at all, and no attribute an element
+ * does not need.
  */
 
 /** Elements whose content is dropped with them. */
@@ -68,7 +70,7 @@ const ALLOWED: Record<string, readonly string[]> = {
   th: ["colspan", "rowspan"],
   td: ["colspan", "rowspan"],
   ol: ["start"],
-  a: ["href", "title"],
+  a: ["href"], // a link keeps only where it goes (lib/document/document-schema.ts)
   // tiptap's own clipboard markup: task items and math keep their data attributes.
   ul: ["data-type"],
   li: ["data-type", "data-checked"],
@@ -82,39 +84,25 @@ const ALLOWED: Record<string, readonly string[]> = {
 const ALLOWED_EVERYWHERE = ["data-pm-slice"];
 
 export function sanitizePastedHtml(html: string): string {
-  const doc = new DOMParser().parseFromString(html, "text/html");
-  cleanChildren(doc.body);
-  return doc.body.innerHTML;
-}
-
-function cleanChildren(parent: Element) {
-  for (const child of Array.from(parent.childNodes)) {
-    if (child.nodeType === Node.TEXT_NODE) continue;
-    if (child.nodeType !== Node.ELEMENT_NODE) {
-      child.remove(); // comments, processing instructions
-      continue;
-    }
-    const element = child as Element;
-    const tag = element.tagName.toLowerCase();
-    if (DROP_WITH_CONTENT.has(tag)) {
-      element.remove();
-      continue;
-    }
-    cleanChildren(element);
-    const allowed = ALLOWED[tag];
-    if (!allowed) {
-      element.replaceWith(...Array.from(element.childNodes));
-      continue;
-    }
-    for (const attribute of Array.from(element.attributes)) {
+  const purifier = DOMPurify(window);
+  purifier.addHook("afterSanitizeAttributes", (node) => {
+    const tag = node.nodeName.toLowerCase();
+    const allowed = ALLOWED[tag] ?? [];
+    for (const attribute of Array.from(node.attributes)) {
       const name = attribute.name.toLowerCase();
       if (!allowed.includes(name) && !ALLOWED_EVERYWHERE.includes(name))
-        element.removeAttribute(attribute.name);
+        node.removeAttribute(attribute.name);
     }
-    if (tag === "a" && !isSafeHref(element.getAttribute("href") ?? ""))
-      element.removeAttribute("href");
-    if (tag === "input" && element.getAttribute("type") !== "checkbox") element.remove();
-  }
+    if (tag === "a" && !isSafeHref(node.getAttribute("href") ?? "")) node.removeAttribute("href");
+    if (tag === "input" && node.getAttribute("type") !== "checkbox") node.remove();
+  });
+  return purifier.sanitize(html, {
+    ALLOWED_TAGS: Object.keys(ALLOWED),
+    ALLOWED_ATTR: [...new Set([...Object.values(ALLOWED).flat(), ...ALLOWED_EVERYWHERE])],
+    ALLOW_DATA_ATTR: false,
+    KEEP_CONTENT: true, // unknown elements are unwrapped, their text kept
+    FORBID_CONTENTS: [...DROP_WITH_CONTENT],
+  });
 }
 
 export const PasteSanitizer = Extension.create({

@@ -25,7 +25,8 @@ done
 # Secrets are made once per installation and kept with the data.
 [ -s "$STATE/auth-secret" ] || node -e "process.stdout.write(require('crypto').randomBytes(32).toString('hex'))" >"$STATE/auth-secret"
 [ -s "$STATE/db-password" ] || node -e "process.stdout.write(require('crypto').randomBytes(18).toString('hex'))" >"$STATE/db-password"
-chmod 600 "$STATE/auth-secret" "$STATE/db-password"
+[ -s "$STATE/db-app-password" ] || node -e "process.stdout.write(require('crypto').randomBytes(18).toString('hex'))" >"$STATE/db-app-password"
+chmod 600 "$STATE/auth-secret" "$STATE/db-password" "$STATE/db-app-password"
 
 # The cluster lives outside the project folder, so the development server's file watcher never
 # sees PostgreSQL writing (it would reload the page on every write). A cluster an earlier
@@ -51,8 +52,12 @@ trap cleanup EXIT INT TERM
 
 pg_cluster_start "$PGDATA_DIR" "$PG_PORT" "$STATE/logs/postgres.log"
 pg_ensure_database "$PG_PORT" ionleaf ionleaf "$(cat "$STATE/db-password")"
+pg_ensure_login_role "$PG_PORT" ionleaf_app "$(cat "$STATE/db-app-password")"
 
-export DATABASE_URL="postgres://ionleaf:$(cat "$STATE/db-password")@127.0.0.1:$PG_PORT/ionleaf"
+# Two roles: `ionleaf` owns the tables and runs migrations; the app serves as `ionleaf_app`,
+# which may not change the schema, switch off a guard, or update and delete kept records.
+export DATABASE_OWNER_URL="postgres://ionleaf:$(cat "$STATE/db-password")@127.0.0.1:$PG_PORT/ionleaf"
+export DATABASE_URL="postgres://ionleaf_app:$(cat "$STATE/db-app-password")@127.0.0.1:$PG_PORT/ionleaf"
 export AUTH_SECRET="$(cat "$STATE/auth-secret")"
 export_app_env "$APP_PORT" "$SMTP_PORT" "$MAIL_HTTP_PORT" "$ROOT_DIR/uploads"
 

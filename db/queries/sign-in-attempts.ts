@@ -7,8 +7,9 @@ export async function recordSignInAttempt(
   email: string,
   clientKey: string,
   succeeded: boolean,
+  at: Date,
 ) {
-  await db.insert(signInAttempts).values({ email: email.toLowerCase(), clientKey, succeeded });
+  await db.insert(signInAttempts).values({ email: email.toLowerCase(), clientKey, succeeded, at });
 }
 
 /** Attempts on an address since a moment, newest first. */

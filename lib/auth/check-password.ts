@@ -42,7 +42,9 @@ export async function checkPasswordThrottled(
       ? await verifyPassword(user.passwordHash, input.password)
       : await verifyDecoy(input.password);
     const ok = Boolean(user && matches && user.active);
-    await recordSignInAttempt(tx, input.email, input.clientKey, ok);
+    // Stamped with the same clock the decision used (not the database's transaction start),
+    // so the throttle's arithmetic never mixes two clocks.
+    await recordSignInAttempt(tx, input.email, input.clientKey, ok, now);
     return { kind: "checked", ok, user };
   });
 }

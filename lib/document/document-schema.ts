@@ -74,12 +74,10 @@ const MARK_ATTRS = {
   strike: z.strictObject({}),
   underline: z.strictObject({}),
   code: z.strictObject({}),
+  // A link stores where it goes and nothing else: `rel` and `target` are added by the app
+  // when it is drawn, and a stored `class` or `style` could lay a link over the whole page.
   link: z.strictObject({
     href: z.string().max(2048).refine(isSafeHref, "Links may only use http, https or mailto."),
-    target: z.enum(["_blank", "_self"]).nullable().optional(),
-    rel: z.string().max(100).nullable().optional(),
-    class: z.string().max(100).nullable().optional(),
-    title: z.string().max(300).nullable().optional(),
   }),
 } as const;
 

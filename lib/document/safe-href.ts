@@ -11,8 +11,9 @@ export function isSafeHref(href: string): boolean {
   if (cleaned === "") return false;
   const scheme = /^([a-z][a-z0-9+.-]*):/.exec(cleaned);
   if (!scheme) {
-    // Relative links and fragments stay inside Ionleaf; protocol-relative "//host" does not.
-    return !cleaned.startsWith("//") && !cleaned.startsWith("\\");
+    // Relative links and fragments stay inside Ionleaf; protocol-relative "//host" does not,
+    // and browsers read a backslash as a slash there ("/\host", "\\host" go to host too).
+    return !cleaned.replace(/\\/g, "/").startsWith("//");
   }
   return ALLOWED_SCHEMES.includes(`${scheme[1]}:`);
 }

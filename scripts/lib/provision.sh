@@ -114,6 +114,19 @@ pg_ensure_database() {
   fi
 }
 
+# pg_ensure_login_role PORT ROLE PASSWORD: a role that can sign in and owns nothing; the
+# migration step (scripts/migrate.ts) grants it what the app needs. The password is set on
+# every start, so the one kept in .data stays the one that works.
+pg_ensure_login_role() {
+  local port="$1" role="$2" password="$3"
+  local q="psql -h 127.0.0.1 -p $port -U postgres -d postgres -tAq"
+  if [ "$($q -c "select 1 from pg_roles where rolname='$role'")" != "1" ]; then
+    $q -c "create role \"$role\" login" >/dev/null || die "could not create role $role"
+  fi
+  $q -c "alter role \"$role\" login nosuperuser nocreatedb nocreaterole password '$password'" >/dev/null ||
+    die "could not set up role $role"
+}
+
 # port_is_free PORT
 port_is_free() { ! (exec 3<>"/dev/tcp/127.0.0.1/$1") 2>/dev/null; }
 

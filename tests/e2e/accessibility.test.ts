@@ -56,6 +56,6 @@ describe("accessibility (axe-core, WCAG 2 A and AA)", () => {
       } finally {
         await own.close();
       }
-    });
+    }, 180_000); // a dozen pages, each checked twice by axe: slow on a busy two-core machine
   }
 });

@@ -19,7 +19,7 @@ import {
 } from "@/lib/notebook/revisions";
 import { saveEntryContent } from "@/lib/notebook/save-entry";
 import { getDb } from "@/lib/server/database";
-import { createLabWithMembers } from "../support/db";
+import { createLabWithMembers, ownerDb } from "../support/db";
 
 const paragraph = (text: string) => ({ type: "paragraph", content: [{ type: "text", text }] });
 const nacl = (molality: number) =>
@@ -368,11 +368,13 @@ describe("entries, revisions and server-computed solutions", () => {
     // Drizzle wraps the server's error; PostgreSQL's own message is its cause.
     const serverMessage = (e: unknown) =>
       String((e as { cause?: Error }).cause?.message ?? (e as Error).message);
-    const update = await getDb()
+    // As the owner: the app's own role may not even issue these (database-role.test.ts);
+    // the triggers are the guard that holds for everyone else.
+    const update = await ownerDb()
       .execute(sql`update revisions set title = 'rewritten' where entry_id = ${id}`)
       .then(() => "applied", serverMessage);
     expect(update).toMatch(/revisions rows are immutable \(UPDATE refused\)/);
-    const del = await getDb()
+    const del = await ownerDb()
       .execute(sql`delete from revisions where entry_id = ${id}`)
       .then(() => "applied", serverMessage);
     expect(del).toMatch(/revisions rows are immutable \(DELETE refused\)/);
@@ -388,7 +390,7 @@ describe("entries, revisions and server-computed solutions", () => {
     const serverMessage = (e: unknown) =>
       String((e as { cause?: Error }).cause?.message ?? (e as Error).message);
     const attempt = (statement: ReturnType<typeof sql>) =>
-      getDb()
+      ownerDb()
         .execute(statement)
         .then(() => "applied", serverMessage);
     expect(

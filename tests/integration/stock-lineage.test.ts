@@ -21,7 +21,7 @@ import { getRevisionComparison } from "@/lib/notebook/review-view";
 import { getCurrentContent } from "@/lib/notebook/revisions";
 import { saveEntryContent } from "@/lib/notebook/save-entry";
 import { getDb } from "@/lib/server/database";
-import { createLabWithMembers, TEST_PASSWORD } from "../support/db";
+import { createLabWithMembers, ownerDb, TEST_PASSWORD } from "../support/db";
 
 const doc = (...nodes: unknown[]) => ({ type: "doc", content: nodes });
 const block = (attrs: SolutionBlockInput) => ({ type: "solutionBlock", attrs });
@@ -345,7 +345,9 @@ describe("stocks and lineage", () => {
   });
 
   it("guards the links in the database: never changed, never across labs", async () => {
-    const db = getDb();
+    // As the owner: the app's own role may not even issue an UPDATE or DELETE here
+    // (db/app-role-privileges.ts); the triggers are the guard that holds for everyone else.
+    const db = ownerDb();
     // Drizzle wraps the server's error; PostgreSQL's own message is its cause.
     const attempt = (run: Promise<unknown>) =>
       run.then(

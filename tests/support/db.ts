@@ -4,6 +4,7 @@ import { insertLab } from "@/db/queries/labs";
 import { insertUser } from "@/db/queries/users";
 import type { Actor } from "@/lib/access/actor";
 import { hashPassword } from "@/lib/auth/password";
+import { createDatabase, type Database } from "@/db/client";
 import { getDb } from "@/lib/server/database";
 
 export const TEST_PASSWORD = "test-password-9";
@@ -35,6 +36,19 @@ export async function createLabWithMembers(roles: Role[] = ["admin", "supervisor
     };
   }
   return { lab, members, tag };
+}
+
+let owner: Database | null = null;
+
+/**
+ * The database as the owner of its tables (migrations, VACUUM, the guard triggers' own
+ * tests). The app and the tests' services connect as the app role, which may do less.
+ */
+export function ownerDb(): Database {
+  const url = process.env.DATABASE_OWNER_URL;
+  if (!url) throw new Error("DATABASE_OWNER_URL is not set: run the tests through npm test");
+  owner ??= createDatabase(url, 2).db;
+  return owner;
 }
 
 /** The mail catcher's inbox, from the test harness's catcher. */

@@ -34,7 +34,7 @@ describe("shared auth schemas", () => {
   });
 
   it("wants a long, mixed password typed twice the same", () => {
-    const base = { token: "t".repeat(43), name: "Rowan Test" };
+    const base = { token: "t".repeat(43), email: "rowan@lab.example", name: "Rowan Test" };
     expect(
       acceptInvitationSchema.safeParse({ ...base, password: "short1", confirmPassword: "short1" })
         .success,

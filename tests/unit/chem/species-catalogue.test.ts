@@ -82,11 +82,14 @@ describe("built-in species catalogue", () => {
   it("refuses a formula it cannot split into ions, naming it", () => {
     expect(() => resolveSpecies("Cu2O")).toThrow(ChemInputError);
     expect(() => resolveSpecies("Cu2O")).toThrow(/"Cu2O" is not in the species catalogue/);
+    let thrown: unknown = null;
     try {
       resolveSpecies("NaXq", "components[0].formula");
     } catch (error) {
-      expect((error as ChemInputError).field).toBe("components[0].formula");
+      thrown = error;
     }
+    expect(thrown).toBeInstanceOf(ChemInputError);
+    expect((thrown as ChemInputError).field).toBe("components[0].formula");
   });
 
   it("does not guess that an unknown acid or an organic molecule gives up protons", () => {

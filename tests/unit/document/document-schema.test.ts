@@ -26,12 +26,7 @@ describe("entryDocumentSchema", () => {
         para("see", [
           {
             type: "link",
-            attrs: {
-              href: "https://example.org/sds",
-              target: "_blank",
-              rel: "noopener noreferrer nofollow",
-              class: null,
-            },
+            attrs: { href: "https://example.org/sds" },
           },
         ]),
         { type: "blockMath", attrs: { latex: "I = \\tfrac12 \\sum_i m_i z_i^2" } },
@@ -76,6 +71,28 @@ describe("entryDocumentSchema", () => {
       doc(para("x", [{ type: "link", attrs: { href } }])),
     );
     expect(result.success).toBe(false);
+  });
+
+  it.each([
+    { class: "fixed inset-0 z-50 opacity-0" },
+    { target: "_self" },
+    { rel: "opener" },
+    { title: "x" },
+    { style: "position:fixed;inset:0" },
+  ])("keeps only a link's href: refuses %j beside it", (extra) => {
+    const result = entryDocumentSchema.safeParse(
+      doc(para("x", [{ type: "link", attrs: { href: "https://example.org", ...extra } }])),
+    );
+    expect(result.success).toBe(false);
+  });
+
+  it("rejects protocol-relative and backslash link forms that leave the app", () => {
+    for (const href of ["//evil.example/x", "/\\evil.example", "\\\\evil.example"]) {
+      const result = entryDocumentSchema.safeParse(
+        doc(para("x", [{ type: "link", attrs: { href } }])),
+      );
+      expect(result.success, href).toBe(false);
+    }
   });
 
   it("rejects unknown marks and attributes smuggled onto plain nodes", () => {

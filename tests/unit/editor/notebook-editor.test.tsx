@@ -165,6 +165,15 @@ describe("NotebookEditor", () => {
       .filter((m) => m.type === "link")
       .map((m) => m.attrs?.href);
     expect(hrefs).toEqual(["https://example.org/sds"]);
+    // A link stores only its href; rel and target are drawn by the app.
+    expect(
+      marksIn(doc)
+        .filter((m) => m.type === "link")
+        .map((m) => m.attrs),
+    ).toEqual([{ href: "https://example.org/sds" }]);
+    const anchor = editor.view.dom.querySelector("a[href='https://example.org/sds']");
+    expect(anchor?.getAttribute("rel")).toBe("noopener noreferrer nofollow");
+    expect(anchor?.getAttribute("target")).toBe("_blank");
     expect(JSON.stringify(doc)).not.toMatch(/alert/);
     expect(typesIn(doc)).not.toContain("image");
     const parsed = entryDocumentSchema.safeParse(doc);
@@ -297,5 +306,12 @@ describe("sanitizePastedHtml", () => {
     expect(html).not.toMatch(/alert|script|svg|font|onmouseover|onerror|<img|<!--/);
     expect(html).toContain("<a>link</a>");
     expect(html).toContain('<a href="https://example.org">ok</a>');
+  });
+
+  it("keeps only a pasted link's href: no class, style, target, rel or title", () => {
+    const html = sanitizePastedHtml(
+      '<p><a href="https://example.org" class="fixed inset-0" style="position:fixed" target="_self" rel="opener" title="t">x</a><a href="/\\evil.example">y</a></p>',
+    );
+    expect(html).toBe('<p><a href="https://example.org">x</a><a>y</a></p>');
   });
 });
