@@ -41,7 +41,7 @@ describe("a dilution made from a stock", () => {
     await picker
       .getByRole("button", { name: /3 mol\/L KCl filling solution/ })
       .first()
-      .click();
+      .click({ timeout: 90_000 });
     await named.getByRole("textbox", { name: "Volume of stock 1" }).fill("1");
     await named.getByRole("textbox", { name: "Final volume" }).fill("300");
     // The stock's current revision (amended: 22.37 g KCl made up to 99.82 mL, so
