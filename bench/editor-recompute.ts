@@ -85,7 +85,8 @@ export interface BenchReport {
 
 function runEditorRecomputeBench(rounds = 40): BenchReport {
   // Warm-up: the JIT and lib/chem's species caches, as after the first render of an entry.
-  for (let r = 0; r < 20; r++) typicalEntryBlocks(50, -r - 1).forEach(evaluateSolutionBlock);
+  for (let r = 0; r < 20; r++)
+    typicalEntryBlocks(50, -r - 1).forEach((b) => evaluateSolutionBlock(b));
 
   const cold: number[] = [];
   const coldCpu: number[] = [];
@@ -102,7 +103,7 @@ function runEditorRecomputeBench(rounds = 40): BenchReport {
 
   // A keystroke: one block's amount changes, the other 49 come from the memo.
   const blocks = typicalEntryBlocks(50, 10_000);
-  blocks.forEach(evaluateSolutionBlockCached);
+  blocks.forEach((b) => evaluateSolutionBlockCached(b));
   const keystroke: number[] = [];
   for (let r = 0; r < rounds; r++) {
     const edited = blocks.map((block, i) =>
@@ -117,7 +118,7 @@ function runEditorRecomputeBench(rounds = 40): BenchReport {
         : block,
     );
     const start = performance.now();
-    edited.forEach(evaluateSolutionBlockCached);
+    edited.forEach((b) => evaluateSolutionBlockCached(b));
     keystroke.push(performance.now() - start);
   }
 

@@ -7,12 +7,17 @@ const STATUS: Record<string, string> = {
   unchanged: "bg-ink/5 text-ink-soft",
 };
 
+/** Column headings of the comparison: a review compares the signed revision with the submitted one. */
+const REVIEW_LABELS = { before: "Signed before", after: "Submitted now" };
+
 function ValueTable({
   caption,
   rows,
+  labels,
 }: {
   caption: string;
   rows: RevisionComparison["blocks"][number]["inputs"];
+  labels: { before: string; after: string };
 }) {
   if (rows.length === 0) return null;
   return (
@@ -24,10 +29,10 @@ function ValueTable({
             Field
           </th>
           <th scope="col" className="py-1 pr-3 font-normal">
-            Signed before
+            {labels.before}
           </th>
           <th scope="col" className="py-1 font-normal">
-            Submitted now
+            {labels.after}
           </th>
         </tr>
       </thead>
@@ -58,16 +63,22 @@ function ValueTable({
 export function RevisionComparisonView({
   comparison,
   baselineRevision,
+  heading,
+  labels = REVIEW_LABELS,
 }: {
   comparison: RevisionComparison;
   baselineRevision: number | null;
+  /** Another heading than the review's ("What changed since countersigned revision n"). */
+  heading?: string;
+  labels?: { before: string; after: string };
 }) {
   return (
     <section aria-labelledby="changes-heading" className="space-y-4 card p-5">
       <h2 id="changes-heading" className="text-base font-semibold">
-        {baselineRevision === null
-          ? "Content under review (nothing countersigned before)"
-          : `What changed since countersigned revision ${baselineRevision}`}
+        {heading ??
+          (baselineRevision === null
+            ? "Content under review (nothing countersigned before)"
+            : `What changed since countersigned revision ${baselineRevision}`)}
       </h2>
       {comparison.title.changed && comparison.title.before !== null ? (
         <p className="text-sm">
@@ -111,8 +122,12 @@ export function RevisionComparisonView({
           </p>
           {block.status !== "unchanged" ? (
             <div className="grid gap-3 overflow-x-auto lg:grid-cols-2">
-              <ValueTable caption="Inputs" rows={block.inputs} />
-              <ValueTable caption="Results computed by the server" rows={block.results} />
+              <ValueTable caption="Inputs" rows={block.inputs} labels={labels} />
+              <ValueTable
+                caption="Results computed by the server"
+                rows={block.results}
+                labels={labels}
+              />
             </div>
           ) : null}
         </div>

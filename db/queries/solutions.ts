@@ -56,8 +56,14 @@ export async function openBlockRows(db: Executor, labId: string, entryId: string
     );
 }
 
+/** Inserts block rows; returns the id of each, by block id. */
 export async function insertBlockRows(db: Executor, rows: (typeof blockResults.$inferInsert)[]) {
-  if (rows.length) await db.insert(blockResults).values(rows);
+  if (!rows.length) return new Map<string, string>();
+  const inserted = await db
+    .insert(blockResults)
+    .values(rows)
+    .returning({ id: blockResults.id, blockId: blockResults.blockId });
+  return new Map(inserted.map((r) => [r.blockId, r.id]));
 }
 
 /** Closes open rows at a revision (the only change the database allows on them). */

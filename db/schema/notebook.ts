@@ -260,6 +260,63 @@ export const blockResults = pgTable(
 );
 
 /**
+ * Lineage: a solution block made from other solution blocks (stocks). One row per stock of a
+ * block row: which solution block (entry, block, revision) was used, which stored result that
+ * revision showed, and how much of it went into how much final volume. Written with the child's
+ * block row (a change of stocks is a change of the block's inputs, so a new block row), never
+ * changed or deleted afterwards (a trigger refuses it), so the links of a countersigned revision
+ * stay as they were signed. The parent is in the same lab (a trigger checks it too).
+ */
+export const solutionParents = pgTable(
+  "solution_parents",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    labId: uuid("lab_id")
+      .notNull()
+      .references(() => labs.id, { onDelete: "restrict" }),
+    /** The child's block row: its entry, block and the revisions it covers. */
+    blockResultId: uuid("block_result_id")
+      .notNull()
+      .references(() => blockResults.id, { onDelete: "restrict" }),
+    entryId: uuid("entry_id")
+      .notNull()
+      .references(() => entries.id, { onDelete: "restrict" }),
+    blockId: text("block_id").notNull(),
+    /** The child revision that first recorded this link (the block row's from_revision). */
+    revision: integer("revision").notNull(),
+    /** Position of the stock in the block's list. */
+    position: integer("position").notNull(),
+    parentEntryId: uuid("parent_entry_id")
+      .notNull()
+      .references(() => entries.id, { onDelete: "restrict" }),
+    parentBlockId: text("parent_block_id").notNull(),
+    parentRevision: integer("parent_revision").notNull(),
+    /** The stored result the parent block showed at that revision: the composition used. */
+    parentResultId: uuid("parent_result_id")
+      .notNull()
+      .references(() => solutionResults.id, { onDelete: "restrict" }),
+    volumeMl: doublePrecision("volume_ml").notNull(),
+    finalVolumeMl: doublePrecision("final_volume_ml").notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [
+    unique("solution_parents_block_row_position_unique").on(t.blockResultId, t.position),
+    // The stock list: every use of a lab's stock blocks.
+    index("solution_parents_lab_parent_idx").on(t.labId, t.parentEntryId, t.parentBlockId),
+    // An entry's stocks, for the notice of a newer stock revision.
+    index("solution_parents_entry_idx").on(t.entryId),
+    check(
+      "solution_parents_revisions_positive",
+      sql`${t.revision} >= 1 and ${t.parentRevision} >= 1`,
+    ),
+    check(
+      "solution_parents_volumes_valid",
+      sql`${t.volumeMl} > 0 and ${t.finalVolumeMl} >= ${t.volumeMl}`,
+    ),
+  ],
+);
+
+/**
  * A countersignature: an electronic signature of one revision by a supervisor who re-entered
  * their password. It records the SHA-256 of the revision's signed content (title, document
  * and the hashes of its attachments), so the record can be verified later. Immutable; one
@@ -435,6 +492,7 @@ export type Entry = typeof entries.$inferSelect;
 export type Revision = typeof revisions.$inferSelect;
 export type SolutionResultRow = typeof solutionResults.$inferSelect;
 export type BlockResult = typeof blockResults.$inferSelect;
+export type SolutionParent = typeof solutionParents.$inferSelect;
 export type ReviewRequest = typeof reviewRequests.$inferSelect;
 export type Signature = typeof signatures.$inferSelect;
 export type Attachment = typeof attachments.$inferSelect;

@@ -10,6 +10,8 @@ import { SolutionResults } from "./solution-results";
 import { SimilarLink } from "./similar-link";
 import { SolutionSettings } from "./solution-settings";
 import { StoredNotice } from "./stored-notice";
+import { StocksSection } from "./stocks-section";
+import { useStockLookups } from "./use-stock-lookups";
 import { useStoredSolution } from "../stored-results";
 import { describeEngineChange, evaluationFromStored } from "@/lib/document/stored-evaluation";
 
@@ -25,7 +27,8 @@ interface SolutionBlockPanelProps {
  */
 export function SolutionBlockPanel({ value, onChange, editable = true }: SolutionBlockPanelProps) {
   const stored = useStoredSolution(value.blockId);
-  const live = useMemo(() => evaluateSolutionBlockCached(value), [value]);
+  const stocks = useStockLookups(value.dilution);
+  const live = useMemo(() => evaluateSolutionBlockCached(value, stocks), [value, stocks]);
   // A saved revision shows its stored numbers; today's engine is asked only to compare.
   const showStored = stored !== null && !editable;
   const evaluation = useMemo(
@@ -87,6 +90,14 @@ export function SolutionBlockPanel({ value, onChange, editable = true }: Solutio
       </header>
       <div className="space-y-4 px-3 py-3">
         <SolutionSettings value={value} errors={errors} editable={editable} onChange={patch} />
+        <StocksSection
+          value={value}
+          stocks={stocks}
+          evaluation={evaluation}
+          errors={errors}
+          editable={editable}
+          onChange={patch}
+        />
         <ComponentsTable
           components={value.components}
           errors={errors}

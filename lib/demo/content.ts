@@ -210,6 +210,25 @@ async function saltmarsh(labId: string) {
     meaning: "witnessed",
     comment: "",
   });
+  // A working electrolyte diluted from the countersigned stock (revision 1); the amendment below
+  // then gives the stock a newer revision, so this entry shows the notice offering to update.
+  await write(mira, "Ferrocyanide kinetics", "0.1 mol/L KCl supporting electrolyte", [
+    paragraph("10.00 mL of the 3 mol/L KCl stock (volumetric pipette) made up to 300 mL."),
+    solution(
+      defaultSolutionBlockInput({
+        name: "0.1 mol/L KCl from the stock",
+        temperatureC: 22,
+        components: [],
+        dilution: {
+          stocks: [
+            { entryId: stock, blockId: filling.blockId, revision: 1, volume: 10, volumeUnit: "mL" },
+          ],
+          finalVolume: 300,
+          finalVolumeUnit: "mL",
+        },
+      }),
+    ),
+  ]);
   // Amended after countersignature: the flask was recalibrated; the amendment waits for review.
   await startAmendment(mira, stock, {
     reason: "The 100 mL flask was recalibrated at 99.82 mL; the concentration is corrected.",

@@ -18,6 +18,7 @@ export function defaultSolutionBlockInput(
     densityGPerMl: null,
     model: "auto",
     components: [{ formula: "", amount: null, unit: "mol/kg" }],
+    dilution: null,
     ...overrides,
   };
 }

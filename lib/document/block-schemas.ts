@@ -73,6 +73,32 @@ const solutionComponentSchema = z.strictObject({
 });
 export type SolutionComponentInput = z.infer<typeof solutionComponentSchema>;
 
+/** Volumes of a dilution: the stock taken and the final volume it is made up to. */
+export const VOLUME_UNITS = ["µL", "mL", "L"] as const;
+export type VolumeUnit = (typeof VOLUME_UNITS)[number];
+
+/**
+ * A stock this solution is made from: a solution block of an entry of the same lab, at the
+ * revision used. Only the reference and the volume taken are stored; the stock's composition
+ * is read from that revision's stored result (never from the client).
+ */
+const stockRefSchema = z.strictObject({
+  entryId: z.uuid("An entry id is a UUID."),
+  blockId: blockIdSchema,
+  revision: z.number().int().min(1).max(1_000_000_000),
+  volume: boundedNumber(-1e9, 1e9).nullable(),
+  volumeUnit: z.enum(VOLUME_UNITS),
+});
+export type StockRef = z.infer<typeof stockRefSchema>;
+
+/** "V₁ of stock A (and B…) made up to V₂", plus the block's own component rows. */
+const dilutionSchema = z.strictObject({
+  stocks: z.array(stockRefSchema).max(10),
+  finalVolume: boundedNumber(-1e9, 1e9).nullable(),
+  finalVolumeUnit: z.enum(VOLUME_UNITS),
+});
+export type DilutionInput = z.infer<typeof dilutionSchema>;
+
 export const solutionBlockInputSchema = z.strictObject({
   blockId: blockIdSchema,
   name: shortText(120),
@@ -81,6 +107,8 @@ export const solutionBlockInputSchema = z.strictObject({
   densityGPerMl: boundedNumber(-100, 100).nullable().optional(),
   model: z.enum(MODEL_CHOICES),
   components: z.array(solutionComponentSchema).max(40),
+  /** Made from stocks: null (or absent, in documents saved before lineage) when not. */
+  dilution: dilutionSchema.nullable().optional(),
 });
 export type SolutionBlockInput = z.infer<typeof solutionBlockInputSchema>;
 

@@ -1,6 +1,7 @@
 import { ENGINE_VERSION } from "@/lib/chem";
 import type { SolutionBlockInput } from "./block-schemas";
 import { canonicalHash } from "./canonical-hash";
+import type { StockLookups } from "./dilution";
 import { evaluateSolutionBlock } from "./evaluate-solution-block";
 
 /**
@@ -34,12 +35,26 @@ const finiteOrNull = (x: unknown): number | null =>
  * block share one stored result.
  */
 export function solutionInputsHash(block: SolutionBlockInput): string {
-  const { blockId: _blockId, ...inputs } = block;
-  return canonicalHash({ inputs, engineVersion: ENGINE_VERSION });
+  return canonicalHash({ inputs: keyedInputs(block), engineVersion: ENGINE_VERSION });
 }
 
-export function solutionRecordFor(block: SolutionBlockInput): SolutionRecord {
-  const evaluation = evaluateSolutionBlock(block);
+/**
+ * The inputs a result is keyed and stored by. A block made from stocks names each stock's
+ * entry, block and revision: a saved revision's stored result never changes, so the reference
+ * fixes the stock's composition and the key stays a function of the block alone. A block
+ * without stocks keys as it did before lineage existed (no `dilution` key).
+ */
+function keyedInputs(block: SolutionBlockInput): Record<string, unknown> {
+  const { blockId: _blockId, dilution, ...inputs } = block;
+  return dilution ? { ...inputs, dilution } : inputs;
+}
+
+/** The stored record of a block; `stocks` holds the stored compositions of its stocks. */
+export function solutionRecordFor(
+  block: SolutionBlockInput,
+  stocks?: StockLookups,
+): SolutionRecord {
+  const evaluation = evaluateSolutionBlock(block, stocks);
   const ok = evaluation.status === "ok" ? evaluation.result : null;
   const typedRows = block.components.filter((c) => c.formula.trim() !== "" && c.amount !== null);
   const species = new Set<string>();
@@ -51,7 +66,11 @@ export function solutionRecordFor(block: SolutionBlockInput): SolutionRecord {
     const molality = finiteOrNull(ion.molality);
     if (molality !== null) composition[ion.formula] = (composition[ion.formula] ?? 0) + molality;
   }
-  const { blockId: _blockId, ...inputs } = block;
+  const inputs = keyedInputs(block);
+  const dilution =
+    evaluation.status === "ok" && evaluation.dilution
+      ? { dilution: JSON.parse(JSON.stringify(evaluation.dilution)) as Record<string, unknown> }
+      : {};
 
   return {
     inputsHash: solutionInputsHash(block),
@@ -67,7 +86,11 @@ export function solutionRecordFor(block: SolutionBlockInput): SolutionRecord {
     species: [...species],
     composition,
     results: ok
-      ? { status: "ok", ...(JSON.parse(JSON.stringify(ok)) as Record<string, unknown>) }
+      ? {
+          status: "ok",
+          ...(JSON.parse(JSON.stringify(ok)) as Record<string, unknown>),
+          ...dilution,
+        }
       : evaluation.status === "error"
         ? { status: "error", field: evaluation.field ?? null, message: evaluation.message }
         : { status: "empty" },

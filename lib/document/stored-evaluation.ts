@@ -1,5 +1,6 @@
 import { formatSignificant } from "@/lib/ui/format-number";
 import type { SolutionBlockInput } from "./block-schemas";
+import { stockLookupsFromStored, type DilutionOutcome } from "./dilution";
 import {
   chemInputOf,
   type SolutionEvaluation,
@@ -31,9 +32,16 @@ export function evaluationFromStored(
     };
   }
   if (status !== "ok") return { status: "empty" };
-  const input = chemInputOf(block);
+  // A block made from stocks: the stock compositions it was computed with are in the record.
+  const input = chemInputOf(block, stockLookupsFromStored(block.dilution, stored.results));
   if (!input) return { status: "empty" };
-  return { status: "ok", input, result: rest as unknown as SolutionResult };
+  const { dilution, ...result } = rest;
+  return {
+    status: "ok",
+    input,
+    result: result as unknown as SolutionResult,
+    ...(dilution ? { dilution: dilution as Extract<DilutionOutcome, { status: "ok" }> } : {}),
+  };
 }
 
 const same = (a: number | null | undefined, b: number | null | undefined) =>

@@ -8,8 +8,11 @@ import {
   insertResult,
   openBlockRows,
 } from "@/db/queries/solutions";
+import { insertParentLinks } from "@/db/queries/lineage";
+import { hasStocks, stockKey, toMl } from "@/lib/document/dilution";
 import type { PreparedRevision } from "@/lib/document/prepare-revision";
 import { solutionRecordFor } from "@/lib/document/solution-record";
+import { resolveStocks } from "./lineage/resolve-stocks";
 
 export interface NewRevision {
   labId: string;
@@ -27,6 +30,8 @@ export interface AppendedRevision {
   solutions: number;
   /** Rows written for solutions: block rows opened plus results computed and stored. */
   solutionRowsWritten: number;
+  /** Lineage rows written: one per stock of each new or changed block made from stocks. */
+  stockLinksWritten: number;
   /** Blocks whose result was computed in this save (new content for this lab and engine). */
   computed: number;
 }
@@ -67,6 +72,14 @@ export async function appendRevision(tx: Executor, r: NewRevision): Promise<Appe
     .map((row) => row.id);
   await closeBlockRows(tx, r.labId, toClose, r.number);
 
+  // Blocks made from stocks read each stock's stored composition here, in this transaction.
+  const stocks = await resolveStocks(
+    tx,
+    r.labId,
+    r.entryId,
+    changed.map((c) => c.block),
+  );
+
   const stored = new Map(
     (
       await findResultsByHash(
@@ -81,7 +94,7 @@ export async function appendRevision(tx: Executor, r: NewRevision): Promise<Appe
   for (const c of changed) {
     let result = stored.get(c.inputsHash);
     if (!result) {
-      const record = solutionRecordFor(c.block);
+      const record = solutionRecordFor(c.block, stocks.lookups);
       result = { id: await insertResult(tx, { labId: r.labId, ...record }), ...record };
       stored.set(c.inputsHash, result);
       computed += 1;
@@ -103,7 +116,34 @@ export async function appendRevision(tx: Executor, r: NewRevision): Promise<Appe
       species: result.species,
     });
   }
-  await insertBlockRows(tx, newRows);
+  const rowIds = await insertBlockRows(tx, newRows);
+  const links = changed.flatMap(({ block }) => {
+    if (!hasStocks(block.dilution)) return [];
+    const { stocks: refs, finalVolume, finalVolumeUnit } = block.dilution;
+    const finalVolumeMl = finalVolume === null ? NaN : toMl(finalVolume, finalVolumeUnit);
+    return refs.flatMap((ref, position) => {
+      const volumeMl = ref.volume === null ? NaN : toMl(ref.volume, ref.volumeUnit);
+      // A stock is linked once its volumes make sense; until then the block shows why not.
+      if (!(volumeMl > 0 && finalVolumeMl >= volumeMl)) return [];
+      return [
+        {
+          labId: r.labId,
+          blockResultId: rowIds.get(block.blockId)!,
+          entryId: r.entryId,
+          blockId: block.blockId,
+          revision: r.number,
+          position,
+          parentEntryId: ref.entryId,
+          parentBlockId: ref.blockId,
+          parentRevision: ref.revision,
+          parentResultId: stocks.resultIds.get(stockKey(ref))!,
+          volumeMl,
+          finalVolumeMl,
+        },
+      ];
+    });
+  });
+  await insertParentLinks(tx, links);
 
   await updateEntry(tx, r.labId, r.entryId, {
     currentRevisionNumber: r.number,
@@ -114,6 +154,7 @@ export async function appendRevision(tx: Executor, r: NewRevision): Promise<Appe
     contentHash: prepared.contentHash,
     solutions: prepared.solutionBlocks.length,
     solutionRowsWritten: newRows.length + computed,
+    stockLinksWritten: links.length,
     computed,
   };
 }

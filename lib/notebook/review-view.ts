@@ -70,6 +70,29 @@ export async function getReviewView(actor: Actor, entryId: string) {
   };
 }
 
+/**
+ * What changed in an entry between two of its revisions, with stored numbers only: the link a
+ * notice of a newer stock revision points to. Any member of the lab may read it.
+ */
+export async function getRevisionComparison(
+  actor: Actor,
+  entryId: string,
+  from: number,
+  to: number,
+) {
+  assertCan(actor, "entry.read");
+  const header = await getEntryHeader(actor, entryId);
+  const { entry } = header;
+  if (from >= to || to > entry.currentRevisionNumber)
+    throw new AppError("not_found", "Revision not found.");
+  const db = getDb();
+  const [before, after] = await Promise.all([
+    sideOf(db, actor.labId, entry.id, from),
+    sideOf(db, actor.labId, entry.id, to),
+  ]);
+  return { ...header, from, to, comparison: compareRevisions(before, after) };
+}
+
 /** An entry's history: revisions (amendments marked), submissions, returns with comments, signatures. */
 export async function getEntryHistory(actor: Actor, entryId: string) {
   assertCan(actor, "entry.read");

@@ -12,6 +12,7 @@ export function navigationFor(role: Role): NavEntry[] {
     { href: "/", label: "Bench" },
     { href: "/entries", label: "Entries" },
     { href: "/solutions", label: "Solution finder" },
+    { href: "/stocks", label: "Stocks" },
   ];
   if (roleCan(role, "review.read")) items.push({ href: "/review", label: "Review queue" });
   if (roleCan(role, "lab.manage")) items.push({ href: "/lab", label: "Lab settings" });

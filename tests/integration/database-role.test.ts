@@ -49,6 +49,8 @@ describe("the application's database role", () => {
     "delete from solution_results",
     "update block_results set ionic_strength_molal = 1",
     "delete from block_results",
+    "update solution_parents set volume_ml = 1",
+    "delete from solution_parents",
     "update attachments set sha256 = 'x'",
     "delete from attachments",
     "delete from entries",

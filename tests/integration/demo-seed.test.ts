@@ -1,7 +1,7 @@
 // @vitest-environment node
 import { eq } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
-import { blockResults, entries, labs } from "@/db/schema";
+import { blockResults, entries, labs, solutionParents } from "@/db/schema";
 import { demoContent } from "@/lib/demo/content";
 import { DEMO_LABS, DEMO_PASSWORD } from "@/lib/demo/scenario";
 import { seedDemo } from "@/lib/demo/seed";
@@ -10,7 +10,7 @@ import { getDb } from "@/lib/server/database";
 
 /** What lib/demo/content.ts writes for each lab: entries, and solution block rows over all revisions. */
 const EXPECTED: Record<string, { entries: number; solutions: number }> = {
-  "saltmarsh-interfaces": { entries: 4, solutions: 5 },
+  "saltmarsh-interfaces": { entries: 5, solutions: 6 },
   "ridgeback-cells": { entries: 1, solutions: 1 },
 };
 
@@ -56,6 +56,20 @@ describe("demo scenario seed", () => {
           currentRevisionNumber: 2,
         });
         expect(byTitle["Hexacyanoferrate couple on glassy carbon, 5 mM"].status).toBe("draft");
+        // A dilution of the KCl stock's countersigned revision 1, so the stock list is not empty
+        // and the notice of the stock's newer revision (the amendment) shows.
+        const links = await getDb()
+          .select()
+          .from(solutionParents)
+          .where(eq(solutionParents.labId, row.id));
+        expect(links).toHaveLength(1);
+        expect(links[0]).toMatchObject({
+          entryId: byTitle["0.1 mol/L KCl supporting electrolyte"].id,
+          parentEntryId: byTitle["KCl stock for the reference compartment"].id,
+          parentRevision: 1,
+          volumeMl: 10,
+          finalVolumeMl: 300,
+        });
       }
     }
   });

@@ -51,6 +51,7 @@ describe("migrations on an empty database", () => {
       "revisions",
       "sign_in_attempts",
       "signatures",
+      "solution_parents",
       "solution_results",
       "species",
       "trace_mappings",
@@ -69,6 +70,8 @@ describe("migrations on an empty database", () => {
       "entries_no_delete",
       "revisions_immutable",
       "signatures_immutable",
+      "solution_parents_immutable",
+      "solution_parents_same_lab",
       "solution_results_immutable",
     ]);
   });

@@ -21,7 +21,11 @@ describe("role permissions", () => {
       "Bench",
       "Entries",
       "Solution finder",
+      "Stocks",
     ]);
+    // The stock list is for every role.
+    for (const role of ["supervisor", "admin"] as const)
+      expect(navigationFor(role).map((i) => i.label)).toContain("Stocks");
     expect(navigationFor("supervisor").map((i) => i.label)).toContain("Review queue");
     expect(navigationFor("admin").map((i) => i.label)).toContain("Lab settings");
   });

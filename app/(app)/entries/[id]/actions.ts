@@ -3,6 +3,7 @@ import { revalidatePath } from "next/cache";
 import { requireActor } from "@/lib/access/actor";
 import { runFormAction, type ActionState } from "@/lib/http/action";
 import { setEntryArchived } from "@/lib/notebook/entries";
+import { updateStock } from "@/lib/notebook/lineage/stocks";
 import { startAmendment, submitEntry } from "@/lib/notebook/review";
 
 export async function submitEntryAction(_prev: ActionState, form: FormData): Promise<ActionState> {
@@ -40,4 +41,16 @@ export async function archiveEntryAction(_prev: ActionState, form: FormData): Pr
           : "Restored to the lists.",
     };
   });
+}
+
+export async function updateStockAction(_prev: ActionState, form: FormData): Promise<ActionState> {
+  return runFormAction(
+    form,
+    async ({ entryId = "", ...values }) => {
+      const saved = await updateStock(await requireActor(), entryId, values);
+      revalidatePath(`/entries/${entryId}`);
+      return { ok: true, message: `Saved as revision ${saved.revision} with the newer stock.` };
+    },
+    (values) => values,
+  );
 }

@@ -8,9 +8,16 @@ import { SignatureManifest } from "@/components/review/signature-manifest";
 import { requireActor } from "@/lib/access/actor";
 import { revisionHash } from "@/lib/document/prepare-revision";
 import { isAppError } from "@/lib/errors";
+import { NewerStockNotice } from "@/components/lineage/newer-stock-notice";
+import { newerStocksOf } from "@/lib/notebook/lineage/stocks";
 import { listPossibleReviewers } from "@/lib/notebook/review";
 import { openEntry } from "@/lib/notebook/revisions";
-import { amendEntryAction, archiveEntryAction, submitEntryAction } from "./actions";
+import {
+  amendEntryAction,
+  archiveEntryAction,
+  submitEntryAction,
+  updateStockAction,
+} from "./actions";
 import { EntryActions } from "./entry-actions";
 
 export const metadata: Metadata = { title: "Entry" };
@@ -19,8 +26,11 @@ async function load(id: string) {
   const actor = await requireActor();
   try {
     const opened = await openEntry(actor, id);
-    const reviewers = opened.actions.submit.allowed ? await listPossibleReviewers(actor) : [];
-    return { opened, reviewers };
+    const [reviewers, newerStocks] = await Promise.all([
+      opened.actions.submit.allowed ? listPossibleReviewers(actor) : Promise.resolve([]),
+      newerStocksOf(actor, id),
+    ]);
+    return { opened, reviewers, newerStocks, isAuthor: opened.entry.authorId === actor.userId };
   } catch (error) {
     if (isAppError(error) && error.code === "not_found") notFound();
     throw error;
@@ -38,7 +48,7 @@ function Row({ label, children }: { label: string; children: React.ReactNode }) 
 
 export default async function EntryPage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
-  const { opened, reviewers } = await load(id);
+  const { opened, reviewers, newerStocks, isAuthor } = await load(id);
   const { entry, authorName, projectName, actions, current, storedResults, signatures } = opened;
   const editable = actions.edit.allowed;
   const intact =
@@ -52,6 +62,19 @@ export default async function EntryPage({ params }: { params: Promise<{ id: stri
             {entry.amendmentReason}
           </p>
         ) : null}
+        <NewerStockNotice
+          entryId={entry.id}
+          revision={entry.currentRevisionNumber}
+          items={newerStocks}
+          canUpdate={actions.edit.allowed || actions.amend.allowed}
+          needsReason={entry.status === "countersigned"}
+          whyNot={
+            isAuthor
+              ? ((actions.edit.allowed ? null : actions.edit.reason) ?? null)
+              : "Only the author can update the entry to the newer stock."
+          }
+          update={updateStockAction}
+        />
         <EntryWorkspace
           key={`${entry.id}:${current.number}`}
           entryId={entry.id}
