@@ -1,6 +1,7 @@
 import {
   ACTIVITY_MODELS,
   listCouples,
+  listRedoxProbes,
   listReferenceElectrodes,
   listSolvents,
   resolveSpecies,
@@ -52,6 +53,27 @@ export const coupleOptions = once((): SelectOption[] =>
   listCouples().map((couple) => ({
     value: couple.id,
     label: `${couple.reaction}   E° = ${signedVolts(couple.standardPotentialV)}`,
+  })),
+);
+
+export interface RedoxProbeOption extends SelectOption {
+  /** The forms with a known diffusion coefficient, as options ("reduced", "oxidized"). */
+  forms: SelectOption[];
+}
+
+/** lib/chem's redox probes, each with the forms it can be present in (those with a known D). */
+export const redoxProbeOptions = once((): RedoxProbeOption[] =>
+  listRedoxProbes().map((probe) => ({
+    value: probe.id,
+    label: `${probe.name} — ${probe.medium}`,
+    forms: [
+      probe.diffusionReducedCm2PerS25C !== null
+        ? { value: "reduced", label: `${probe.reduced} (reduced) present` }
+        : null,
+      probe.diffusionOxidizedCm2PerS25C !== null
+        ? { value: "oxidized", label: `${probe.oxidized} (oxidized) present` }
+        : null,
+    ].filter((form): form is SelectOption => form !== null),
   })),
 );
 
