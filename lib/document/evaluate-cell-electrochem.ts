@@ -119,7 +119,7 @@ function electrolyteIons(
   electrolyte: SolutionBlockInput | null,
   stored: SolutionEvaluation | undefined,
 ): Ions {
-  if (!electrolyte) return idle("Link the electrolyte to a solution block of this entry.");
+  if (!electrolyte) return idle("Needs the electrolyte: link a solution block above.");
   const evaluation = stored ?? evaluateSolutionBlockCached(electrolyte);
   if (evaluation.status === "empty") return idle("The linked solution has no components yet.");
   if (evaluation.status === "error")
