@@ -56,6 +56,18 @@ export const coupleOptions = once((): SelectOption[] =>
   })),
 );
 
+const SUB = "₀₁₂₃₄₅₆₇₈₉";
+const SUP = "⁰¹²³⁴⁵⁶⁷⁸⁹";
+
+/** "Fe(CN)6^4-" → "Fe(CN)₆⁴⁻" for places that take plain text only (select options). */
+function formulaText(formula: string): string {
+  const [body, charge] = formula.split("^");
+  const sub = body.replace(/(?<=[A-Za-z)\]])\d+/g, (d) => [...d].map((c) => SUB[+c]).join(""));
+  if (!charge) return sub.replace(/[+-]$/, (sign) => (sign === "+" ? "⁺" : "⁻"));
+  const sign = charge.endsWith("-") ? "⁻" : "⁺";
+  return sub + [...charge.slice(0, -1)].map((c) => SUP[+c]).join("") + sign;
+}
+
 export interface RedoxProbeOption extends SelectOption {
   /** The forms with a known diffusion coefficient, as options ("reduced", "oxidized"). */
   forms: SelectOption[];
@@ -68,10 +80,10 @@ export const redoxProbeOptions = once((): RedoxProbeOption[] =>
     label: `${probe.name} — ${probe.medium}`,
     forms: [
       probe.diffusionReducedCm2PerS25C !== null
-        ? { value: "reduced", label: `${probe.reduced} (reduced) present` }
+        ? { value: "reduced", label: `reduced form, ${formulaText(probe.reduced)}` }
         : null,
       probe.diffusionOxidizedCm2PerS25C !== null
-        ? { value: "oxidized", label: `${probe.oxidized} (oxidized) present` }
+        ? { value: "oxidized", label: `oxidized form, ${formulaText(probe.oxidized)}` }
         : null,
     ].filter((form): form is SelectOption => form !== null),
   })),

@@ -203,9 +203,12 @@ export function CellElectrochemistry({
           testId="junction-potential"
           section={junction}
           value={
-            junction.status === "ok"
-              ? `Ej ${mV(junction.junctionPotentialV)} ± ${(junction.uncertaintyV * 1000).toFixed(1)} mV`
-              : null
+            junction.status === "ok" ? (
+              <>
+                E<sub>j</sub> {mV(junction.junctionPotentialV)} ±{" "}
+                {(junction.uncertaintyV * 1000).toFixed(1)} mV
+              </>
+            ) : null
           }
           formula={junction.status === "ok" ? junction.formula : undefined}
         >
@@ -265,9 +268,14 @@ export function CellElectrochemistry({
           testId="uncompensated-resistance"
           section={resistance}
           value={
-            resistance.status === "ok"
-              ? `Ru ${formatSignificant(resistance.resistanceOhm, 3)} Ω (r = ${formatSignificant(resistance.radiusMm, 3)} mm)`
-              : null
+            resistance.status === "ok" ? (
+              <>
+                R<sub>u</sub> {formatSignificant(resistance.resistanceOhm, 3)} Ω{" "}
+                <span className="font-sans text-xs text-ink-soft">
+                  (r = {formatSignificant(resistance.radiusMm, 3)} mm)
+                </span>
+              </>
+            ) : null
           }
           formula={resistance.status === "ok" ? resistance.formula : undefined}
         >
@@ -280,7 +288,7 @@ export function CellElectrochemistry({
           value={
             peak.status === "ok" ? (
               <>
-                ip {formatCurrentA(peak.peakCurrentA, 3)}{" "}
+                i<sub>p</sub> {formatCurrentA(peak.peakCurrentA, 3)}{" "}
                 <span className="font-sans text-xs text-ink-soft">
                   ({peak.forwardPeak} first, ΔEp {(peak.reversibleDeltaEpV * 1000).toFixed(1)} mV
                   {peak.iRDropV !== null ? `, iR ${mV(peak.iRDropV)}` : ""})

@@ -38,6 +38,27 @@ export default function ScanRatePlot({ points, expectedSlope }: ScanRatePlotProp
         height: 200,
         mode: 2,
         legend: { show: true, live: false },
+        hooks: {
+          draw: [
+            (u: uPlot) => {
+              const ctx = u.ctx;
+              ctx.save();
+              ctx.fillStyle = "#9c5430";
+              for (const p of points) {
+                ctx.beginPath();
+                ctx.arc(
+                  u.valToPos(p.sqrtScanRate, "x", true),
+                  u.valToPos(p.peakCurrentA * 1e6, "y", true),
+                  4.5 * devicePixelRatio,
+                  0,
+                  2 * Math.PI,
+                );
+                ctx.fill();
+              }
+              ctx.restore();
+            },
+          ],
+        },
         scales: { x: { time: false, range: [0, xMax] }, y: { range: [0, yMax * 1.1] } },
         axes: [
           { label: "√v / (V/s)^½", stroke: "#52606d", grid: { stroke: "#e5e7eb" } },
@@ -45,13 +66,8 @@ export default function ScanRatePlot({ points, expectedSlope }: ScanRatePlotProp
         ],
         series: [
           {},
-          {
-            label: "measured",
-            stroke: "#9c5430",
-            fill: "#9c5430",
-            paths: () => null,
-            points: { show: true, size: 8 },
-          },
+          // Drawn by the hook below: uPlot's own points need a path in its x–y mode.
+          { label: "measured", stroke: "#9c5430", paths: () => null, points: { show: false } },
           ...(line
             ? [
                 {
