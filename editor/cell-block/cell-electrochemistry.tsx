@@ -134,7 +134,7 @@ export function CellElectrochemistry({
     peak.status === "error" && peak.field === field ? peak.message : undefined;
 
   return (
-    <div className="space-y-3" aria-label="Electrolyte and electrode" role="group">
+    <div className="@container space-y-3" aria-label="Electrolyte and electrode" role="group">
       <h3 className="text-xs font-semibold tracking-wide text-ink uppercase">
         Electrolyte and electrode
       </h3>
@@ -197,7 +197,7 @@ export function CellElectrochemistry({
           </>
         ) : null}
       </div>
-      <div className="grid gap-3 md:grid-cols-2" aria-live="polite">
+      <div className="grid gap-3 @3xl:grid-cols-2" aria-live="polite">
         <Card
           title={`Liquid junction at the reference (${junction.status === "ok" ? junction.fillingLabel : reference} | electrolyte)`}
           testId="junction-potential"

@@ -29,7 +29,7 @@ interface ExpectedVsMeasuredProps {
   editable: boolean;
 }
 
-export function measuredFrom(view: TraceViewDto): MeasuredVoltammogram {
+function measuredFrom(view: TraceViewDto): MeasuredVoltammogram {
   return { scanRateVPerS: view.summary.header.scanRateVPerS ?? null, cycles: view.peaks };
 }
 

@@ -14,7 +14,7 @@ import type { SolutionEvaluation } from "./evaluate-solution-block";
  * lib/traces (passed in as plain numbers: lib/document does not import it).
  */
 
-export interface MeasuredPeak {
+interface MeasuredPeak {
   potentialV: number;
   /** Baseline-corrected, signed (anodic positive). */
   currentA: number;
@@ -22,7 +22,7 @@ export interface MeasuredPeak {
   rawCurrentA?: number;
 }
 
-export interface MeasuredCycle {
+interface MeasuredCycle {
   cycle: number;
   anodic: MeasuredPeak | null;
   cathodic: MeasuredPeak | null;

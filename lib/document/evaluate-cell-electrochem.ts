@@ -47,7 +47,7 @@ export interface JunctionSection {
   method: string;
 }
 
-export interface ConductivitySection {
+interface ConductivitySection {
   conductivitySPerM: number;
   conductivityMSPerCm: number;
   ionicStrengthMolPerL: number;
@@ -60,7 +60,7 @@ export interface ConductivitySection {
   method: string;
 }
 
-export interface ResistanceSection {
+interface ResistanceSection {
   radiusMm: number;
   resistanceOhm: number;
   formula: FormulaTex;
@@ -94,7 +94,7 @@ export interface CellElectrochemistry {
   peak: Section<PeakSection>;
 }
 
-export const CONDUCTIVITY_RANGE =
+const CONDUCTIVITY_RANGE =
   "Checked for 1:1 electrolytes up to about 0.1 mol/L in water (the KCl conductivity standards at 0.01 and 0.1 mol/kg); above that, or with multivalent ions, an estimate.";
 
 const idle = (message: string) => ({ status: "idle" as const, message });
@@ -105,7 +105,7 @@ function refusal(error: unknown): { status: "error"; field?: string; message: st
 }
 
 /** The cell's temperature wins over the solution's, as for the equilibrium potential. */
-export function cellTemperatureC(cell: CellBlockInput, electrolyte: SolutionBlockInput | null) {
+function cellTemperatureC(cell: CellBlockInput, electrolyte: SolutionBlockInput | null) {
   return cell.temperatureC ?? electrolyte?.temperatureC ?? 25;
 }
 
