@@ -8,6 +8,7 @@ import path from "node:path";
 import { describe, expect, it } from "vitest";
 import { DEMO_LABS, DEMO_PASSWORD } from "@/lib/demo/scenario";
 import { cvTrace, simulateReversibleCv, writeTraceFile } from "@/lib/traces/simulate";
+import { axeViolations, serious } from "../support/axe";
 import { BASE_URL, signIn, useBrowser } from "../support/e2e-browser";
 
 const researcher = DEMO_LABS[0].members.find((m) => m.email.startsWith("tobin"))!;
@@ -104,6 +105,8 @@ describe("cell block and voltammogram, expected against measured", () => {
     // iR at the peak: the cell block's R_u (1/(4κr), Newman 1966) times the peak current.
     expect(await panel.getByTestId("ir-drop").textContent()).toMatch(/^\d+\.\d mV$/);
     await panel.getByTestId("scan-rate-plot").waitFor();
+    // The new parts pass the WCAG 2 A and AA rules like the rest of the entry page.
+    expect(serious(await axeViolations(page))).toEqual([]);
 
     const dir = process.env.E2E_SCREENSHOT_DIR;
     if (dir) {
