@@ -1,6 +1,7 @@
 import {
   ACTIVITY_MODELS,
   listCouples,
+  listRedoxProbes,
   listReferenceElectrodes,
   listSolvents,
   resolveSpecies,
@@ -52,6 +53,39 @@ export const coupleOptions = once((): SelectOption[] =>
   listCouples().map((couple) => ({
     value: couple.id,
     label: `${couple.reaction}   E° = ${signedVolts(couple.standardPotentialV)}`,
+  })),
+);
+
+const SUB = "₀₁₂₃₄₅₆₇₈₉";
+const SUP = "⁰¹²³⁴⁵⁶⁷⁸⁹";
+
+/** "Fe(CN)6^4-" → "Fe(CN)₆⁴⁻" for places that take plain text only (select options). */
+function formulaText(formula: string): string {
+  const [body, charge] = formula.split("^");
+  const sub = body.replace(/(?<=[A-Za-z)\]])\d+/g, (d) => [...d].map((c) => SUB[+c]).join(""));
+  if (!charge) return sub.replace(/[+-]$/, (sign) => (sign === "+" ? "⁺" : "⁻"));
+  const sign = charge.endsWith("-") ? "⁻" : "⁺";
+  return sub + [...charge.slice(0, -1)].map((c) => SUP[+c]).join("") + sign;
+}
+
+export interface RedoxProbeOption extends SelectOption {
+  /** The forms with a known diffusion coefficient, as options ("reduced", "oxidized"). */
+  forms: SelectOption[];
+}
+
+/** lib/chem's redox probes, each with the forms it can be present in (those with a known D). */
+export const redoxProbeOptions = once((): RedoxProbeOption[] =>
+  listRedoxProbes().map((probe) => ({
+    value: probe.id,
+    label: `${probe.name} — ${probe.medium}`,
+    forms: [
+      probe.diffusionReducedCm2PerS25C !== null
+        ? { value: "reduced", label: `reduced form, ${formulaText(probe.reduced)}` }
+        : null,
+      probe.diffusionOxidizedCm2PerS25C !== null
+        ? { value: "oxidized", label: `oxidized form, ${formulaText(probe.oxidized)}` }
+        : null,
+    ].filter((form): form is SelectOption => form !== null),
   })),
 );
 

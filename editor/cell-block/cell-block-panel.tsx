@@ -10,6 +10,8 @@ import { referenceElectrodeLabel } from "../chem-catalogue";
 import { NumberField } from "../ui/number-field";
 import { SelectField } from "../ui/select-field";
 import { TextField } from "../ui/text-field";
+import { SafetyCaution } from "../ui/safety-caution";
+import { CellElectrochemistry } from "./cell-electrochemistry";
 import { CellPotential } from "./cell-potential";
 import { ElectrodeFieldset } from "./electrode-fieldset";
 
@@ -195,6 +197,15 @@ export function CellBlockPanel({
             onChange={patch}
           />
         </div>
+        <div className="border-t border-dashed border-ink-faint/40 pt-3">
+          <CellElectrochemistry
+            cell={value}
+            electrolyte={electrolyte}
+            editable={editable}
+            onChange={patch}
+          />
+        </div>
+        <SafetyCaution />
       </div>
     </section>
   );

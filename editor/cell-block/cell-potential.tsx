@@ -5,7 +5,6 @@ import type { CellBlockInput, SolutionBlockInput } from "@/lib/document/block-sc
 import { formatPotentialV } from "@/lib/ui/format-number";
 import { coupleOptions, referenceElectrodeLabel } from "../chem-catalogue";
 import { NumberField } from "../ui/number-field";
-import { SafetyCaution } from "../ui/safety-caution";
 import { SelectField } from "../ui/select-field";
 import { computeCellPotential } from "@/lib/document/evaluate-cell-block";
 import { evaluationFromStored } from "@/lib/document/stored-evaluation";
@@ -69,6 +68,7 @@ export function CellPotential({ cell, electrolyte, editable, onChange }: CellPot
             <div className="rounded-md border border-lagoon-100 bg-lagoon-50/60 px-3 py-1.5">
               <dt className="text-xs font-medium text-ink-soft">
                 E vs {referenceElectrodeLabel(potential.reference)}
+                {potential.junctionV !== null ? " (junction included)" : ""}
               </dt>
               <dd
                 className="font-mono text-base text-lagoon-700 tabular-nums"
@@ -114,7 +114,6 @@ export function CellPotential({ cell, electrolyte, editable, onChange }: CellPot
       ) : potential.status === "idle" ? (
         <p className="text-sm text-ink-soft">{potential.message}</p>
       ) : null}
-      <SafetyCaution />
     </div>
   );
 }

@@ -1,7 +1,7 @@
 "use client";
 
 import type { Editor } from "@tiptap/core";
-import { useQuery } from "@tanstack/react-query";
+import { useQueries, useQuery } from "@tanstack/react-query";
 import { lazy, Suspense, useMemo, useState } from "react";
 import { convertPotential, listReferenceElectrodes } from "@/lib/chem";
 import type { TraceBlockInput } from "@/lib/document/block-schemas";
@@ -13,7 +13,10 @@ import { SelectField } from "../ui/select-field";
 import { referenceElectrodeLabel } from "../chem-catalogue";
 import { MappingDialog } from "./mapping-dialog";
 import { PeaksTable } from "./peaks-table";
+import { useEntrySolutionBlocks } from "../cell-block/use-entry-solution-blocks";
+import { ExpectedVsMeasured, type LinkedVoltammogram } from "./expected-vs-measured";
 import { useEntryCellBlocks } from "./use-entry-cell-blocks";
+import { useEntryTraceBlocks } from "./use-entry-trace-blocks";
 
 // uPlot is fetched only when a trace is shown.
 const TracePlot = lazy(() => import("./trace-plot"));
@@ -33,6 +36,11 @@ const PREFIXES = [
   { factor: 1e6, symbol: "µ" },
   { factor: 1e9, symbol: "n" },
 ];
+
+/** The loaded views only: structurally shared, so unchanged traces keep their identity. */
+function combineViews(results: { data?: TraceViewDto }[]): (TraceViewDto | undefined)[] {
+  return results.map((r) => r.data);
+}
 
 /** The SI prefix that puts the largest current between 1 and 1000 in its unit. */
 function currentPrefix(values: number[]) {
@@ -55,6 +63,34 @@ export function TraceBlockPanel({ editor, value, onChange, editable }: TraceBloc
   const cells = useEntryCellBlocks(editor);
   const cell = cells.find((c) => c.blockId === value.cellBlockId) ?? null;
   const areaCm2 = cell?.workingElectrode.areaCm2 ?? null;
+  const solutions = useEntrySolutionBlocks(editor);
+  const electrolyte = solutions.find((s) => s.blockId === cell?.electrolyteBlockId) ?? null;
+  // The entry's traces linked to the same cell, for i_p against √v (the query cache is shared).
+  const traceBlocks = useEntryTraceBlocks(editor);
+  const siblings = useMemo(
+    () => traceBlocks.filter((t) => cell !== null && t.cellBlockId === cell.blockId),
+    [traceBlocks, cell],
+  );
+  const siblingViews = useQueries({
+    queries: siblings.map((t) => ({
+      queryKey: ["trace", t.attachmentId],
+      queryFn: () => apiFetch<TraceViewDto>(`/api/attachments/${t.attachmentId}/trace`),
+      staleTime: Infinity,
+    })),
+    combine: combineViews,
+  });
+  const linked = useMemo(
+    () =>
+      siblings.flatMap((t, i): LinkedVoltammogram[] => {
+        const data = siblingViews[i];
+        const technique = data?.summary.technique;
+        return data &&
+          (technique === "cyclic-voltammetry" || technique === "linear-sweep-voltammetry")
+          ? [{ label: t.name || data.name, view: data }]
+          : [];
+      }),
+    [siblings, siblingViews],
+  );
   const patch = (changes: Partial<TraceBlockInput>) => onChange({ ...value, ...changes });
   const view = query.data;
   const fileReference = view?.summary.header.referenceElectrode?.id ?? null;
@@ -237,6 +273,15 @@ export function TraceBlockPanel({ editor, value, onChange, editable }: TraceBloc
                 peaks={view.peaks}
                 shift={shown?.shift ?? 0}
                 perArea={shown?.perArea ?? 1}
+              />
+            ) : null}
+            {isVoltammetry && cell ? (
+              <ExpectedVsMeasured
+                cell={cell}
+                electrolyte={electrolyte}
+                view={view}
+                linked={linked}
+                editable={editable}
               />
             ) : null}
             {view.summary.problems.length ? (

@@ -44,6 +44,9 @@ export function defaultCellBlockInput(overrides: Partial<CellBlockInput> = {}): 
     channel: "",
     couple: null,
     pH: null,
+    workingElectrodeRadiusMm: null,
+    applyJunctionPotential: false,
+    redoxProbe: null,
     ...overrides,
   };
 }

@@ -112,6 +112,9 @@ export const solutionBlockInputSchema = z.strictObject({
 });
 export type SolutionBlockInput = z.infer<typeof solutionBlockInputSchema>;
 
+/** What the working electrode's radius field takes, mm: a 10 nm nanoelectrode to a 10 cm disk. */
+export const WORKING_ELECTRODE_RADIUS_MM = { min: 1e-5, max: 100 } as const;
+
 const electrodeSchema = z.strictObject({
   material: shortText(80),
   areaCm2: boundedNumber(-1e6, 1e6).nullable(),
@@ -137,8 +140,35 @@ export const cellBlockInputSchema = z.strictObject({
   couple: shortText(60).nullable(),
   /** Needed only for the RHE scale. */
   pH: boundedNumber(-20, 30).nullable(),
+  /*
+   * Added with the cell's electrochemistry (issue 14). Optional, so documents stored before
+   * still validate; a missing value reads as null / false.
+   */
+  /** Radius of the disk working electrode, mm (10 nm to 10 cm): R_u and the Randles–Ševčík area. */
+  workingElectrodeRadiusMm: boundedNumber(
+    WORKING_ELECTRODE_RADIUS_MM.min,
+    WORKING_ELECTRODE_RADIUS_MM.max,
+  )
+    .nullable()
+    .optional(),
+  /** Include the liquid junction (Henderson) in potentials against the reference electrode. */
+  applyJunctionPotential: z.boolean().optional(),
+  /** A redox probe of lib/chem's catalogue, for the expected reversible peak current. */
+  redoxProbe: z
+    .strictObject({
+      /** lib/chem's probe id, e.g. "ferricyanide/ferrocyanide". */
+      probe: shortText(60),
+      /** The form in the solution; the first sweep converts it. */
+      form: z.enum(["oxidized", "reduced"]),
+      /** Null: read from the linked solution when it holds that species. */
+      concentrationMmolPerL: boundedNumber(-1e6, 1e6).nullable(),
+      scanRateMVPerS: boundedNumber(-1e9, 1e9).nullable(),
+    })
+    .nullable()
+    .optional(),
 });
 export type CellBlockInput = z.infer<typeof cellBlockInputSchema>;
+export type RedoxProbeChoice = NonNullable<CellBlockInput["redoxProbe"]>;
 
 const attachmentIdSchema = z.uuid("An attachment id is a UUID.");
 

@@ -1,5 +1,6 @@
 import { convertPotentialDetailed, isChemInputError, nernstPotentialDetailed } from "@/lib/chem";
 import type { CellBlockInput, SolutionBlockInput } from "@/lib/document/block-schemas";
+import { cellJunctionPotential } from "@/lib/document/evaluate-cell-electrochem";
 import {
   evaluateSolutionBlockCached,
   type SolutionEvaluation,
@@ -11,7 +12,10 @@ export type CellPotentialResult =
   | {
       status: "ok";
       vsShe: number;
+      /** What the potentiostat reads against the reference: the junction included when asked. */
       vsReference: number;
+      /** The liquid junction added to vsReference (V); null when not applied. */
+      junctionV: number | null;
       reference: string;
       temperatureC: number;
       reaction: string;
@@ -111,10 +115,22 @@ export function computeCellPotential(
       temperatureC,
       ...pH,
     });
+    // A potential read against the reference contains +Ej (lib/chem's junction-potential.ts).
+    let junctionV: number | null = null;
+    if (cell.applyJunctionPotential) {
+      const junction = cellJunctionPotential(cell, electrolyte, evaluation);
+      if (junction.status === "ok") {
+        junctionV = junction.junctionPotentialV;
+        notes.push(
+          `E vs ${reference} includes the liquid junction, ${(junctionV * 1000).toFixed(1)} ± ${(junction.uncertaintyV * 1000).toFixed(1)} mV (Henderson): what the potentiostat reads.`,
+        );
+      } else notes.push(`Liquid junction not applied: ${junction.message}`);
+    }
     return {
       status: "ok",
       vsShe: nernst.potentialV,
-      vsReference: converted.potentialV,
+      vsReference: converted.potentialV + (junctionV ?? 0),
+      junctionV,
       reference,
       temperatureC,
       reaction: nernst.reaction,

@@ -3,6 +3,7 @@ import katex from "katex";
 import { SIGNATURE_MEANING_LABELS, type SignatureMeaning } from "@/lib/contract/vocabulary";
 import type { SolutionBlockInput, CellBlockInput } from "@/lib/document/block-schemas";
 import { computeCellPotential } from "@/lib/document/evaluate-cell-block";
+import { evaluateCellElectrochemistry } from "@/lib/document/evaluate-cell-electrochem";
 import { evaluationFromStored, type StoredSolution } from "@/lib/document/stored-evaluation";
 import { formatPotentialV, formatSignificant } from "@/lib/ui/format-number";
 import type { EntryArchive } from "./archive";
@@ -174,11 +175,26 @@ function cellBlock(cell: CellBlockInput, ctx: Context): string {
     ? (ctx.solutions.get(cell.electrolyteBlockId) ?? null)
     : null;
   const stored = electrolyte ? ctx.stored[electrolyte.blockId] : undefined;
-  const potential = computeCellPotential(
-    cell,
-    electrolyte,
-    electrolyte && stored ? evaluationFromStored(electrolyte, stored) : undefined,
-  );
+  const storedEvaluation =
+    electrolyte && stored ? evaluationFromStored(electrolyte, stored) : undefined;
+  const potential = computeCellPotential(cell, electrolyte, storedEvaluation);
+  // The same lib/document evaluation the editor shows, from the stored electrolyte.
+  const chem = evaluateCellElectrochemistry(cell, electrolyte, storedEvaluation);
+  const mv = (v: number) => `${v < 0 ? "−" : "+"}${Math.abs(v * 1000).toFixed(1)} mV`;
+  const chemLines = [
+    chem.junction.status === "ok"
+      ? `Liquid junction (${escape(chem.junction.fillingLabel)} | electrolyte, Henderson): E<sub>j</sub> = ${mv(chem.junction.junctionPotentialV)} ± ${(chem.junction.uncertaintyV * 1000).toFixed(1)} mV${chem.junction.applied ? ", included in E vs the reference" : ""}`
+      : null,
+    chem.conductivity.status === "ok"
+      ? `Conductivity (estimate${chem.conductivity.inRange ? "" : ", outside the checked range"}): κ = ${formatSignificant(chem.conductivity.conductivityMSPerCm, 4)} mS/cm`
+      : null,
+    chem.resistance.status === "ok"
+      ? `Uncompensated resistance of the ${formatSignificant(chem.resistance.radiusMm, 3)} mm disk (Newman, upper bound): R<sub>u</sub> = ${formatSignificant(chem.resistance.resistanceOhm, 3)} Ω`
+      : null,
+    chem.peak.status === "ok"
+      ? `Expected reversible peak (Randles–Ševčík, ${escape(chem.peak.probeName)}, ${formatSignificant(chem.peak.scanRateVPerS * 1000, 3)} mV/s): i<sub>p</sub> = ${formatSignificant(chem.peak.peakCurrentA * 1e6, 3)} µA`
+      : null,
+  ].filter((line): line is string => line !== null);
   const electrode = (
     label: string,
     e: { material: string; areaCm2: number | null; pretreatment: string[] },
@@ -198,9 +214,10 @@ function cellBlock(cell: CellBlockInput, ctx: Context): string {
     </tbody></table>
     ${
       potential.status === "ok"
-        ? `<p class="numbers">${escape(potential.reaction)}: E = ${formatPotentialV(potential.vsReference)} V vs ${escape(potential.reference)} (${formatPotentialV(potential.vsShe)} V vs SHE) at ${escape(potential.temperatureC)} °C</p>`
+        ? `<p class="numbers">${escape(potential.reaction)}: E = ${formatPotentialV(potential.vsReference)} V vs ${escape(potential.reference)}${potential.junctionV !== null ? " (junction included)" : ""} (${formatPotentialV(potential.vsShe)} V vs SHE) at ${escape(potential.temperatureC)} °C</p>`
         : `<p class="meta">${escape(potential.message)}</p>`
     }
+    ${chemLines.map((line) => `<p class="numbers">${line}</p>`).join("")}
   </div>`;
 }
 

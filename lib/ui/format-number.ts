@@ -40,6 +40,23 @@ export function formatPotentialV(value: number | null | undefined): string {
   return `${value < 0 ? "−" : "+"}${text}`;
 }
 
+const CURRENT_PREFIXES = [
+  { factor: 1, unit: "A" },
+  { factor: 1e3, unit: "mA" },
+  { factor: 1e6, unit: "µA" },
+  { factor: 1e9, unit: "nA" },
+  { factor: 1e12, unit: "pA" },
+];
+
+/** A current with the prefix that puts it between 1 and 1000: "77.72 µA", "−1.204 nA". */
+export function formatCurrentA(value: number | null | undefined, digits = 4): string {
+  if (value === null || value === undefined || !Number.isFinite(value)) return "—";
+  const prefix =
+    CURRENT_PREFIXES.find((p) => Math.abs(value) * p.factor >= 1) ??
+    CURRENT_PREFIXES[CURRENT_PREFIXES.length - 1];
+  return `${formatSignificant(value * prefix.factor, digits)} ${prefix.unit}`;
+}
+
 /** Parses what a person types into a number field: "1,5", "1e-3", "−0.2". Null when empty or not a number. */
 export function parseTypedNumber(text: string): number | null {
   const cleaned = text
