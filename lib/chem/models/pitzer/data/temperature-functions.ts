@@ -16,8 +16,20 @@
  * - Campbell et al. (1993) Mar. Chem. 44, 221, eq. 31: HCl, 0–55 °C (β0 a2 = −2.1197e-3,
  *   the misprint corrected as in Waters & Millero 2013).
  * - Pabalan & Pitzer (1987) Geochim. Cosmochim. Acta 51, 2429: NaOH, 0–350 °C.
- * Public copy of the last three: github mvdh7/pytzer pytzer/parameters.py (bC_*_HM83,
- * bC_H_Cl_CMR93, bC_Na_OH_PP87i).
+ * - Millero & Pierrot (1998) Aquat. Geochem. 4, 153–199, eq. 15 and appendix tables: nitrates
+ *   and NaClO4, 0–50 °C. Their P_RL are the ∂P/∂T of Silvester & Pitzer (1978) / Pitzer (1991)
+ *   (data/temperature-derivatives.ts, identical numbers) and their P_J the heat-capacity terms;
+ *   P_R are the Pitzer & Mayorga (1973) 25 °C values, so the rows are anchored on the 25 °C
+ *   compilation (May et al. 2011). Their molality limit is that of the ∂P/∂T fit; the 25 °C
+ *   row keeps its own range at 25 ± 0.5 °C (`limitAwayFrom25`).
+ * Public copy of the last four: github mvdh7/pytzer pytzer/parameters.py (bC_*_HM83,
+ * bC_H_Cl_CMR93, bC_Na_OH_PP87i, bC_*_MP98).
+ *
+ * KOH and the other perchlorates (LiClO4, KClO4, HClO4, Mg/Ca(ClO4)2) and nitrates (LiNO3,
+ * HNO3) have no published temperature function in the sources at hand: they keep the
+ * first-order derivatives (10–40 °C) or the 25 °C set, and say so away from it. (The KOH row of
+ * the MP98 transcription is marked there as a copy of the KI coefficients, not KOH data, and
+ * is not used.)
  */
 import type { TemperatureForm } from "../temperature/forms";
 
@@ -34,6 +46,12 @@ export interface PitzerTemperatureFunctionRow {
   alpha2: number;
   /** True: add F(T) − F(298.15 K) to the 25 °C compilation row instead of using F(T) itself. */
   anchored?: boolean;
+  /**
+   * Anchored rows only. True: at 25 ± 0.5 °C the 25 °C row's own molality range holds, and
+   * `maxMolality` (the fit of the temperature terms) limits only away from 25 °C, said in a
+   * message as for first-order derivatives. False/absent: the smaller of the two always.
+   */
+  limitAwayFrom25?: boolean;
   /** Temperatures (°C) the function is stated for in Ionleaf. */
   rangeC: { min: number; max: number };
   /** Top of the molality range of the fit (mol/kg). */
@@ -46,6 +64,35 @@ const APPELO =
 const HM83 = "Holmes & Mesmer (1983) J. Phys. Chem. 87, 1242-1255, eq. 25";
 const CMR93 = "Campbell et al. (1993) Mar. Chem. 44, 221-233, eq. 31";
 const PP87 = "Pabalan & Pitzer (1987) Geochim. Cosmochim. Acta 51, 2429-2443";
+const MP98 = "Millero & Pierrot (1998) Aquat. Geochem. 4, 153-199, eq. 15";
+const MP98_RANGE = { min: 0, max: 50 };
+
+/** One Millero & Pierrot (1998) row: [P_R, P_J·10⁵, P_RL·10⁴] for β0, β1 and Cφ. */
+const mp98 = (
+  salt: string,
+  cation: string,
+  anion: string,
+  beta0: readonly number[],
+  beta1: readonly number[],
+  cPhi: readonly number[],
+  maxMolality: number,
+): PitzerTemperatureFunctionRow => ({
+  salt,
+  cation,
+  anion,
+  form: "millero-pierrot-1998",
+  beta0,
+  beta1,
+  beta2: null,
+  cPhi,
+  alpha1: 2,
+  alpha2: 12,
+  anchored: true,
+  limitAwayFrom25: true,
+  rangeC: MP98_RANGE,
+  maxMolality,
+  source: MP98,
+});
 
 const WATER = { min: 0, max: 100 };
 
@@ -226,4 +273,50 @@ export const PITZER_TEMPERATURE_FUNCTIONS: readonly PitzerTemperatureFunctionRow
     maxMolality: 6,
     source: PP87,
   },
+  // Molality limits: those of the Silvester & Pitzer (1978) / Pitzer (1991) ∂P/∂T fits.
+  mp98(
+    "NaNO3",
+    "Na+",
+    "NO3-",
+    [0.0068, -2.24, 12.66],
+    [0.1783, -2.96, 20.6],
+    [-0.00072, 0.594, -2.316],
+    2.2,
+  ),
+  mp98(
+    "KNO3",
+    "K+",
+    "NO3-",
+    [-0.0816, -0.785, 2.06],
+    [0.0494, -8.26, 64.5],
+    [0.0066, 0, 3.97],
+    2.4,
+  ),
+  mp98(
+    "NaClO4",
+    "Na+",
+    "ClO4-",
+    [0.0554, -0.611, 12.96],
+    [0.2755, -6.35, 22.97],
+    [-0.00118, 0.0562, -1.623],
+    6,
+  ),
+  mp98(
+    "Mg(NO3)2",
+    "Mg^2+",
+    "NO3-",
+    [0.367125, -1.2322, 5.15],
+    [1.58475, 4.0492, 44.925],
+    [-0.020625, 0, 0],
+    0.1,
+  ),
+  mp98(
+    "Ca(NO3)2",
+    "Ca^2+",
+    "NO3-",
+    [0.210825, 4.0248, 5.295],
+    [1.40925, -13.289, 91.875],
+    [-0.020142, -15.435, 0],
+    0.1,
+  ),
 ];

@@ -12,9 +12,16 @@
  * - "pabalan-pitzer-1987": P = a0 + a1 p + a2/T + a3 p/T + a4 ln T + a5 T + a6 T p + a7 T²
  *   + a8 T² p + a9/(T − 227) + a10/(647 − T) + a11 p/(647 − T), p in bar
  *   (Pabalan & Pitzer 1987, Geochim. Cosmochim. Acta 51, 2429, NaOH equation).
+ * - "millero-pierrot-1998": a = [P_R, P_J·10⁵, P_RL·10⁴] of Millero & Pierrot (1998) Aquat.
+ *   Geochem. 4, 153, eq. 15 (P_RL = ∂P/∂T at Tr, P_J = ∂²P/∂T² + (2/T)∂P/∂T, taken constant):
+ *   P = P_R + P_J (T² − Tr²)/6 + (P_J Tr³/3 − P_RL Tr²)(1/T − 1/Tr).
+ *   This is the integral of the definition of P_J with P(Tr) = P_R and ∂P/∂T(Tr) = P_RL; the
+ *   public transcription (pytzer MP98_eq15) multiplies the P_RL term by P_J as well, which
+ *   would make ∂P/∂T at 25 °C ≈ 0 against the P_RL of Silvester & Pitzer (1978) that the
+ *   same paper tabulates; the tests check ∂P/∂T(Tr) = P_RL.
  */
 export type TemperatureForm =
-  "phreeqc" | "holmes-mesmer-1983" | "moller-1988" | "pabalan-pitzer-1987";
+  "phreeqc" | "holmes-mesmer-1983" | "moller-1988" | "pabalan-pitzer-1987" | "millero-pierrot-1998";
 
 const TR = 298.15;
 /** Pressure of the 1 atm isobar in bar, for the one form that carries pressure terms. */
@@ -66,6 +73,15 @@ export function evaluateForm(form: TemperatureForm, a: readonly number[], T: num
         a[9] / (T - 227) +
         a[10] / (647 - T) +
         (a[11] * p) / (647 - T)
+      );
+    }
+    case "millero-pierrot-1998": {
+      const pJ = a[1] * 1e-5;
+      const pRL = a[2] * 1e-4;
+      return (
+        a[0] +
+        (pJ * (T * T - TR * TR)) / 6 +
+        ((pJ * TR ** 3) / 3 - pRL * TR * TR) * (1 / T - 1 / TR)
       );
     }
   }

@@ -1,7 +1,9 @@
 /**
  * The binary parameters of one cation–anion pair at a temperature, and the temperature range
  * they are stated for. In order of preference:
- *   1. a full published temperature function (data/temperature-functions.ts), within its range;
+ *   1. a full published temperature function (data/temperature-functions.ts), within its range
+ *      (rows marked `limitAwayFrom25` keep the 25 °C row's molality range at 25 ± 0.5 °C and
+ *      limit the temperature terms to their own fit elsewhere, as derivatives are, with a message);
  *   2. the 25 °C set moved by first-order derivatives, P(T) = P(25 °C) + (∂P/∂T)(T − 298.15 K)
  *      (data/temperature-derivatives.ts), stated for 25 ± 15 °C: measured against Pitzer, Peiper
  *      & Busey (1984) NaCl, γ± stays within 2 % at 10–40 °C and errs by 5–20 % at 0 and 50–100 °C;
@@ -48,6 +50,8 @@ export function pairAtTemperature(
   const fn = temperatureFunction(row.cation, row.anion);
   if (fn) {
     const Tr = 298.15;
+    const nearTwentyFive =
+      Math.abs(temperatureC - REFERENCE_TEMPERATURE_C) <= TWENTY_FIVE_ONLY_SPAN_K;
     const at = (c: readonly number[] | null, value25: number) =>
       !c
         ? fn.anchored
@@ -56,9 +60,16 @@ export function pairAtTemperature(
         : fn.anchored
           ? value25 + evaluateForm(fn.form, c, T) - evaluateForm(fn.form, c, Tr)
           : evaluateForm(fn.form, c, T);
-    const nearTwentyFive =
-      Math.abs(temperatureC - REFERENCE_TEMPERATURE_C) <= TWENTY_FIVE_ONLY_SPAN_K;
-    const maxMolality = fn.anchored ? Math.min(fn.maxMolality, row.maxMolality) : fn.maxMolality;
+    const ownRange = fn.anchored && fn.limitAwayFrom25;
+    const maxMolality = ownRange
+      ? row.maxMolality
+      : fn.anchored
+        ? Math.min(fn.maxMolality, row.maxMolality)
+        : fn.maxMolality;
+    const temperatureLimit =
+      ownRange && !nearTwentyFive && fn.maxMolality < row.maxMolality
+        ? saltIonicStrength(charges.cation, charges.anion, fn.maxMolality)
+        : null;
     const messages =
       temperatureC < fn.rangeC.min || temperatureC > fn.rangeC.max
         ? [
@@ -74,7 +85,10 @@ export function pairAtTemperature(
         alpha2: fn.anchored ? row.alpha2 : fn.alpha2,
         cPhi: at(fn.cPhi, row.cPhi),
       },
-      maxI: saltIonicStrength(charges.cation, charges.anion, maxMolality),
+      maxI:
+        ownRange && row.maxIonicStrengthMolal !== undefined
+          ? row.maxIonicStrengthMolal
+          : saltIonicStrength(charges.cation, charges.anion, maxMolality),
       maxMolality,
       rangeC: fn.rangeC,
       source: fn.anchored ? `${row.source}; T-dependence ${fn.source}` : fn.source,
@@ -84,7 +98,7 @@ export function pairAtTemperature(
         : fn.anchored
           ? `${fn.salt}: 25 °C β and Cφ of ${row.source}, moved to ${fmt(temperatureC)} °C by the temperature function of ${fn.source}.`
           : `${fn.salt}: β and Cφ at ${fmt(temperatureC)} °C from the temperature function of ${fn.source}.`,
-      derivativeMaxI: null,
+      derivativeMaxI: temperatureLimit,
     };
   }
   const dT = temperatureC - REFERENCE_TEMPERATURE_C;
