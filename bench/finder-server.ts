@@ -39,6 +39,8 @@ export function ensureBuild(databaseUrl: string): void {
 
 export interface RunningApp {
   url: string;
+  /** The `next start` process (its server may run in children of it). */
+  pid: number;
   stop: () => Promise<void>;
 }
 
@@ -77,7 +79,7 @@ export async function startApp(
   );
   const url = `http://localhost:${port}`;
   await waitFor(`${url}/api/health`, 90);
-  return { url, stop: stopper(child) };
+  return { url, pid: child.pid!, stop: stopper(child) };
 }
 
 /** A bare Node.js HTTP handler answering what the no-op route answers: the floor. */

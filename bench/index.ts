@@ -12,6 +12,7 @@ import { printSweepBench } from "./chem-sweep";
 import { printTraceParseBench } from "./trace-parse";
 import { printFinderBench } from "./finder";
 import { printLoadBench } from "./load";
+import { printUploadBench } from "./upload";
 
 console.log(
   `Node ${process.version}, ${os.cpus().length} CPU(s), load average ${os
@@ -30,6 +31,7 @@ const reports = [
   printTraceParseBench(),
   printFinderBench(),
   printLoadBench(),
+  printUploadBench(),
 ];
 
 const failed = reports.filter((r) => !r.pass).length;

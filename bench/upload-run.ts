@@ -1,0 +1,281 @@
+/**
+ * Attachments against the production build (run by bench/upload.ts in its own process, with
+ * the scripts' tsconfig):
+ *
+ * 1. A 200 MB file uploaded through the running route handler
+ *    (POST /api/entries/:id/attachments): the server's resident memory (the `next start`
+ *    process and its children, from /proc) is sampled every 50 ms during the upload and
+ *    compared with its baseline measured in the same run after a 1 MB warm-up upload.
+ *    Target (attachments issue): the peak stays within 100 MB of the baseline.
+ * 2. A trace block over a 1 000 000-row voltammogram export (~50 MB): headless Chromium opens
+ *    the entry, and the time from navigation start to the first frame after the plot's canvas
+ *    appears is reported, beside the same page's first frame with only text (the baseline).
+ *    Target: under 1 s.
+ *
+ * Exits 1 when a target is missed.
+ */
+import {
+  closeSync,
+  mkdtempSync,
+  openAsBlob,
+  openSync,
+  readFileSync,
+  rmSync,
+  writeSync,
+} from "node:fs";
+import os from "node:os";
+import path from "node:path";
+import { randomBytes, randomUUID } from "node:crypto";
+import { chromium } from "playwright-core";
+import { createDatabase } from "@/db/client";
+import { insertLab } from "@/db/queries/labs";
+import { insertProject } from "@/db/queries/projects";
+import { insertUser } from "@/db/queries/users";
+import { hashPassword } from "@/lib/auth/password";
+import { simulateReversibleCv } from "@/lib/traces/simulate";
+import { runMigrations } from "@/scripts/migrate";
+import { ensureScratchDatabase } from "@/scripts/support/scratch-database";
+import { ensureBuild, signIn, startApp } from "./finder-server";
+
+const APP_PORT = Number(process.env.IONLEAF_UPLOAD_APP_PORT ?? 3480);
+const PASSWORD = "upload-bench-password-7";
+const UPLOAD_BYTES = 200_000_000;
+const TRACE_ROWS = 1_000_000;
+const MEMORY_TARGET_MB = 100;
+const PAINT_TARGET_MS = 1000;
+
+/** Resident memory of a process and all its descendants, in MB (Linux /proc). */
+function treeRssMb(pid: number): number {
+  let kb = 0;
+  const visit = (p: number) => {
+    try {
+      const status = readFileSync(`/proc/${p}/status`, "utf8");
+      kb += Number(/VmRSS:\s+(\d+)/.exec(status)?.[1] ?? 0);
+      const children = readFileSync(`/proc/${p}/task/${p}/children`, "utf8").trim();
+      for (const c of children ? children.split(/\s+/) : []) visit(Number(c));
+    } catch {
+      // the process ended meanwhile
+    }
+  };
+  visit(pid);
+  return kb / 1024;
+}
+
+/** A PDF-looking file (detected as application/pdf from its first bytes), written in 1 MB chunks. */
+function writeBigFile(file: string, bytes: number) {
+  const fd = openSync(file, "w");
+  const chunk = randomBytes(1 << 20);
+  writeSync(fd, "%PDF-1.4\n%bench\n");
+  let written = 16;
+  while (written < bytes) {
+    const n = Math.min(chunk.length, bytes - written);
+    writeSync(fd, chunk, 0, n);
+    written += n;
+  }
+  closeSync(fd);
+}
+
+function writeCvExport(file: string, rows: number) {
+  const sim = simulateReversibleCv({ stepV: 5e-4, noiseA: 1e-7, seed: 11 });
+  const perCycle = sim.potentialV.length - 1;
+  const fd = openSync(file, "w");
+  writeSync(
+    fd,
+    "Technique: Cyclic Voltammetry\nScan rate (V/s) = 0.1\n\nTime (s),Potential (V),Current (A),Cycle\n",
+  );
+  const dt = sim.timeS[1];
+  let batch: string[] = [];
+  for (let r = 0; r < rows; r++) {
+    const k = r % perCycle;
+    batch.push(
+      `${(r * dt).toExponential(8)},${sim.potentialV[k].toExponential(8)},${sim.currentA[k].toExponential(8)},${Math.floor(r / perCycle) + 1}`,
+    );
+    if (batch.length === 50_000) {
+      writeSync(fd, batch.join("\n") + "\n");
+      batch = [];
+    }
+  }
+  if (batch.length) writeSync(fd, batch.join("\n") + "\n");
+  closeSync(fd);
+}
+
+async function upload(url: string, cookie: string, entryId: string, file: string, name: string) {
+  const form = new FormData();
+  form.append("file", await openAsBlob(file), name);
+  const response = await fetch(`${url}/api/entries/${entryId}/attachments`, {
+    method: "POST",
+    headers: { cookie },
+    body: form,
+  });
+  const text = await response.text();
+  if (!response.ok) throw new Error(`upload of ${name} answered ${response.status}: ${text}`);
+  const body = JSON.parse(text) as { attachments?: { id: string }[] } | { id: string }[];
+  const list = Array.isArray(body) ? body : (body.attachments ?? []);
+  return list[0].id;
+}
+
+async function main() {
+  console.log(
+    `load average at the start ${os
+      .loadavg()
+      .map((l) => l.toFixed(2))
+      .join(" ")}`,
+  );
+  const scratch = ensureScratchDatabase("ionleaf_upload");
+  await runMigrations(scratch.url);
+  ensureBuild(scratch.url);
+  const { db, pool } = createDatabase(scratch.url, 2);
+  const tag = randomUUID().slice(0, 8);
+  const lab = await insertLab(db, { name: `Upload lab ${tag}`, slug: `upload-${tag}` });
+  const member = await insertUser(db, {
+    labId: lab.id,
+    email: `uploader.${tag}@upload.example`,
+    name: "Upload bench member",
+    role: "researcher",
+    passwordHash: await hashPassword(PASSWORD),
+  });
+  const project = await insertProject(db, {
+    labId: lab.id,
+    name: "Uploads",
+    createdById: member.id,
+  });
+  await pool.end();
+
+  const work = mkdtempSync(path.join(os.tmpdir(), "ionleaf-upload-bench-"));
+  const app = await startApp(scratch.url, APP_PORT);
+  let failed = false;
+  try {
+    const cookie = await signIn(app.url, member.email, PASSWORD);
+    const created = await fetch(`${app.url}/api/entries`, {
+      method: "POST",
+      headers: { cookie, "content-type": "application/json" },
+      body: JSON.stringify({ projectId: project.id, title: "Upload bench" }),
+    });
+    const { id: entryId } = (await created.json()) as { id: string };
+
+    // 1. Memory during a 200 MB upload.
+    const small = path.join(work, "warm-up.pdf");
+    writeBigFile(small, 1 << 20);
+    await upload(app.url, cookie, entryId, small, "warm-up.pdf");
+    const baselineSamples: number[] = [];
+    for (let i = 0; i < 20; i++) {
+      baselineSamples.push(treeRssMb(app.pid));
+      await new Promise((r) => setTimeout(r, 50));
+    }
+    const baseline = Math.max(...baselineSamples);
+    const big = path.join(work, "big.pdf");
+    writeBigFile(big, UPLOAD_BYTES);
+    let peak = baseline;
+    const sampler = setInterval(() => (peak = Math.max(peak, treeRssMb(app.pid))), 50);
+    const started = performance.now();
+    await upload(app.url, cookie, entryId, big, "big.pdf");
+    const seconds = (performance.now() - started) / 1000;
+    clearInterval(sampler);
+    peak = Math.max(peak, treeRssMb(app.pid));
+    const growth = peak - baseline;
+    const memoryOk = growth <= MEMORY_TARGET_MB;
+    failed ||= !memoryOk;
+    console.log(
+      `upload of ${(UPLOAD_BYTES / 1e6).toFixed(0)} MB through the route handler: ${seconds.toFixed(1)} s ` +
+        `(${(UPLOAD_BYTES / 1e6 / seconds).toFixed(0)} MB/s); server memory baseline ${baseline.toFixed(0)} MB, ` +
+        `peak ${peak.toFixed(0)} MB: +${growth.toFixed(0)} MB = ${(growth / MEMORY_TARGET_MB).toFixed(2)}× the ` +
+        `${MEMORY_TARGET_MB} MB allowance, ${(peak / baseline).toFixed(2)}× the baseline ` +
+        `${memoryOk ? "(within target)" : "(OVER TARGET)"}`,
+    );
+    rmSync(big);
+
+    // 2. First paint of a trace block over 1 000 000 points.
+    const csv = path.join(work, "cv-1m.csv");
+    writeCvExport(csv, TRACE_ROWS);
+    const traceEntry = await fetch(`${app.url}/api/entries`, {
+      method: "POST",
+      headers: { cookie, "content-type": "application/json" },
+      body: JSON.stringify({ projectId: project.id, title: "Trace bench" }),
+    });
+    const { id: traceEntryId } = (await traceEntry.json()) as { id: string };
+    const traceAttachmentId = await upload(app.url, cookie, traceEntryId, csv, "cv-1m.csv");
+    const saved = await fetch(`${app.url}/api/entries/${traceEntryId}/content`, {
+      method: "PUT",
+      headers: { cookie, "content-type": "application/json" },
+      body: JSON.stringify({
+        baseRevision: 0,
+        title: "Trace bench",
+        content: {
+          type: "doc",
+          content: [
+            { type: "paragraph", content: [{ type: "text", text: "A million points." }] },
+            {
+              type: "traceBlock",
+              attrs: {
+                blockId: randomUUID(),
+                attachmentId: traceAttachmentId,
+                name: "cv-1m.csv",
+                cellBlockId: null,
+                showCurrentDensity: false,
+                potentialScale: null,
+                cycles: null,
+              },
+            },
+          ],
+        },
+      }),
+    });
+    if (!saved.ok) throw new Error(`saving the trace entry answered ${saved.status}`);
+
+    const browser = await chromium.launch({
+      executablePath: process.env.CHROMIUM_PATH ?? "/usr/bin/chromium",
+      args: ["--no-sandbox", "--disable-gpu"],
+    });
+    try {
+      const context = await browser.newContext({ viewport: { width: 1360, height: 900 } });
+      const [name, value] = cookie.split(/=(.*)/s);
+      await context.addCookies([{ name, value, url: app.url }]);
+      await context.addInitScript(() => {
+        const w = window as unknown as { firstPlotFrame?: number };
+        new MutationObserver((_m, observer) => {
+          if (document.querySelector("[data-testid='trace-plot'] canvas")) {
+            observer.disconnect();
+            requestAnimationFrame(() => (w.firstPlotFrame = performance.now()));
+          }
+        }).observe(document, { childList: true, subtree: true });
+      });
+      const page = await context.newPage();
+      const measure = async () => {
+        await page.goto(`${app.url}/entries/${traceEntryId}`);
+        await page.waitForFunction(
+          () => (window as unknown as { firstPlotFrame?: number }).firstPlotFrame !== undefined,
+          null,
+          { timeout: 60_000 },
+        );
+        return page.evaluate(() => ({
+          plot: (window as unknown as { firstPlotFrame: number }).firstPlotFrame,
+          text: performance.getEntriesByName("first-contentful-paint")[0]?.startTime ?? Number.NaN,
+        }));
+      };
+      await measure(); // warm-up: the server's first read of the file and the page's chunks
+      const runs = [await measure(), await measure(), await measure()];
+      const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
+      const plot = median(runs.map((r) => r.plot));
+      const text = median(runs.map((r) => r.text));
+      const paintOk = plot < PAINT_TARGET_MS;
+      failed ||= !paintOk;
+      console.log(
+        `trace block over ${TRACE_ROWS.toLocaleString("en")} points, first plotted frame: ${plot.toFixed(0)} ms ` +
+          `after navigation (median of 3); the page's first contentful paint ${text.toFixed(0)} ms: ` +
+          `${(plot / text).toFixed(2)}× that baseline, ${(plot / PAINT_TARGET_MS).toFixed(2)}× the ` +
+          `${PAINT_TARGET_MS} ms target ${paintOk ? "(within target)" : "(OVER TARGET)"}`,
+      );
+    } finally {
+      await browser.close();
+    }
+  } finally {
+    await app.stop();
+    rmSync(work, { recursive: true, force: true });
+  }
+  process.exit(failed ? 1 : 0);
+}
+
+main().catch((error: unknown) => {
+  console.error(error);
+  process.exit(1);
+});
