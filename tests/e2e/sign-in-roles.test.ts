@@ -6,9 +6,9 @@ const lab = DEMO_LABS[0];
 const byRole = (role: string) => lab.members.find((m) => m.role === role)!;
 
 const EXPECTED_NAV: Record<string, string[]> = {
-  researcher: ["Bench", "Entries", "Solution finder"],
-  supervisor: ["Bench", "Entries", "Solution finder", "Review queue"],
-  admin: ["Bench", "Entries", "Solution finder", "Lab settings"],
+  researcher: ["Bench", "Entries", "Solution finder", "Stocks"],
+  supervisor: ["Bench", "Entries", "Solution finder", "Stocks", "Review queue"],
+  admin: ["Bench", "Entries", "Solution finder", "Stocks", "Lab settings"],
 };
 
 describe("signing in as each demo role", () => {
