@@ -9,11 +9,12 @@ const config: KnipConfig = {
     "tests/support/reset-and-seed.ts",
     "tests/support/empty-module.ts",
     "vitest.e2e.config.mts",
-    // The finder and load benches run in child processes (bench/finder.ts, bench/load.ts); the
+    // The finder, load and upload benches run in child processes (bench/finder.ts, bench/load.ts); the
     // profiler is run by hand.
     "bench/finder-run.ts",
     "bench/finder-profile.ts",
     "bench/load-run.ts",
+    "bench/upload-run.ts",
     // The engine's public API (docs/architecture.md, "The computation contract").
     "lib/chem/index.ts",
     // The trace parser's public API, wired into the upload route and trace block by main.
