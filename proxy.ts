@@ -62,8 +62,12 @@ function isHttps(request: NextRequest): boolean {
   );
 }
 
+// Uploads bypass the proxy: Next.js buffers a request body that passes through it and cuts it
+// at 10 MB, so a 200 MB potentiostat export would arrive truncated (found by the upload
+// bench). The upload route checks the session and origin itself and streams the body to disk;
+// its answers still get the static headers of next.config.mjs.
 export const config = {
   matcher: [
-    "/((?!_next/static|_next/image|favicon.ico|.*\\.(?:png|svg|jpg|ico|webmanifest|woff2?)$).*)",
+    "/((?!_next/static|_next/image|favicon.ico|api/entries/[^/]+/attachments$|.*\\.(?:png|svg|jpg|ico|webmanifest|woff2?)$).*)",
   ],
 };
