@@ -1,7 +1,7 @@
 "use client";
 
 import { useEffect, useId, useState, type KeyboardEvent } from "react";
-import { cx } from "@/lib/ui/class-names";
+import { handleListboxKey, SpeciesListbox } from "@/components/ui/species-listbox";
 
 interface Suggestion {
   formula: string;
@@ -65,19 +65,13 @@ export function SpeciesField({
 
   const onKeyDown = (event: KeyboardEvent<HTMLInputElement>) => {
     if (!showList) return;
-    if (event.key === "ArrowDown") {
-      event.preventDefault();
-      setActive((i) => (i + 1) % shown.length);
-    } else if (event.key === "ArrowUp") {
-      event.preventDefault();
-      setActive((i) => (i - 1 + shown.length) % shown.length);
-    } else if (event.key === "Enter" && shown[active]) {
-      event.preventDefault();
-      pick(shown[active]);
-    } else if (event.key === "Escape") {
-      event.preventDefault();
-      setOpen(false);
-    }
+    handleListboxKey(event, {
+      count: shown.length,
+      active,
+      setActive,
+      pick: (index) => pick(shown[index]),
+      close: () => setOpen(false),
+    });
   };
 
   return (
@@ -114,36 +108,14 @@ export function SpeciesField({
         Separate species with commas; formulas or names.
       </span>
       {showList ? (
-        <ul
-          id={`${id}-list`}
-          role="listbox"
-          aria-label="Species suggestions"
-          className="absolute top-full left-0 z-20 mt-1 max-h-64 w-80 overflow-auto rounded-md border border-ink-faint/40 bg-white py-1 shadow-lg"
-        >
-          {shown.map((s, index) => (
-            <li
-              key={`${s.source}-${s.formula}`}
-              id={`${id}-opt-${index}`}
-              role="option"
-              aria-selected={index === active}
-              // mousedown, not click: the input's blur would close the list first.
-              onMouseDown={(event) => {
-                event.preventDefault();
-                pick(s);
-              }}
-              className={cx(
-                "flex cursor-pointer items-baseline justify-between gap-3 px-3 py-1 text-sm",
-                index === active ? "bg-copper-50 text-ink" : "text-ink-soft",
-              )}
-            >
-              <span className="font-mono text-ink">{s.formula}</span>
-              <span className="truncate text-xs">
-                {s.name}
-                {s.source === "lab" ? " · lab" : ""}
-              </span>
-            </li>
-          ))}
-        </ul>
+        <SpeciesListbox
+          id={id}
+          label="Species suggestions"
+          options={shown.map((s) => ({ ...s, note: s.source === "lab" ? "lab" : undefined }))}
+          active={active}
+          onPick={(index) => pick(shown[index])}
+          widthClass="w-80"
+        />
       ) : null}
       {error ? (
         <span id={`${id}-error`} role="alert" className="mt-1 block text-xs text-red-700">

@@ -2,23 +2,9 @@
 import Link from "next/link";
 import { useActionState } from "react";
 import { initialActionState, type ActionState } from "@/lib/contract/action-state";
+import type { NewerStock } from "@/lib/contract/lineage";
 
 type Action = (prev: ActionState, form: FormData) => Promise<ActionState>;
-
-export interface NewerStockItem {
-  blockId: string;
-  blockName: string;
-  parentEntryId: string;
-  parentEntryTitle: string;
-  parentBlockId: string;
-  stockName: string;
-  usedRevision: number;
-  currentRevision: number;
-  changedInRevision: number | null;
-  amendmentReason: string | null;
-  removed: boolean;
-  diffHref: string;
-}
 
 /**
  * A solution block of this entry was made from a stock whose entry has a newer revision in
@@ -37,7 +23,7 @@ export function NewerStockNotice({
 }: {
   entryId: string;
   revision: number;
-  items: NewerStockItem[];
+  items: NewerStock[];
   canUpdate: boolean;
   needsReason: boolean;
   whyNot: string | null;
@@ -76,7 +62,7 @@ function NoticeItem({
 }: {
   entryId: string;
   revision: number;
-  item: NewerStockItem;
+  item: NewerStock;
   canUpdate: boolean;
   needsReason: boolean;
   update: Action;

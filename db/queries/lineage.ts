@@ -79,6 +79,11 @@ const parentRows = alias(blockResults, "parent_rows");
 const parentResults = alias(solutionResults, "parent_results");
 const parentRevisions = alias(revisions, "parent_revisions");
 const childRows = alias(blockResults, "child_rows");
+/** A link's stock entry, in the link's own lab (the lab id is part of every join). */
+const stockEntryOfLink = and(
+  eq(parentEntries.id, solutionParents.parentEntryId),
+  eq(parentEntries.labId, solutionParents.labId),
+);
 
 /**
  * Every use of a solution block of the lab as a stock: the stock (entry, block, revision used,
@@ -110,13 +115,7 @@ export async function listStockUses(db: Executor, labId: string) {
       finalVolumeMl: solutionParents.finalVolumeMl,
     })
     .from(solutionParents)
-    .innerJoin(
-      parentEntries,
-      and(
-        eq(parentEntries.id, solutionParents.parentEntryId),
-        eq(parentEntries.labId, solutionParents.labId),
-      ),
-    )
+    .innerJoin(parentEntries, stockEntryOfLink)
     .innerJoin(
       childEntries,
       and(
@@ -168,13 +167,7 @@ export async function listCurrentStockLinks(db: Executor, labId: string, entryId
       childRows,
       and(eq(childRows.id, solutionParents.blockResultId), isNull(childRows.toRevision)),
     )
-    .innerJoin(
-      parentEntries,
-      and(
-        eq(parentEntries.id, solutionParents.parentEntryId),
-        eq(parentEntries.labId, solutionParents.labId),
-      ),
-    )
+    .innerJoin(parentEntries, stockEntryOfLink)
     .leftJoin(
       parentRows,
       and(

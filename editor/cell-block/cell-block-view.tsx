@@ -4,7 +4,7 @@ import { NodeViewWrapper, useEditorState, type ReactNodeViewProps } from "@tipta
 import { lazy, Suspense } from "react";
 import type { CellBlockInput } from "@/lib/document/block-schemas";
 import { BlockLoading } from "../block-loading";
-import { useEntrySolutionBlocks } from "./use-entry-solution-blocks";
+import { useEntryBlocks } from "../use-entry-blocks";
 
 // Fetched with the first block, like the solution panel (it needs lib/chem too).
 const CellBlockPanel = lazy(() =>
@@ -14,7 +14,7 @@ const CellBlockPanel = lazy(() =>
 /** tiptap node view of a cell block; it reads the entry's solution blocks for the electrolyte link. */
 export function CellBlockView({ node, editor, updateAttributes }: ReactNodeViewProps) {
   const editable = useEditorState({ editor, selector: ({ editor: e }) => e.isEditable });
-  const solutions = useEntrySolutionBlocks(editor);
+  const solutions = useEntryBlocks(editor, "solutionBlock");
   return (
     <NodeViewWrapper contentEditable={false}>
       <Suspense fallback={<BlockLoading kind="cell" />}>

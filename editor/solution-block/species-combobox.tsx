@@ -2,6 +2,7 @@
 
 import { useId, useMemo, useState, type KeyboardEvent } from "react";
 import { cx } from "@/lib/ui/class-names";
+import { handleListboxKey, SpeciesListbox } from "@/components/ui/species-listbox";
 import { FieldError } from "../ui/field-error";
 import { inputClass, invalidClass } from "../ui/field-styles";
 import { searchSpeciesOptions, type SpeciesOption } from "../chem-catalogue";
@@ -49,21 +50,16 @@ export function SpeciesCombobox({
   };
 
   const onKeyDown = (event: KeyboardEvent<HTMLInputElement>) => {
-    if (showList && event.key === "ArrowDown") {
-      event.preventDefault();
-      setActive((i) => (i + 1) % options.length);
-    } else if (showList && event.key === "ArrowUp") {
-      event.preventDefault();
-      setActive((i) => (i - 1 + options.length) % options.length);
-    } else if (showList && event.key === "Enter" && options[active]) {
-      event.preventDefault();
-      pick(options[active]);
-    } else if (showList && event.key === "Escape") {
-      event.preventDefault();
-      setOpen(false);
-    } else {
-      onRowKeyDown?.(event);
-    }
+    const handled =
+      showList &&
+      handleListboxKey(event, {
+        count: options.length,
+        active,
+        setActive,
+        pick: (index) => pick(options[index]),
+        close: () => setOpen(false),
+      });
+    if (!handled) onRowKeyDown?.(event);
   };
 
   return (
@@ -99,33 +95,14 @@ export function SpeciesCombobox({
         onKeyDown={onKeyDown}
       />
       {showList ? (
-        <ul
-          id={`${id}-list`}
-          role="listbox"
-          aria-label={`${label} suggestions`}
-          className="absolute top-full left-0 z-20 mt-1 max-h-60 w-72 overflow-auto rounded-md border border-ink-faint/40 bg-white py-1 shadow-lg"
-        >
-          {options.map((option, index) => (
-            <li
-              key={`${option.formula}-${option.name}`}
-              id={`${id}-opt-${index}`}
-              role="option"
-              aria-selected={index === active}
-              // mousedown, not click: the input's blur would close the list first.
-              onMouseDown={(event) => {
-                event.preventDefault();
-                pick(option);
-              }}
-              className={cx(
-                "flex cursor-pointer items-baseline justify-between gap-3 px-3 py-1 text-sm",
-                index === active ? "bg-copper-50 text-ink" : "text-ink-soft",
-              )}
-            >
-              <span className="font-mono text-ink">{option.formula}</span>
-              <span className="truncate text-xs">{option.name}</span>
-            </li>
-          ))}
-        </ul>
+        <SpeciesListbox
+          id={id}
+          label={`${label} suggestions`}
+          options={options}
+          active={active}
+          onPick={(index) => pick(options[index])}
+          widthClass="w-72"
+        />
       ) : null}
       <FieldError id={`${id}-error`} message={shownError} />
     </div>

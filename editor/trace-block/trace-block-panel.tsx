@@ -13,10 +13,8 @@ import { SelectField } from "../ui/select-field";
 import { referenceElectrodeLabel } from "../chem-catalogue";
 import { MappingDialog } from "./mapping-dialog";
 import { PeaksTable } from "./peaks-table";
-import { useEntrySolutionBlocks } from "../cell-block/use-entry-solution-blocks";
+import { useEntryBlocks } from "../use-entry-blocks";
 import { ExpectedVsMeasured, type LinkedVoltammogram } from "./expected-vs-measured";
-import { useEntryCellBlocks } from "./use-entry-cell-blocks";
-import { useEntryTraceBlocks } from "./use-entry-trace-blocks";
 
 // uPlot is fetched only when a trace is shown.
 const TracePlot = lazy(() => import("./trace-plot"));
@@ -60,13 +58,13 @@ export function TraceBlockPanel({ editor, value, onChange, editable }: TraceBloc
     staleTime: Infinity,
   });
   const [mappingOpen, setMappingOpen] = useState(false);
-  const cells = useEntryCellBlocks(editor);
+  const cells = useEntryBlocks(editor, "cellBlock");
   const cell = cells.find((c) => c.blockId === value.cellBlockId) ?? null;
   const areaCm2 = cell?.workingElectrode.areaCm2 ?? null;
-  const solutions = useEntrySolutionBlocks(editor);
+  const solutions = useEntryBlocks(editor, "solutionBlock");
   const electrolyte = solutions.find((s) => s.blockId === cell?.electrolyteBlockId) ?? null;
   // The entry's traces linked to the same cell, for i_p against √v (the query cache is shared).
-  const traceBlocks = useEntryTraceBlocks(editor);
+  const traceBlocks = useEntryBlocks(editor, "traceBlock");
   const siblings = useMemo(
     () => traceBlocks.filter((t) => cell !== null && t.cellBlockId === cell.blockId),
     [traceBlocks, cell],

@@ -1,4 +1,5 @@
 import "server-only";
+import type { NewerStock } from "@/lib/contract/lineage";
 import { findRevision, updateEntry } from "@/db/queries/entries";
 import { insertAuditEvent } from "@/db/queries/audit";
 import {
@@ -108,24 +109,6 @@ export async function listLabStocks(actor: Actor) {
     });
   }
   return [...stocks.values()];
-}
-
-export interface NewerStock {
-  blockId: string;
-  blockName: string;
-  parentEntryId: string;
-  parentEntryTitle: string;
-  parentBlockId: string;
-  stockName: string;
-  usedRevision: number;
-  currentRevision: number;
-  /** The first revision after the one used in which the stock block changed. */
-  changedInRevision: number | null;
-  /** The current revision is an amendment of a countersigned one: its reason. */
-  amendmentReason: string | null;
-  /** The stock block is no longer in its entry: there is nothing to update to. */
-  removed: boolean;
-  diffHref: string;
 }
 
 /**
