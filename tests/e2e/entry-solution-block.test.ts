@@ -1,8 +1,8 @@
 import { describe, expect, it } from "vitest";
-import type { Locator, Page } from "playwright-core";
+import type { Locator } from "playwright-core";
 import { DEMO_LABS, DEMO_PASSWORD } from "@/lib/demo/scenario";
 import { parseShownNumber } from "@/lib/ui/format-number";
-import { BASE_URL, useBrowser, screenshot, signIn } from "../support/e2e-browser";
+import { BASE_URL, useBrowser, screenshot, signIn, waitUntilSaved } from "../support/e2e-browser";
 
 const researcher = DEMO_LABS[0].members.find((m) => m.role === "researcher")!;
 
@@ -22,16 +22,6 @@ async function expectNaClNumbers(block: Locator) {
   const meanGamma = await shownNumber(block.getByTestId("mean-gamma-NaCl"));
   expect(meanGamma).toBeGreaterThan(0.766);
   expect(meanGamma).toBeLessThan(0.79);
-}
-
-async function waitUntilSaved(page: Page) {
-  await page.waitForFunction(
-    () =>
-      document.querySelector('[data-testid="save-status"]')?.getAttribute("data-status") ===
-      "saved",
-    null,
-    { timeout: 20_000 },
-  );
 }
 
 describe("an entry with a live solution block", () => {

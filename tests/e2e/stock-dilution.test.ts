@@ -1,19 +1,8 @@
 import { describe, expect, it } from "vitest";
-import type { Page } from "playwright-core";
 import { DEMO_LABS, DEMO_PASSWORD } from "@/lib/demo/scenario";
-import { BASE_URL, useBrowser, screenshot, signIn } from "../support/e2e-browser";
+import { BASE_URL, useBrowser, screenshot, signIn, waitUntilSaved } from "../support/e2e-browser";
 
 const researcher = DEMO_LABS[0].members.find((m) => m.role === "researcher")!;
-
-async function waitUntilSaved(page: Page) {
-  await page.waitForFunction(
-    () =>
-      document.querySelector('[data-testid="save-status"]')?.getAttribute("data-status") ===
-      "saved",
-    null,
-    { timeout: 20_000 },
-  );
-}
 
 describe("a dilution made from a stock", () => {
   const browser = useBrowser();

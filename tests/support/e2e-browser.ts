@@ -65,3 +65,14 @@ export function useBrowser(): { readonly context: BrowserContext } {
     },
   };
 }
+
+/** Until the entry page says its autosave reached the server. */
+export async function waitUntilSaved(page: Page) {
+  await page.waitForFunction(
+    () =>
+      document.querySelector('[data-testid="save-status"]')?.getAttribute("data-status") ===
+      "saved",
+    null,
+    { timeout: 20_000 },
+  );
+}
