@@ -32,10 +32,7 @@ const pages = auth((request) => {
     headers.set("content-security-policy", csp);
     response = NextResponse.next({ request: { headers } });
   }
-  response.headers.set("content-security-policy", csp);
-  for (const [name, value] of Object.entries(securityHeaders(isHttps(request))))
-    response.headers.set(name, value);
-  return response;
+  return secured(response, request, csp);
 }) as unknown as NextMiddleware;
 
 /**
@@ -45,8 +42,12 @@ const pages = auth((request) => {
  */
 export default function proxy(request: NextRequest, event: NextFetchEvent) {
   if (!request.nextUrl.pathname.startsWith("/api/")) return pages(request, event);
-  const response = NextResponse.next();
-  response.headers.set("content-security-policy", contentSecurityPolicy(createNonce(), false));
+  return secured(NextResponse.next(), request, contentSecurityPolicy(createNonce(), false));
+}
+
+/** The policy and the security headers on an answer. */
+function secured(response: NextResponse, request: NextRequest, csp: string): NextResponse {
+  response.headers.set("content-security-policy", csp);
   for (const [name, value] of Object.entries(securityHeaders(isHttps(request))))
     response.headers.set(name, value);
   return response;

@@ -37,7 +37,7 @@ const TARGET_RATIO = 1.5;
 const scientific = (x: number) => x.toExponential(8);
 
 /** Writes the export in batches: one simulated cycle repeated, time running on, noise added. */
-function writeCvExport(path: string, rows = ROWS): number {
+export function writeCvExport(path: string, rows = ROWS): number {
   const sim = simulateReversibleCv({ stepV: 5e-4, noiseA: 1e-7, seed: 11 });
   const perCycle = sim.potentialV.length - 1;
   const fd = openSync(path, "w");

@@ -32,10 +32,10 @@ import { insertLab } from "@/db/queries/labs";
 import { insertProject } from "@/db/queries/projects";
 import { insertUser } from "@/db/queries/users";
 import { hashPassword } from "@/lib/auth/password";
-import { simulateReversibleCv } from "@/lib/traces/simulate";
 import { runMigrations } from "@/scripts/migrate";
 import { ensureScratchDatabase } from "@/scripts/support/scratch-database";
 import { ensureBuild, signIn, startApp } from "./finder-server";
+import { writeCvExport } from "./trace-parse";
 
 const APP_PORT = Number(process.env.IONLEAF_UPLOAD_APP_PORT ?? 3480);
 const PASSWORD = "upload-bench-password-7";
@@ -72,30 +72,6 @@ function writeBigFile(file: string, bytes: number) {
     writeSync(fd, chunk, 0, n);
     written += n;
   }
-  closeSync(fd);
-}
-
-function writeCvExport(file: string, rows: number) {
-  const sim = simulateReversibleCv({ stepV: 5e-4, noiseA: 1e-7, seed: 11 });
-  const perCycle = sim.potentialV.length - 1;
-  const fd = openSync(file, "w");
-  writeSync(
-    fd,
-    "Technique: Cyclic Voltammetry\nScan rate (V/s) = 0.1\n\nTime (s),Potential (V),Current (A),Cycle\n",
-  );
-  const dt = sim.timeS[1];
-  let batch: string[] = [];
-  for (let r = 0; r < rows; r++) {
-    const k = r % perCycle;
-    batch.push(
-      `${(r * dt).toExponential(8)},${sim.potentialV[k].toExponential(8)},${sim.currentA[k].toExponential(8)},${Math.floor(r / perCycle) + 1}`,
-    );
-    if (batch.length === 50_000) {
-      writeSync(fd, batch.join("\n") + "\n");
-      batch = [];
-    }
-  }
-  if (batch.length) writeSync(fd, batch.join("\n") + "\n");
   closeSync(fd);
 }
 
