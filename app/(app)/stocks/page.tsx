@@ -137,9 +137,9 @@ export default async function StocksPage() {
         </ul>
       )}
       <p className="text-xs text-ink-soft">
-        Concentrations carried over from a stock are as good as the stock&apos;s record: verify
-        against measurement, read the safety data sheet of every reagent (concentrated acids and
-        toxic salts above all) and follow your institution&apos;s chemical hygiene plan.
+        Concentrations carried over from a stock are as good as the stock&apos;s record: check the
+        stock&apos;s label and age before you dilute it, and handle concentrated acids and toxic
+        salts by their safety data sheets.
       </p>
     </div>
   );
