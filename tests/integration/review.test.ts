@@ -1,5 +1,5 @@
 // @vitest-environment node
-import { and, eq, sql } from "drizzle-orm";
+import { and, asc, eq, sql } from "drizzle-orm";
 import { Client } from "pg";
 import { beforeAll, describe, expect, it } from "vitest";
 import { insertProject } from "@/db/queries/projects";
@@ -55,7 +55,9 @@ async function auditActions(entryId: string) {
   const rows = await getDb()
     .select({ action: auditEvents.action, details: auditEvents.details })
     .from(auditEvents)
-    .where(eq(auditEvents.targetId, entryId));
+    .where(eq(auditEvents.targetId, entryId))
+    // Insertion order: without it PostgreSQL may return the rows in any order.
+    .orderBy(asc(auditEvents.id));
   return rows;
 }
 
