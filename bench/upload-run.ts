@@ -226,10 +226,19 @@ async function main() {
         return page.evaluate(() => ({
           plot: (window as unknown as { firstPlotFrame: number }).firstPlotFrame,
           text: performance.getEntriesByName("first-contentful-paint")[0]?.startTime ?? Number.NaN,
+          // Where the time goes: when the trace's data and the last script arrived.
+          resources: performance.getEntriesByType("resource").map((r) => ({
+            name: r.name.replace(location.origin, ""),
+            start: Math.round(r.startTime),
+            end: Math.round((r as PerformanceResourceTiming).responseEnd),
+          })),
         }));
       };
       await measure(); // warm-up: the server's first read of the file and the page's chunks
       const runs = [await measure(), await measure(), await measure()];
+      if (process.env.IONLEAF_BENCH_TIMELINE)
+        for (const r of runs[runs.length - 1].resources)
+          console.log(`  ${r.start}–${r.end} ms ${r.name}`);
       const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
       const plot = median(runs.map((r) => r.plot));
       const text = median(runs.map((r) => r.text));

@@ -9,21 +9,15 @@ import { assertCan, type Actor } from "@/lib/rules/authorize";
 import { getDb } from "@/lib/server/database";
 import { getStorage } from "@/lib/storage";
 import {
-  analyseVoltammogram,
   createTraceParser,
-  downsampleForPlot,
-  traceColumn,
   type ColumnMapping,
   type ParsedTrace,
   type TraceSummary,
 } from "@/lib/traces";
 import { layoutKeyOf } from "./trace-layout";
-
-/** Points per plotted series: enough for a crisp line, few enough for a quick first paint. */
-const MAX_PLOT_POINTS = 4000;
+import { keepPlotView, plotViewOf, readPlotView, type TracePlotView } from "./trace-plot-view";
 
 type TraceView = TraceViewDto;
-type TraceSeries = TraceViewDto["series"][number];
 
 async function parseStream(stream: Readable, mapping: ColumnMapping | null): Promise<ParsedTrace> {
   const parser = createTraceParser(mapping ? { mapping } : {});
@@ -43,72 +37,8 @@ async function parseStream(stream: Readable, mapping: ColumnMapping | null): Pro
   return parser.finish();
 }
 
-const plain = (a: ArrayLike<number>) => Array.from(a, (v) => (Number.isFinite(v) ? v : 0));
-
-function seriesOf(trace: ParsedTrace): Pick<TraceView, "series" | "axes" | "bode" | "peaks"> {
-  const { summary } = trace;
-  const potential = traceColumn(trace, "potential");
-  const current = traceColumn(trace, "current");
-  const time = traceColumn(trace, "time");
-  const series: TraceSeries[] = [];
-  if (summary.technique === "impedance") {
-    const re = traceColumn(trace, "impedanceReal");
-    const im = traceColumn(trace, "impedanceImaginaryNegated");
-    const f = traceColumn(trace, "frequency");
-    const mod = traceColumn(trace, "impedanceModulus");
-    const phase = traceColumn(trace, "phase");
-    if (re && im) {
-      const d = downsampleForPlot(re, im, MAX_PLOT_POINTS);
-      series.push({ label: "Nyquist", x: plain(d.x), y: plain(d.y) });
-    }
-    const bode =
-      f && re && im
-        ? {
-            frequencyHz: plain(f),
-            modulusOhm: mod ? plain(mod) : Array.from(f, (_, i) => Math.hypot(re[i], im[i])),
-            phaseDeg: phase
-              ? Array.from(phase, (p) => (p * 180) / Math.PI)
-              : Array.from(f, (_, i) => (-Math.atan2(im[i], re[i]) * 180) / Math.PI),
-          }
-        : null;
-    return { series, axes: { x: "Z′ / Ω", y: "−Z″ / Ω" }, bode, peaks: [] };
-  }
-  if (
-    (summary.technique === "cyclic-voltammetry" ||
-      summary.technique === "linear-sweep-voltammetry") &&
-    potential &&
-    current
-  ) {
-    const cycles = summary.cycles.length
-      ? summary.cycles
-      : [{ number: 1, startRow: 0, endRow: summary.points }];
-    const perCycle = Math.max(200, Math.floor(MAX_PLOT_POINTS / cycles.length));
-    for (const c of cycles) {
-      const d = downsampleForPlot(
-        potential.subarray(c.startRow, c.endRow),
-        current.subarray(c.startRow, c.endRow),
-        perCycle,
-      );
-      series.push({ label: `Cycle ${c.number}`, x: plain(d.x), y: plain(d.y) });
-    }
-    const peaks = analyseVoltammogram({
-      potentialV: potential,
-      currentA: current,
-      cycles: summary.cycles,
-    });
-    return { series, axes: { x: "E / V", y: "I / A" }, bode: null, peaks };
-  }
-  const y = current ?? potential;
-  if (time && y) {
-    const d = downsampleForPlot(time, y, MAX_PLOT_POINTS);
-    series.push({ label: current ? "Current" : "Potential", x: plain(d.x), y: plain(d.y) });
-    return { series, axes: { x: "t / s", y: current ? "I / A" : "E / V" }, bode: null, peaks: [] };
-  }
-  return { series, axes: { x: "", y: "" }, bode: null, peaks: [] };
-}
-
 /** Recent views by content and mapping: reopening an entry does not parse a big file again. */
-const cache = new Map<string, Omit<TraceView, "attachmentId" | "name">>();
+const cache = new Map<string, TracePlotView>();
 
 async function loadAttachment(actor: Actor, attachmentId: string) {
   assertCan(actor, "entry.read");
@@ -145,8 +75,14 @@ export async function getTraceView(
   const key = `${row.sha256}:${JSON.stringify(mapping)}`;
   let view = cache.get(key);
   if (!view) {
-    const trace = await parseStream(await getStorage().read(row.storedPath), mapping);
-    view = { summary: trace.summary, mapping, ...seriesOf(trace) };
+    // The view kept beside the original at upload (or by an earlier reader); the parse of the
+    // whole export runs only when there is none, e.g. for a mapping chosen later.
+    const storage = getStorage();
+    view = await readPlotView(storage, row.sha256, mapping);
+    if (!view) {
+      view = plotViewOf(await parseStream(await storage.read(row.storedPath), mapping), mapping);
+      await keepPlotView(storage, row.sha256, view).catch(() => undefined);
+    }
     cache.set(key, view);
     if (cache.size > 16) cache.delete(cache.keys().next().value!);
   }

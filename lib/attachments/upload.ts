@@ -10,12 +10,13 @@ import { assertCan, type Actor } from "@/lib/rules/authorize";
 import { getDb } from "@/lib/server/database";
 import { derivedKey, getStorage, originalKey } from "@/lib/storage";
 import { parseTraceFile } from "@/lib/traces/parse-file";
-import type { TraceSummary } from "@/lib/traces";
+import type { ColumnMapping, TraceSummary } from "@/lib/traces";
 import { detectFileType } from "./detect-type";
 import { checkedFileName } from "./file-name";
 import { makePhotoCopies } from "./photo";
 import { receiveUpload, type ReceivedFile } from "./receive-upload";
 import { layoutKeyOf } from "./trace-layout";
+import { plotViewKey, plotViewOf, writePlotViewFile } from "./trace-plot-view";
 import { findTraceMapping } from "@/db/queries/attachments";
 
 const PHOTO_TYPES = new Set(["image/png", "image/jpeg", "image/webp", "image/gif", "image/tiff"]);
@@ -166,6 +167,14 @@ async function prepare(file: ReceivedFile, allowed: string[], labId: string): Pr
     if (parsed.summary.technique !== "unknown" || parsed.summary.points > 0) {
       kind = "trace";
       summary = parsed.summary;
+      // The plot view is computed now, from the parse already in memory, and kept beside the
+      // original: opening the entry then reads a few kilobytes instead of parsing the export.
+      const mapping = saved ? (saved.mapping as ColumnMapping) : null;
+      objects.push({
+        key: plotViewKey(file.sha256, mapping),
+        path: await writePlotViewFile(dirname(file.path), plotViewOf(parsed, mapping)),
+        contentType: "application/json",
+      });
     }
   }
   return { file, name, type, kind, summary, derivatives, objects };
