@@ -118,6 +118,10 @@ async function main() {
   await pool.end();
 
   const work = mkdtempSync(path.join(os.tmpdir(), "ionleaf-upload-bench-"));
+  // Written before the server starts: a pause of several seconds between two requests lets
+  // the server close the kept-alive socket under the client's next request.
+  const csv = path.join(work, "cv-1m.csv");
+  writeCvExport(csv, TRACE_ROWS);
   const app = await startApp(scratch.url, APP_PORT);
   let failed = false;
   try {
@@ -161,8 +165,6 @@ async function main() {
     rmSync(big);
 
     // 2. First paint of a trace block over 1 000 000 points.
-    const csv = path.join(work, "cv-1m.csv");
-    writeCvExport(csv, TRACE_ROWS);
     const traceEntry = await fetch(`${app.url}/api/entries`, {
       method: "POST",
       headers: { cookie, "content-type": "application/json" },

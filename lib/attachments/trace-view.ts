@@ -78,9 +78,10 @@ export async function getTraceView(
     // The view kept beside the original at upload (or by an earlier reader); the parse of the
     // whole export runs only when there is none, e.g. for a mapping chosen later.
     const storage = getStorage();
-    view = await readPlotView(storage, row.sha256, mapping);
+    view = (await readPlotView(storage, row.sha256, mapping)) ?? undefined;
     if (!view) {
       view = plotViewOf(await parseStream(await storage.read(row.storedPath), mapping), mapping);
+      // Keeping it is an optimisation: a failed write only means the next reader parses too.
       await keepPlotView(storage, row.sha256, view).catch(() => undefined);
     }
     cache.set(key, view);

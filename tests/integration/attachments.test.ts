@@ -11,6 +11,7 @@ import type { Actor } from "@/lib/access/actor";
 import { openAttachment } from "@/lib/attachments/download";
 import { receiveUpload } from "@/lib/attachments/receive-upload";
 import { getTraceView } from "@/lib/attachments/trace-view";
+import { plotViewKey } from "@/lib/attachments/trace-plot-view";
 import { uploadAttachments } from "@/lib/attachments/upload";
 import { signedContentHash } from "@/lib/document/signed-content";
 import { AppError } from "@/lib/errors";
@@ -20,6 +21,7 @@ import { getCurrentContent } from "@/lib/notebook/revisions";
 import { saveEntryContent } from "@/lib/notebook/save-entry";
 import { verifyRevision } from "@/lib/notebook/verification";
 import { getDb } from "@/lib/server/database";
+import { getStorage, originalKey } from "@/lib/storage";
 import { cvTrace, simulateReversibleCv, writeTraceFile } from "@/lib/traces/simulate";
 import { createLabWithMembers, TEST_PASSWORD } from "../support/db";
 
@@ -135,6 +137,34 @@ describe("attachments", () => {
     const deltaEp = view.peaks[0].deltaEpV!;
     expect(deltaEp * 1000).toBeGreaterThan(56);
     expect(deltaEp * 1000).toBeLessThan(60);
+  });
+
+  it("keeps the plot view beside the original at upload, so opening the trace does not parse the export", async () => {
+    const id = await newEntry("CV kept view");
+    const text = writeTraceFile(cvTrace(simulateReversibleCv({ cycles: 1 })), {
+      delimiter: ",",
+      decimal: ".",
+      headerStyle: "colon",
+      nameStyle: "slash",
+      potentialUnit: "V",
+      currentUnit: "A",
+      cycleColumn: false,
+      newline: "\n",
+    });
+    const [dto] = await uploadAttachments(
+      author,
+      id,
+      uploadRequest([{ name: "cv-kept.csv", bytes: new TextEncoder().encode(text) }]),
+    );
+    const storage = getStorage();
+    expect(await storage.size(plotViewKey(dto.sha256, null))).toBeGreaterThan(0);
+    // With the original gone, the view can only come from the kept one.
+    await storage.remove(originalKey(dto.sha256));
+    const view = await getTraceView(author, dto.id);
+    expect(view.summary.technique).toBe("cyclic-voltammetry");
+    expect(view.series).toHaveLength(1);
+    expect(view.peaks[0].deltaEpV! * 1000).toBeGreaterThan(56);
+    expect(view.peaks[0].deltaEpV! * 1000).toBeLessThan(60);
   });
 
   it("stores the same content once and says so", async () => {
