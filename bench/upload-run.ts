@@ -209,10 +209,20 @@ async function main() {
       const [name, value] = cookie.split(/=(.*)/s);
       await context.addCookies([{ name, value, url: app.url }]);
       await context.addInitScript(() => {
-        const w = window as unknown as { firstPlotFrame?: number };
+        const w = window as unknown as {
+          firstPlotFrame?: number;
+          canvasAt?: number;
+          longTasks?: string[];
+        };
+        w.longTasks = [];
+        new PerformanceObserver((list) => {
+          for (const t of list.getEntries())
+            w.longTasks!.push(`${Math.round(t.startTime)}+${Math.round(t.duration)}`);
+        }).observe({ type: "longtask", buffered: true });
         new MutationObserver((_m, observer) => {
           if (document.querySelector("[data-testid='trace-plot'] canvas")) {
             observer.disconnect();
+            w.canvasAt = performance.now();
             requestAnimationFrame(() => (w.firstPlotFrame = performance.now()));
           }
         }).observe(document, { childList: true, subtree: true });
@@ -228,6 +238,8 @@ async function main() {
         return page.evaluate(() => ({
           plot: (window as unknown as { firstPlotFrame: number }).firstPlotFrame,
           text: performance.getEntriesByName("first-contentful-paint")[0]?.startTime ?? Number.NaN,
+          canvasAt: (window as unknown as { canvasAt: number }).canvasAt,
+          longTasks: (window as unknown as { longTasks: string[] }).longTasks,
           // Where the time goes: when the trace's data and the last script arrived.
           resources: performance.getEntriesByType("resource").map((r) => ({
             name: r.name.replace(location.origin, ""),
@@ -238,6 +250,12 @@ async function main() {
       };
       await measure(); // warm-up: the server's first read of the file and the page's chunks
       const runs = [await measure(), await measure(), await measure()];
+      if (process.env.IONLEAF_BENCH_TIMELINE) {
+        const last = runs[runs.length - 1];
+        console.log(
+          `  canvas at ${Math.round(last.canvasAt)} ms; long tasks (start+ms): ${last.longTasks.join(" ")}`,
+        );
+      }
       if (process.env.IONLEAF_BENCH_TIMELINE)
         for (const r of runs[runs.length - 1].resources)
           console.log(`  ${r.start}–${r.end} ms ${r.name}`);

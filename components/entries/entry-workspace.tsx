@@ -1,7 +1,10 @@
 "use client";
 import type { JSONContent } from "@tiptap/core";
 import { useEffect, useRef, useState } from "react";
+import { useQueryClient } from "@tanstack/react-query";
 import { NotebookEditor } from "@/editor/notebook-editor";
+import { preloadTraceBlock } from "@/editor/trace-block/trace-block-view";
+import type { TraceViewDto } from "@/lib/contract/traces";
 import { StoredResultsProvider } from "@/editor/stored-results";
 import type { StoredSolution } from "@/lib/document/stored-evaluation";
 import { ConflictPanel } from "./conflict-panel";
@@ -17,6 +20,8 @@ export interface EntryWorkspaceProps {
   editable: boolean;
   /** The stored numbers of the shown revision's solution blocks, when it is read-only. */
   storedResults?: Readonly<Record<string, StoredSolution>> | null;
+  /** Plot views of the entry's trace blocks that the server had at hand. */
+  traceViews?: readonly TraceViewDto[];
 }
 
 /**
@@ -29,8 +34,16 @@ export function EntryWorkspace(props: EntryWorkspaceProps) {
   // Once per mount: the page gives this component a key of entry id and revision, so a new
   // revision remounts it; a server refresh with the same revision must not restart the session.
   const initial = useRef(props);
+  // The trace views sent with the page go into the query cache the trace blocks read, before
+  // the editor makes them; the plotting code starts loading at once when there are traces.
+  const queryClient = useQueryClient();
+  useState(() => {
+    for (const view of props.traceViews ?? [])
+      queryClient.setQueryData(["trace", view.attachmentId], view);
+  });
   useEffect(() => {
     const props = initial.current;
+    if (props.traceViews?.length) void preloadTraceBlock();
     const draft = props.editable ? readLocalDraft(props.entryId) : null;
     if (draft && draft.baseRevision <= props.revision) {
       setStart({

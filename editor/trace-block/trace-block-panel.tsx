@@ -16,8 +16,12 @@ import { PeaksTable } from "./peaks-table";
 import { useEntryBlocks } from "../use-entry-blocks";
 import { ExpectedVsMeasured, type LinkedVoltammogram } from "./expected-vs-measured";
 
-// uPlot is fetched only when a trace is shown.
-const TracePlot = lazy(() => import("./trace-plot"));
+// uPlot comes with the first trace block only; its fetch starts as soon as this panel's code
+// runs, alongside the trace's data, instead of after the data arrived.
+const importTracePlot = () => import("./trace-plot");
+let tracePlotModule: ReturnType<typeof importTracePlot> | null = null;
+const loadTracePlot = () => (tracePlotModule ??= importTracePlot());
+const TracePlot = lazy(loadTracePlot);
 
 interface TraceBlockPanelProps {
   editor: Editor;
@@ -52,6 +56,7 @@ function currentPrefix(values: number[]) {
  * electrode area (from a linked cell block) and potentials on another reference scale.
  */
 export function TraceBlockPanel({ editor, value, onChange, editable }: TraceBlockPanelProps) {
+  void loadTracePlot();
   const query = useQuery({
     queryKey: ["trace", value.attachmentId],
     queryFn: () => apiFetch<TraceViewDto>(`/api/attachments/${value.attachmentId}/trace`),

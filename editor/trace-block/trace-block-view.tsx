@@ -5,9 +5,13 @@ import { lazy, Suspense } from "react";
 import type { TraceBlockInput } from "@/lib/document/block-schemas";
 import { BlockLoading } from "../block-loading";
 
-// The panel brings the plotting library; it loads with the first trace block only.
+// The panel brings the plotting library; it loads with the first trace block only (or
+// earlier, when the entry page knows it holds traces).
+const importPanel = () => import("./trace-block-panel");
+let panelModule: ReturnType<typeof importPanel> | null = null;
+export const preloadTraceBlock = () => (panelModule ??= importPanel());
 const TraceBlockPanel = lazy(() =>
-  import("./trace-block-panel").then((m) => ({ default: m.TraceBlockPanel })),
+  preloadTraceBlock().then((m) => ({ default: m.TraceBlockPanel })),
 );
 
 /** tiptap node view of a trace block, writing back through updateAttributes. */

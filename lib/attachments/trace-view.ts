@@ -53,12 +53,14 @@ async function loadAttachment(actor: Actor, attachmentId: string) {
 /**
  * A stored instrument export read back from the storage and turned into plot series and
  * voltammetric peaks. The parse runs on demand; the database holds only the summary.
+ * `parse: false` answers null instead of parsing when no view is kept.
  */
-export async function getTraceView(
+async function traceViewOf(
   actor: Actor,
   attachmentId: string,
-  given: ColumnMapping | null = null,
-): Promise<TraceView> {
+  given: ColumnMapping | null,
+  parse: boolean,
+): Promise<TraceView | null> {
   const row = await loadAttachment(actor, attachmentId);
   if (row.kind !== "trace" && row.kind !== "file")
     throw new AppError("invalid_input", "This attachment is not an instrument export.");
@@ -80,6 +82,7 @@ export async function getTraceView(
     const storage = getStorage();
     view = (await readPlotView(storage, row.sha256, mapping)) ?? undefined;
     if (!view) {
+      if (!parse) return null;
       view = plotViewOf(await parseStream(await storage.read(row.storedPath), mapping), mapping);
       // Keeping it is an optimisation: a failed write only means the next reader parses too.
       await keepPlotView(storage, row.sha256, view).catch(() => undefined);
@@ -88,6 +91,26 @@ export async function getTraceView(
     if (cache.size > 16) cache.delete(cache.keys().next().value!);
   }
   return { attachmentId: row.id, name: row.originalName, ...view };
+}
+
+export async function getTraceView(
+  actor: Actor,
+  attachmentId: string,
+  given: ColumnMapping | null = null,
+): Promise<TraceView> {
+  return (await traceViewOf(actor, attachmentId, given, true))!;
+}
+
+/**
+ * The views already at hand (kept or cached) of an entry's trace blocks, for the entry page to
+ * send with its HTML so the plots draw without another round trip. Never parses: a trace
+ * without a kept view, or one this member may not read, is left for the block to fetch.
+ */
+export async function readyTraceViews(actor: Actor, attachmentIds: string[]): Promise<TraceView[]> {
+  const views = await Promise.all(
+    [...new Set(attachmentIds)].map((id) => traceViewOf(actor, id, null, false).catch(() => null)),
+  );
+  return views.filter((v): v is TraceView => v !== null);
 }
 
 /** The mapping dialog's answer: remembered for the lab's files with these columns. */

@@ -44,6 +44,16 @@ export function extractAttachmentIds(doc: unknown): string[] {
   return [...ids];
 }
 
+/** The attachments the document's trace blocks plot, once each. */
+export function extractTraceAttachmentIds(doc: unknown): string[] {
+  const ids = new Set<string>();
+  for (const attrs of collect(doc, "traceBlock")) {
+    const id = (attrs as { attachmentId?: unknown } | null)?.attachmentId;
+    if (typeof id === "string") ids.add(id);
+  }
+  return [...ids];
+}
+
 function collect(doc: unknown, type: string): unknown[] {
   const found: unknown[] = [];
   // An explicit stack, so a deeply nested document cannot overflow the call stack.

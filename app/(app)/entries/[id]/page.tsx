@@ -7,6 +7,8 @@ import { IntegrityBadge } from "@/components/review/integrity-badge";
 import { SignatureManifest } from "@/components/review/signature-manifest";
 import { requireActor } from "@/lib/access/actor";
 import { revisionHash } from "@/lib/document/prepare-revision";
+import { readyTraceViews } from "@/lib/attachments/trace-view";
+import { extractTraceAttachmentIds } from "@/lib/document/extract-blocks";
 import { isAppError } from "@/lib/errors";
 import { NewerStockNotice } from "@/components/lineage/newer-stock-notice";
 import { newerStocksOf } from "@/lib/notebook/lineage/stocks";
@@ -26,11 +28,19 @@ async function load(id: string) {
   const actor = await requireActor();
   try {
     const opened = await openEntry(actor, id);
-    const [reviewers, newerStocks] = await Promise.all([
+    const [reviewers, newerStocks, traceViews] = await Promise.all([
       opened.actions.submit.allowed ? listPossibleReviewers(actor) : Promise.resolve([]),
       newerStocksOf(actor, id),
+      // Sent with the page, so trace blocks draw without waiting for a request of their own.
+      readyTraceViews(actor, extractTraceAttachmentIds(opened.current.content)),
     ]);
-    return { opened, reviewers, newerStocks, isAuthor: opened.entry.authorId === actor.userId };
+    return {
+      opened,
+      reviewers,
+      newerStocks,
+      traceViews,
+      isAuthor: opened.entry.authorId === actor.userId,
+    };
   } catch (error) {
     if (isAppError(error) && error.code === "not_found") notFound();
     throw error;
@@ -48,7 +58,7 @@ function Row({ label, children }: { label: string; children: React.ReactNode }) 
 
 export default async function EntryPage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
-  const { opened, reviewers, newerStocks, isAuthor } = await load(id);
+  const { opened, reviewers, newerStocks, traceViews, isAuthor } = await load(id);
   const { entry, authorName, projectName, actions, current, storedResults, signatures } = opened;
   const editable = actions.edit.allowed;
   const intact =
@@ -83,6 +93,7 @@ export default async function EntryPage({ params }: { params: Promise<{ id: stri
           revision={current.number}
           editable={editable}
           storedResults={storedResults}
+          traceViews={traceViews}
         />
       </div>
       <aside className="space-y-5 text-sm" aria-label="About this entry">
