@@ -250,6 +250,26 @@ async function main() {
       };
       await measure(); // warm-up: the server's first read of the file and the page's chunks
       const runs = [await measure(), await measure(), await measure()];
+      if (process.env.IONLEAF_BENCH_PROFILE) {
+        // One more load under the CPU profiler: self time by function, the heaviest first.
+        const cdp = await context.newCDPSession(page);
+        await cdp.send("Profiler.enable");
+        await cdp.send("Profiler.setSamplingInterval", { interval: 200 });
+        await cdp.send("Profiler.start");
+        await measure();
+        const { profile } = await cdp.send("Profiler.stop");
+        const self = new Map<string, number>();
+        const byId = new Map(profile.nodes.map((n) => [n.id, n]));
+        const deltas = profile.timeDeltas ?? [];
+        (profile.samples ?? []).forEach((id, i) => {
+          const n = byId.get(id)!;
+          const f = n.callFrame;
+          const key = `${f.functionName || "(anonymous)"} ${f.url.replace(/.*\//, "")}:${f.lineNumber}`;
+          self.set(key, (self.get(key) ?? 0) + (deltas[i] ?? 0) / 1000);
+        });
+        for (const [k, ms] of [...self].sort((a, b) => b[1] - a[1]).slice(0, 40))
+          console.log(`  ${ms.toFixed(0).padStart(6)} ms  ${k}`);
+      }
       if (process.env.IONLEAF_BENCH_TIMELINE) {
         const last = runs[runs.length - 1];
         console.log(
