@@ -8,9 +8,10 @@
  *    compared with its baseline measured in the same run after a 1 MB warm-up upload.
  *    Target (attachments issue): the peak stays within 100 MB of the baseline.
  * 2. A trace block over a 1 000 000-row voltammogram export (~50 MB): headless Chromium opens
- *    the entry, and the time from navigation start to the first frame after the plot's canvas
- *    appears is reported, beside the same page's first frame with only text (the baseline).
- *    Target: under 1 s.
+ *    the entry, and the time from navigation start to the first frame with the trace drawn (the
+ *    still picture sent with the page, or the interactive plot's canvas, whichever comes first)
+ *    is reported, beside the page's first contentful paint (the baseline) and the time the
+ *    interactive canvas appears. Target: under 1 s.
  *
  * Exits 1 when a target is missed.
  */
@@ -210,6 +211,7 @@ async function main() {
       await context.addCookies([{ name, value, url: app.url }]);
       await context.addInitScript(() => {
         const w = window as unknown as {
+          firstTraceFrame?: number;
           firstPlotFrame?: number;
           canvasAt?: number;
           longTasks?: string[];
@@ -219,6 +221,18 @@ async function main() {
           for (const t of list.getEntries())
             w.longTasks!.push(`${Math.round(t.startTime)}+${Math.round(t.duration)}`);
         }).observe({ type: "longtask", buffered: true });
+        // The trace's first frame: its still picture (SVG, sent with the page) or the live plot's
+        // canvas, whichever is drawn first.
+        new MutationObserver((_m, observer) => {
+          if (
+            document.querySelector(
+              "[data-testid='trace-preview'] polyline, [data-testid='trace-plot'] canvas",
+            )
+          ) {
+            observer.disconnect();
+            requestAnimationFrame(() => (w.firstTraceFrame = performance.now()));
+          }
+        }).observe(document, { childList: true, subtree: true });
         new MutationObserver((_m, observer) => {
           if (document.querySelector("[data-testid='trace-plot'] canvas")) {
             observer.disconnect();
@@ -236,6 +250,7 @@ async function main() {
           { timeout: 60_000 },
         );
         return page.evaluate(() => ({
+          trace: (window as unknown as { firstTraceFrame: number }).firstTraceFrame,
           plot: (window as unknown as { firstPlotFrame: number }).firstPlotFrame,
           text: performance.getEntriesByName("first-contentful-paint")[0]?.startTime ?? Number.NaN,
           canvasAt: (window as unknown as { canvasAt: number }).canvasAt,
@@ -255,9 +270,26 @@ async function main() {
         const cdp = await context.newCDPSession(page);
         await cdp.send("Profiler.enable");
         await cdp.send("Profiler.setSamplingInterval", { interval: 200 });
+        await cdp.send("Performance.enable");
+        const metric = async () =>
+          new Map((await cdp.send("Performance.getMetrics")).metrics.map((m) => [m.name, m.value]));
+        const before = await metric();
         await cdp.send("Profiler.start");
         await measure();
         const { profile } = await cdp.send("Profiler.stop");
+        const after = await metric();
+        for (const name of [
+          "TaskDuration",
+          "ScriptDuration",
+          "LayoutDuration",
+          "RecalcStyleDuration",
+          "LayoutCount",
+          "RecalcStyleCount",
+          "Nodes",
+        ])
+          console.log(
+            `  ${name}: ${((after.get(name) ?? 0) - (before.get(name) ?? 0)).toFixed(3)} (now ${after.get(name)})`,
+          );
         const self = new Map<string, number>();
         const byId = new Map(profile.nodes.map((n) => [n.id, n]));
         const deltas = profile.timeDeltas ?? [];
@@ -280,15 +312,18 @@ async function main() {
         for (const r of runs[runs.length - 1].resources)
           console.log(`  ${r.start}–${r.end} ms ${r.name}`);
       const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
+      const trace = median(runs.map((r) => r.trace));
       const plot = median(runs.map((r) => r.plot));
       const text = median(runs.map((r) => r.text));
-      const paintOk = plot < PAINT_TARGET_MS;
+      const paintOk = trace < PAINT_TARGET_MS;
       failed ||= !paintOk;
       console.log(
-        `trace block over ${TRACE_ROWS.toLocaleString("en")} points, first plotted frame: ${plot.toFixed(0)} ms ` +
-          `after navigation (median of 3); the page's first contentful paint ${text.toFixed(0)} ms: ` +
-          `${(plot / text).toFixed(2)}× that baseline, ${(plot / PAINT_TARGET_MS).toFixed(2)}× the ` +
-          `${PAINT_TARGET_MS} ms target ${paintOk ? "(within target)" : "(OVER TARGET)"}`,
+        `trace block over ${TRACE_ROWS.toLocaleString("en")} points, first frame with the trace drawn: ` +
+          `${trace.toFixed(0)} ms after navigation (median of 3); the page's first contentful paint ` +
+          `${text.toFixed(0)} ms: ${(trace / text).toFixed(2)}× that baseline, ` +
+          `${(trace / PAINT_TARGET_MS).toFixed(2)}× the ${PAINT_TARGET_MS} ms target ` +
+          `${paintOk ? "(within target)" : "(OVER TARGET)"}; the interactive plot (canvas) follows at ` +
+          `${plot.toFixed(0)} ms`,
       );
     } finally {
       await browser.close();

@@ -1,6 +1,6 @@
 "use client";
 import type { JSONContent } from "@tiptap/core";
-import { useEffect, useRef, useState } from "react";
+import { useEffect, useRef, useState, type ReactNode } from "react";
 import { useQueryClient } from "@tanstack/react-query";
 import { NotebookEditor } from "@/editor/notebook-editor";
 import { preloadTraceBlock } from "@/editor/trace-block/trace-block-view";
@@ -22,6 +22,8 @@ export interface EntryWorkspaceProps {
   storedResults?: Readonly<Record<string, StoredSolution>> | null;
   /** Plot views of the entry's trace blocks that the server had at hand. */
   traceViews?: readonly TraceViewDto[];
+  /** The document drawn on the server, shown until the editor is ready. */
+  preview?: ReactNode;
 }
 
 /**
@@ -65,7 +67,9 @@ export function EntryWorkspace(props: EntryWorkspaceProps) {
 
   if (!start)
     return (
-      <div className="h-96 animate-pulse card bg-paper-deep" aria-label="Loading the editor" />
+      props.preview ?? (
+        <div className="h-96 animate-pulse card bg-paper-deep" aria-label="Loading the editor" />
+      )
     );
   return <EntrySession {...props} start={start} />;
 }
@@ -75,8 +79,11 @@ function EntrySession({
   editable,
   start,
   storedResults,
+  preview,
 }: EntryWorkspaceProps & { start: AutosaveStart }) {
   const restored = start.unsaved;
+  // The server's drawing stays until the editor exists (its first render is empty).
+  const [editorReady, setEditorReady] = useState(false);
   const { state, change, keepMine, discardMine } = useAutosave(entryId, start);
   const [title, setTitle] = useState(start.title);
 
@@ -135,7 +142,10 @@ function EntrySession({
         </div>
       ) : null}
       <StoredResultsProvider results={editable || start.unsaved ? null : (storedResults ?? null)}>
+        {editorReady ? null : preview}
         <NotebookEditor
+          className={editorReady || !preview ? undefined : "hidden"}
+          onEditorReady={() => setEditorReady(true)}
           initialContent={start.content as JSONContent}
           editable={editable}
           ariaLabel={`Text of ${start.title}`}

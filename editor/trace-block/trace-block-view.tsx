@@ -2,6 +2,9 @@
 
 import { NodeViewWrapper, useEditorState, type ReactNodeViewProps } from "@tiptap/react";
 import { lazy, Suspense } from "react";
+import { useQueryClient } from "@tanstack/react-query";
+import { TracePreview } from "@/components/traces/trace-preview";
+import type { TraceViewDto } from "@/lib/contract/traces";
 import type { TraceBlockInput } from "@/lib/document/block-schemas";
 import { BlockLoading } from "../block-loading";
 
@@ -17,9 +20,24 @@ const TraceBlockPanel = lazy(() =>
 /** tiptap node view of a trace block, writing back through updateAttributes. */
 export function TraceBlockView({ node, editor, updateAttributes }: ReactNodeViewProps) {
   const editable = useEditorState({ editor, selector: ({ editor: e }) => e.isEditable });
+  // The view sent with the page keeps the still picture on screen while the plot code loads.
+  const cached = useQueryClient().getQueryData<TraceViewDto>([
+    "trace",
+    (node.attrs as TraceBlockInput).attachmentId,
+  ]);
   return (
     <NodeViewWrapper contentEditable={false}>
-      <Suspense fallback={<BlockLoading kind="trace" />}>
+      <Suspense
+        fallback={
+          cached ? (
+            <div data-live-block="trace" aria-busy="true" className="my-4">
+              <TracePreview view={cached} />
+            </div>
+          ) : (
+            <BlockLoading kind="trace" />
+          )
+        }
+      >
         <TraceBlockPanel
           editor={editor}
           value={node.attrs as TraceBlockInput}

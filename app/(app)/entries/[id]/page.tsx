@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { EntryWorkspace } from "@/components/entries/entry-workspace";
+import { DocumentPreview } from "@/components/entries/document-preview";
 import { StatusChip } from "@/components/entries/status-chip";
 import { IntegrityBadge } from "@/components/review/integrity-badge";
 import { SignatureManifest } from "@/components/review/signature-manifest";
@@ -94,6 +95,7 @@ export default async function EntryPage({ params }: { params: Promise<{ id: stri
           editable={editable}
           storedResults={storedResults}
           traceViews={traceViews}
+          preview={<DocumentPreview content={current.content} traceViews={traceViews} />}
         />
       </div>
       <aside className="space-y-5 text-sm" aria-label="About this entry">
