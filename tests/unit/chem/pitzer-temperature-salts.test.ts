@@ -13,8 +13,12 @@
  *   for 10–40 °C); "after": the temperature function.
  */
 import { describe, expect, it } from "vitest";
-import { debyeHuckelConstants } from "@/lib/chem/debye-huckel-constants";
-import { binaryParameters, pitzerBinarySalt, pitzerMixture } from "@/lib/chem/models/pitzer";
+import {
+  binaryParameters,
+  pitzerBinarySalt,
+  pitzerMixture,
+  pitzerWaterAPhi,
+} from "@/lib/chem/models/pitzer";
 import { PITZER_TEMPERATURE_DERIVATIVES } from "@/lib/chem/models/pitzer/data/temperature-derivatives";
 import { PITZER_TEMPERATURE_FUNCTIONS } from "@/lib/chem/models/pitzer/data/temperature-functions";
 import { evaluateForm } from "@/lib/chem/models/pitzer/temperature/forms";
@@ -56,7 +60,7 @@ const after = (s: Salt, molality: number, temperatureC: number) =>
     anionCharge: s.za,
     molality,
     temperatureC,
-    aPhi: debyeHuckelConstants(temperatureC).aPhi,
+    aPhi: pitzerWaterAPhi(temperatureC),
   });
 
 /** γ± with the 25 °C row moved by the first-order derivatives (the engine without functions). */
@@ -88,7 +92,7 @@ function before(s: Salt, molality: number, temperatureC: number): number {
       psiCations: [[[0]]],
       psiAnions: [[[0]]],
     },
-    debyeHuckelConstants(temperatureC).aPhi,
+    pitzerWaterAPhi(temperatureC),
   );
   return Math.exp((nuC * r.lnGammaCations[0] + nuA * r.lnGammaAnions[0]) / (nuC + nuA));
 }
@@ -171,7 +175,7 @@ describe("KOH: temperature terms of Voigt (2020), THEREDA data set VOI2020, on t
         psiCations: [[[0]]],
         psiAnions: [[[0]]],
       },
-      debyeHuckelConstants(25).aPhi,
+      pitzerWaterAPhi(25),
     );
     return Math.exp((r.lnGammaCations[0] + r.lnGammaAnions[0]) / 2);
   };
@@ -257,7 +261,7 @@ describe("every salt with a temperature function, 0–100 °C", () => {
     (r) => r.temperature_C === "25" && r.original_source.startsWith("CRC"),
   );
 
-  it("25 °C against the CRC Handbook (92nd ed.) table where it lists the salt, 0.1–2 mol/kg: the measured worst deviation per salt, at most 3.5 % (K2SO4, reference README item 7)", () => {
+  it("25 °C against the CRC Handbook (92nd ed.) table where it lists the salt, 0.1–2 mol/kg: the measured worst deviation per salt, at most 3.5 % (K2SO4, reference README item 7; CaCl2 2 mol/kg 2.2 %, item 11)", () => {
     const worst: Record<string, number> = {};
     let checked = 0;
     for (const s of SALTS) {
@@ -266,8 +270,11 @@ describe("every salt with a temperature function, 0–100 °C", () => {
         if (m < 0.1 || m > 2) continue;
         const d = pct(after(s, m, 25).meanActivityCoefficient, Number(row.gamma_pm));
         // K2SO4 +3.5 % at 0.1 mol/kg: handbook 0.424 against 0.441 from the Pitzer
-        // parameters (tests/fixtures/reference/README.md, item 7); all others within 2 %.
-        expect(Math.abs(d), `${s.salt} ${m}`).toBeLessThan(s.salt === "K2SO4" ? 4.5 : 2);
+        // parameters (tests/fixtures/reference/README.md, item 7). CaCl2 +2.2 % at 2 mol/kg:
+        // Appelo's (2015) parameters with the Aφ they were fitted with (Bradley & Pitzer 1979
+        // εr) give 0.801 against the handbook's 0.784 (item 11). All others within 2 %.
+        const tolerance = s.salt === "K2SO4" ? 4.5 : s.salt === "CaCl2" && m === 2 ? 2.5 : 2;
+        expect(Math.abs(d), `${s.salt} ${m}`).toBeLessThan(tolerance);
         if (Math.abs(d) > Math.abs(worst[s.salt] ?? 0)) worst[s.salt] = d;
         checked++;
       }
