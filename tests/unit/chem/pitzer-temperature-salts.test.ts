@@ -4,9 +4,11 @@
  * Peiper & Busey 1984).
  * - Published tables away from 25 °C at hand: HCl at 0.1 mol/kg, Harned & Ehlers (1933) as
  *   printed in Harned & Owen (1958) Table 11-4-1A (from memory; confidence "memory").
- *   For KCl, LiCl, CaCl2, MgCl2, Na2SO4, K2SO4, MgSO4, NaOH, the nitrates and NaClO4 no
- *   published table at other temperatures was at hand: those are checked at 25 °C against
- *   tests/fixtures/reference/gamma-binary.csv (CRC Handbook 92nd ed.) and for continuity.
+ *   KCl, HCl, CaCl2, MgCl2, Na2SO4, K2SO4, MgSO4 and NaOH are checked at 0–100 °C against
+ *   independent published fits in pitzer-temperature-references.test.ts. For LiCl, CsCl, KOH,
+ *   the nitrates and NaClO4 no independent table or fit away from 25 °C was at hand: they are
+ *   checked at 25 °C against tests/fixtures/reference/gamma-binary.csv (CRC Handbook 92nd ed.)
+ *   where it lists them, and for continuity.
  * - Millero & Pierrot (1998) functions (nitrates, NaClO4): their slope at 25 °C is the
  *   ∂P/∂T of Silvester & Pitzer (1978) / Pitzer (1991) (a check of the corrected eq. 15).
  * - "before": the first-order derivatives alone (the engine before these functions, stated

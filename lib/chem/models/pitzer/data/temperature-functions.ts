@@ -37,6 +37,14 @@
  * Public copy of HM83, CMR93, PP87 and MP98: github mvdh7/pytzer pytzer/parameters.py
  * (bC_*_HM83, bC_H_Cl_CMR93, bC_Na_OH_PP87i, bC_*_MP98).
  *
+ * Every row is evaluated with the Aφ of Bradley & Pitzer's (1979) permittivity, the one its fit
+ * used (models/pitzer/water-a-phi.ts). Checked away from 25 °C (lib/chem/README.md has the
+ * table): NaCl against the tables of Pitzer, Peiper & Busey (1984); KCl, HCl, CaCl2, MgCl2, the
+ * sulfates and NaOH against independent published fits (Archer 1999; Møller 1988; Greenberg &
+ * Møller 1989; Phutela & Pitzer 1986; Voigt 2020), within 1 % except where two published fits
+ * disagree (CaCl2 at 0 and 75–100 °C, MgCl2 above 1 mol/kg, Na2SO4 at 0 °C, NaOH); LiCl, CsCl,
+ * KOH, the nitrates and NaClO4 have no independent fit or table away from 25 °C at hand.
+ *
  * The other perchlorates (LiClO4, KClO4, HClO4, Mg/Ca(ClO4)2) and nitrates (LiNO3, HNO3) have
  * no published temperature function in the sources at hand (MP98 lists only NaClO4 and the Na,
  * K, Mg, Ca nitrates; THEREDA gives HNO3 and the nitrates at 25 °C only and has no Li or ClO4):
