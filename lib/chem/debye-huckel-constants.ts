@@ -7,7 +7,8 @@
  *   A (log10) = 3 Aφ / ln 10
  *   B         = ( 2 N_A ρ e² / (ε0 εr k T) )^½                         m⁻¹ (kg/mol)^½ → ×1e-10 per Å
  *
- * Constants: CODATA 2018. Water εr and ρ: Malmberg & Maryott (1956) and Kell (1975).
+ * Constants: CODATA 2018. Water εr and ρ: Malmberg & Maryott (1956) and Kell (1975). The Pitzer
+ * model in water takes Aφ from Bradley & Pitzer's (1979) εr instead (models/pitzer/water-a-phi.ts).
  *
  * Published A at 25 °C spans 0.5085–0.5115 with the permittivity used (εr 78.30–78.54).
  * This engine's choice gives A = 0.5108, B = 0.3287 Å⁻¹ and Aφ = 0.3921 at 25 °C, which

@@ -1,4 +1,5 @@
 export { pitzerModel, computePitzer } from "./pitzer-model";
+export { pitzerWaterAPhi } from "./water-a-phi";
 export { pitzerBinarySalt } from "./binary-salt";
 export { pitzerMixture } from "./equations";
 export { eTheta } from "./e-theta";

@@ -1,13 +1,15 @@
 /**
  * The Pitzer ion-interaction model as an `ActivityModel` (equations in equations.ts,
  * parameters in data/, selection rules in parameter-tables.ts). Valid for aqueous solutions
- * up to the fitted molality of each salt present (typically 2–6 mol/kg), at 25 °C, or
- * 0–50 °C where temperature derivatives are published.
+ * up to the fitted molality of each salt present (typically 2–6 mol/kg), at 0–100 °C where a
+ * temperature function is published, 10–40 °C with first-order derivatives, 25 °C otherwise.
+ * In a solution it uses the Aφ the temperature functions were fitted with (water-a-phi.ts).
  */
 import { ChemInputError } from "../../errors";
 import type { ActivityModel, ActivityModelInput, ActivityModelOutput } from "../types";
 import { assemblePitzerSystem } from "./assemble";
 import { pitzerMixture } from "./equations";
+import { pitzerWaterAPhi } from "./water-a-phi";
 
 const PITZER_FORMULA_TEX = String.raw`\ln\gamma_M = z_M^2 F + \sum_a m_a (2B_{Ma} + Z C_{Ma}) + \sum_c m_c \big(2\Phi_{Mc} + \sum_a m_a \psi_{Mca}\big) + \sum_{a<a'} m_a m_{a'} \psi_{Maa'} + |z_M| \sum_c \sum_a m_c m_a C_{ca}`;
 
@@ -85,11 +87,23 @@ export function computePitzer(input: ActivityModelInput): ActivityModelOutput {
   };
 }
 
+/**
+ * The model as a solution computes it: in water with the Aφ of Bradley & Pitzer's (1979)
+ * permittivity (water-a-phi.ts) instead of the shared Debye–Hückel constants.
+ */
+function computePitzerInSolution(input: ActivityModelInput): ActivityModelOutput {
+  if (input.solvent !== "water") return computePitzer(input);
+  return computePitzer({
+    ...input,
+    constants: { ...input.constants, aPhi: pitzerWaterAPhi(input.temperatureC) },
+  });
+}
+
 export const pitzerModel: ActivityModel = {
   id: "pitzer",
   label: "Pitzer ion interaction",
   formulaTex: PITZER_FORMULA_TEX,
-  compute: computePitzer,
+  compute: computePitzerInSolution,
   validityNote:
-    "Aqueous solutions up to each salt's fitted molality (typically 2–6 mol/kg; May et al. 2011), at 25 °C or 10–40 °C where temperature derivatives are published (Silvester & Pitzer 1978; Pitzer 1991).",
+    "Aqueous solutions up to each salt's fitted molality (typically 2–6 mol/kg; May et al. 2011), at 0–100 °C where a published temperature function exists (e.g. NaCl, KCl, CaCl2, MgCl2, the sulfates, NaOH, KOH; HCl 0–55 °C; nitrates and NaClO4 0–50 °C), 10–40 °C with first-order derivatives (Silvester & Pitzer 1978; Pitzer 1991), 25 °C otherwise.",
 };

@@ -5,13 +5,16 @@
  *
  * Where a function's own 25 °C values reproduce the tabulated γ± less well than the 25 °C
  * compilation (MgCl2 −2.2 %, K2SO4 +3.5 % against the CRC Handbook table; HCl +3 % at
- * 6 mol/kg against Robinson & Stokes 1959, from memory), the row is
+ * 6 mol/kg against Robinson & Stokes 1959, from memory), or where no table at 25 °C is at hand
+ * to choose between them (KOH), the row is
  * `anchored`: P(T) = P(25 °C, compilation) + F(T) − F(298.15 K), the function's temperature
  * change added to the compilation value, as first-order derivatives are applied.
  *
  * - Appelo (2015) Appl. Geochem. 55, 62–71 ("ref. 3" of PHREEQC pitzer.dat), fitted to
  *   0–200 °C; Ionleaf states 0–100 °C (its water correlations). Public copy: github
  *   usgs-coupled/phreeqc3 database/pitzer.dat (tests/fixtures/reference/pitzer-binary-temperature.csv).
+ *   Its KCl β0 and Cφ are those of Greenberg & Møller (1989), its MgCl2 β0 and β1 those of
+ *   de Lima & Pitzer (1983) with the Cφ of Pabalan & Pitzer (1987): the checks use other fits.
  * - Holmes & Mesmer (1983) J. Phys. Chem. 87, 1242, eq. 25 and Table: LiCl, CsCl, 0–250 °C.
  * - Campbell et al. (1993) Mar. Chem. 44, 221, eq. 31: HCl, 0–55 °C (β0 a2 = −2.1197e-3,
  *   the misprint corrected as in Waters & Millero 2013).
@@ -22,14 +25,32 @@
  *   P_R are the Pitzer & Mayorga (1973) 25 °C values, so the rows are anchored on the 25 °C
  *   compilation (May et al. 2011). Their molality limit is that of the ∂P/∂T fit; the 25 °C
  *   row keeps its own range at 25 ± 0.5 °C (`limitAwayFrom25`).
- * Public copy of the last four: github mvdh7/pytzer pytzer/parameters.py (bC_*_HM83,
- * bC_H_Cl_CMR93, bC_Na_OH_PP87i, bC_*_MP98).
+ * - Voigt (2020) THEREDA Journal 1(1), 1–9 ("Hexary system of oceanic salts – polythermal Pitzer
+ *   dataset", the THEREDA data set VOI2020): KOH, 273.15–393.15 K, in the PHREEQC form (data
+ *   class "based upon experimental data"). Public copy: github usgs-coupled/phreeqc3
+ *   database/OtherDatabases/THEREDA_2026-01_PHRQ.dat. Anchored on May et al. (2011) at 25 °C,
+ *   so 25 °C results stay as they were (no KOH table at 25 °C is in the fixtures to choose
+ *   between the sets). The export states no molality range for the fit: Ionleaf applies the
+ *   temperature terms to 6 mol/kg, where VOI2020's own 25 °C γ± stays within 5 % of Pitzer &
+ *   Mayorga (1973) and May et al. (2011) (measured 4.5 %; at 8–10 mol/kg they part by up to
+ *   17 %); beyond it, away from 25 °C, the result says so (tests/unit/chem/pitzer-temperature-salts.test.ts).
+ * Public copy of HM83, CMR93, PP87 and MP98: github mvdh7/pytzer pytzer/parameters.py
+ * (bC_*_HM83, bC_H_Cl_CMR93, bC_Na_OH_PP87i, bC_*_MP98).
  *
- * KOH and the other perchlorates (LiClO4, KClO4, HClO4, Mg/Ca(ClO4)2) and nitrates (LiNO3,
- * HNO3) have no published temperature function in the sources at hand: they keep the
- * first-order derivatives (10–40 °C) or the 25 °C set, and say so away from it. (The KOH row of
- * the MP98 transcription is marked there as a copy of the KI coefficients, not KOH data, and
- * is not used.)
+ * Every row is evaluated with the Aφ of Bradley & Pitzer's (1979) permittivity, the one its fit
+ * used (models/pitzer/water-a-phi.ts). Checked away from 25 °C (lib/chem/README.md has the
+ * table): NaCl against the tables of Pitzer, Peiper & Busey (1984); KCl, HCl, CaCl2, MgCl2, the
+ * sulfates and NaOH against independent published fits (Archer 1999; Møller 1988; Greenberg &
+ * Møller 1989; Phutela & Pitzer 1986; Voigt 2020), within 1 % except where two published fits
+ * disagree (CaCl2 at 0 and 75–100 °C, MgCl2 above 1 mol/kg, Na2SO4 at 0 °C, NaOH); LiCl, CsCl,
+ * KOH, the nitrates and NaClO4 have no independent fit or table away from 25 °C at hand.
+ *
+ * The other perchlorates (LiClO4, KClO4, HClO4, Mg/Ca(ClO4)2) and nitrates (LiNO3, HNO3) have
+ * no published temperature function in the sources at hand (MP98 lists only NaClO4 and the Na,
+ * K, Mg, Ca nitrates; THEREDA gives HNO3 and the nitrates at 25 °C only and has no Li or ClO4):
+ * they keep the first-order derivatives (10–40 °C) or the 25 °C set, and say so away from it.
+ * The KOH row of the MP98 transcription carries the KI temperature terms (an estimate by
+ * analogy, 0–50 °C); it is not used now that a KOH fit exists.
  */
 import type { TemperatureForm } from "../temperature/forms";
 
@@ -66,6 +87,8 @@ const CMR93 = "Campbell et al. (1993) Mar. Chem. 44, 221-233, eq. 31";
 const PP87 = "Pabalan & Pitzer (1987) Geochim. Cosmochim. Acta 51, 2429-2443";
 const MP98 = "Millero & Pierrot (1998) Aquat. Geochem. 4, 153-199, eq. 15";
 const MP98_RANGE = { min: 0, max: 50 };
+const VOI2020 =
+  "Voigt (2020) THEREDA Journal 1(1), 1-9 (THEREDA data set VOI2020), fitted 0-120 °C";
 
 /** One Millero & Pierrot (1998) row: [P_R, P_J·10⁵, P_RL·10⁴] for β0, β1 and Cφ. */
 const mp98 = (
@@ -272,6 +295,24 @@ export const PITZER_TEMPERATURE_FUNCTIONS: readonly PitzerTemperatureFunctionRow
     rangeC: WATER,
     maxMolality: 6,
     source: PP87,
+  },
+  {
+    salt: "KOH",
+    cation: "K+",
+    anion: "OH-",
+    form: "phreeqc",
+    beta0: [0.13733900526985, 147.009407059955, 0, 7.87878490588731e-4, 0, 0],
+    beta1: [0.33487971107695, -2151.13077034097, 0, -0.0171311827530218, 0, 0],
+    beta2: null,
+    cPhi: [0.001788662588501, -22.3159846052078, 0, -2.02214587768356e-4, 0, 0],
+    alpha1: 2,
+    alpha2: 12,
+    anchored: true,
+    limitAwayFrom25: true,
+    rangeC: WATER,
+    // Not stated in the source at hand; Ionleaf's limit, measured (see the header).
+    maxMolality: 6,
+    source: VOI2020,
   },
   // Molality limits: those of the Silvester & Pitzer (1978) / Pitzer (1991) ∂P/∂T fits.
   mp98(
