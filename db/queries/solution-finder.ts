@@ -244,18 +244,7 @@ export async function findSolutionPage(
   if (total <= cap) {
     return { total, capped: false, rows: first.rows.filter((r) => r.id !== null).map(rowOf) };
   }
-  const key = sortExpression(f, sort.column);
-  const reach = page.limit + page.offset;
-  const ordered = sql.join(
-    branches(f).map(
-      (open) =>
-        sql`(select b.id, ${key} as k from ${branchFrom(sort)} where ${conditions(f, open)} order by ${orderBy(f, sort)} limit ${reach})`,
-    ),
-    sql` union all `,
-  );
-  const second = await db.execute<{ id: string }>(sql`
-    select u.id from (${ordered}) u order by ${orderBy(f, sort, "u.")}
-     limit ${page.limit} offset ${page.offset}`);
+  const second = await db.execute<{ id: string }>(orderedIdsSql(f, sort, page));
   const rows = await findSolutionRows(
     db,
     f.labId,
@@ -279,28 +268,98 @@ export async function findSolutionRows(
 }
 
 /**
- * The next batch of the whole result set for the CSV export, newest first, after the keyset
- * (created_at, id) of the previous batch: a stream of any length reads each row once.
+ * Where the CSV export goes on: the last row it listed, by its sort key (as text, which
+ * round-trips a float8 and a timestamptz exactly; null when the row has no value in the sort
+ * column) and its id.
  */
-export async function findSolutionBatch(
-  db: Executor,
+export interface FinderKeyset {
+  key: string | null;
+  id: string;
+}
+
+/** The type a sort key is compared as when it comes back as text. */
+const SORT_KEY_TYPES: Record<FinderSortColumn, string> = {
+  saved: "timestamptz",
+  name: "text",
+  ionicStrength: "float8",
+  debye: "float8",
+  temperature: "float8",
+  entry: "text",
+  author: "text",
+  status: "text",
+};
+
+/**
+ * The rows that come after `keyset` in the order of orderBy: (key, id) beyond the keyset's as
+ * a row comparison, in the sort's direction (ties are broken by id in the same direction). On
+ * a nullable column nulls come last either way, so every null row is beyond a non-null key;
+ * among the nulls (a null keyset key) the id alone goes on.
+ */
+function beyond(f: FinderFilter, sort: FinderSort, keyset: FinderKeyset): SQL {
+  const key = sortExpression(f, sort.column);
+  const op = sql.raw(sort.direction === "asc" ? ">" : "<");
+  const id = sql`${keyset.id}::uuid`;
+  if (keyset.key === null) return sql`${key} is null and b.id ${op} ${id}`;
+  const typed = sql`${keyset.key}::${sql.raw(SORT_KEY_TYPES[sort.column])}`;
+  const after = sql`(${key}, b.id) ${op} (${typed}, ${id})`;
+  return NULLABLE_SORTS.has(sort.column) ? sql`(${after} or ${key} is null)` : after;
+}
+
+/**
+ * The ids of one stretch of the matches in the table's order (orderBy), with each row's sort
+ * key as text: `limit` rows from `offset`, counted from the first match or from the first row
+ * beyond `after`. Each branch reads its own first offset + limit in order (an index in that
+ * order walks no further), then the branches are merged. Rows are read by id afterwards
+ * (findSolutionRows), so the sort works on narrow rows.
+ */
+function orderedIdsSql(
   f: FinderFilter,
-  after: { savedKey: string; id: string } | null,
-  size: number,
-): Promise<(FinderRow & { savedKey: string })[]> {
-  const keyset = after
-    ? sql` and (b.created_at, b.id) < (${after.savedKey}::timestamptz, ${after.id}::uuid)`
-    : sql``;
-  const union = sql.join(
+  sort: FinderSort,
+  page: { limit: number; offset: number },
+  after: FinderKeyset | null = null,
+): SQL {
+  const key = sortExpression(f, sort.column);
+  const resume = after ? sql` and ${beyond(f, sort, after)}` : sql``;
+  const reach = page.limit + page.offset;
+  const ordered = sql.join(
     branches(f).map(
       (open) =>
-        sql`(select ${DETAIL_COLUMNS}, b.created_at::text as "savedKey" from ${DETAIL_FROM} where ${conditions(f, open)}${keyset} order by b.created_at desc, b.id desc limit ${size})`,
+        sql`(select b.id, ${key} as k from ${branchFrom(sort)} where ${conditions(f, open)}${resume} order by ${orderBy(f, sort)} limit ${reach})`,
     ),
     sql` union all `,
   );
-  const result = await db.execute<Record<string, unknown> & { savedKey: string }>(
-    sql`select * from (${union}) u order by u."createdAt" desc, u.id desc limit ${size}`,
+  return sql`
+    select u.id, u.k::text as key from (${ordered}) u order by ${orderBy(f, sort, "u.")}
+     limit ${page.limit} offset ${page.offset}`;
+}
+
+/**
+ * The next `limit` matches of the whole result set for the CSV export, as keysets (id and
+ * sort key), in the table's order (the query's sort column and direction, ties broken by id,
+ * nulls last) after the keyset of the previous call; the rows are read by id
+ * (findSolutionRows).
+ *
+ * Why a keyset on (sort key, id) and not a cursor: each call is a statement of its own, so a
+ * slow download holds neither one of the pool's 10 connections nor a snapshot between calls.
+ * It is exact under concurrent saves because block rows are never deleted and their own
+ * columns (name, I, λD, T, date) never change: every row that matches from the first call to
+ * the last is listed once, in order; a row saved meanwhile is listed if it sorts after the
+ * rows already listed. Sorted by an entry's title, status or author's name, which can change
+ * during a long export, a row whose entry changed under it can cross the keyset (listed twice,
+ * or not at all); a REPEATABLE READ cursor would avoid that but would hold a connection and
+ * its snapshot for as long as the client takes to read. The cost: a sort that no index serves
+ * reads every match beyond the keyset for each call (a top-N sort of narrow rows), which is
+ * why the export asks for thousands of keys at a time and reads their rows in smaller batches.
+ */
+export async function findSolutionKeys(
+  db: Executor,
+  f: FinderFilter,
+  sort: FinderSort,
+  after: FinderKeyset | null,
+  limit: number,
+): Promise<FinderKeyset[]> {
+  const result = await db.execute<{ id: string; key: string | null }>(
+    orderedIdsSql(f, sort, { limit, offset: 0 }, after),
   );
-  // savedKey: created_at at full precision (microseconds), the keyset of the next batch.
-  return result.rows.map((r) => ({ ...rowOf(r), savedKey: r.savedKey }));
+  return result.rows.map((r) => ({ id: r.id, key: r.key }));
 }
