@@ -9,8 +9,10 @@ import { revisionMatches } from "./solution-finder-text";
  * that neither branch can wander into the other's rows. Every branch has the lab id in its
  * WHERE clause. Archived entries are left out by an anti-join over the small
  * `entries_archived_idx`; entry-level filters (author, project, status, text) are
- * semi-joins, so a range + species query reads nothing but one covering index
- * (docs/architecture.md, "The solution finder").
+ * semi-joins. A search that names species reads the current solutions from block_species
+ * (one row per species of each open row) when it can (speciesIndexServes), so a range +
+ * species query reads the rows of that species in the window from one covering index and
+ * nothing else (docs/architecture.md, "The solution finder").
  */
 
 export interface FinderFilter {
@@ -48,18 +50,24 @@ export interface FinderSort {
 /** Sorts that need the entry (and its author) joined before ordering. */
 const ENTRY_SORTS = new Set<FinderSortColumn>(["entry", "author", "status"]);
 
-function ionicColumn(scale: FinderFilter["scale"]): SQL {
-  return sql.raw(scale === "molar" ? "b.ionic_strength_molar" : "b.ionic_strength_molal");
+/**
+ * The table a branch reads: `b` is block_results (open or closed rows); `s` is block_species,
+ * the open rows' species index, read when a search names species (speciesIndexServes).
+ */
+type Rows = "b" | "s";
+
+function ionicColumn(scale: FinderFilter["scale"], t: Rows = "b"): SQL {
+  return sql.raw(`${t}.${scale === "molar" ? "ionic_strength_molar" : "ionic_strength_molal"}`);
 }
 
-function sortExpression(f: FinderFilter, column: FinderSortColumn): SQL {
+function sortExpression(f: FinderFilter, column: FinderSortColumn, t: Rows = "b"): SQL {
   switch (column) {
     case "saved":
-      return sql.raw("b.created_at");
+      return sql.raw(`${t}.created_at`);
     case "name":
       return sql.raw("lower(b.name)");
     case "ionicStrength":
-      return ionicColumn(f.scale);
+      return ionicColumn(f.scale, t);
     case "debye":
       return sql.raw("b.debye_length_nm");
     case "temperature":
@@ -73,17 +81,59 @@ function sortExpression(f: FinderFilter, column: FinderSortColumn): SQL {
   }
 }
 
-/** The WHERE clause of one branch (open or closed rows) for the filter. */
-function conditions(f: FinderFilter, open: boolean): SQL {
+/** Sorts whose key block_species has, or reaches through the entry. */
+const SPECIES_INDEX_SORTS = new Set<FinderSortColumn>([
+  "saved",
+  "ionicStrength",
+  "entry",
+  "author",
+  "status",
+]);
+
+/**
+ * Whether the current solutions of a search are read from block_species: the search names
+ * species (all of them, or just one), filters on nothing but what block_species holds (lab,
+ * I, date, and the entry's archiving, author, project, status and text) and sorts by a key it
+ * has. It then reads the rows of the first species in the ionic-strength window from
+ * block_species_molal_idx (or _molar_idx) alone, where block_results_current_molal_idx would
+ * read every row of the window and test the species of each: eight times the rows for a
+ * species in one solution in eight. Anything else reads block_results as before.
+ */
+function speciesIndexServes(f: FinderFilter, sort: FinderSort): boolean {
+  return (
+    f.species.length > 0 &&
+    (f.speciesMatch === "all" || f.species.length === 1) &&
+    SPECIES_INDEX_SORTS.has(sort.column) &&
+    f.temperatureMin === undefined &&
+    f.temperatureMax === undefined &&
+    !f.solvent &&
+    !f.modelUsed
+  );
+}
+
+/**
+ * The WHERE clause of one branch for the filter: the open or closed rows of block_results,
+ * or (t = "s") the open rows' species in block_species, which speciesIndexServes allows only
+ * for the conditions block_species can answer.
+ */
+function conditions(f: FinderFilter, open: boolean, t: Rows = "b"): SQL {
   const where: SQL[] = [
-    sql`b.lab_id = ${f.labId}`,
-    open ? sql`b.to_revision is null` : sql`b.to_revision is not null`,
-    sql`not exists (select 1 from entries xa where xa.id = b.entry_id and xa.archived_at is not null)`,
+    t === "s" ? sql`s.lab_id = ${f.labId}` : sql`b.lab_id = ${f.labId}`,
+    ...(t === "s" ? [] : [open ? sql`b.to_revision is null` : sql`b.to_revision is not null`]),
+    sql`not exists (select 1 from entries xa where xa.id = ${sql.raw(t)}.entry_id and xa.archived_at is not null)`,
   ];
-  const ionic = ionicColumn(f.scale);
+  const ionic = ionicColumn(f.scale, t);
   if (f.ionicStrengthMin !== undefined) where.push(sql`${ionic} >= ${f.ionicStrengthMin}`);
   if (f.ionicStrengthMax !== undefined) where.push(sql`${ionic} <= ${f.ionicStrengthMax}`);
-  if (f.species.length) {
+  if (t === "s") {
+    // The first species is in the index; each other one ("all of") a probe of its key.
+    const [first, ...others] = f.species;
+    where.push(sql`s.species = ${first}`);
+    for (const other of others)
+      where.push(
+        sql`exists (select 1 from block_species s2 where s2.block_result_id = s.block_result_id and s2.species = ${other})`,
+      );
+  } else if (f.species.length) {
     const list = sql`${sql.param(f.species)}::text[]`;
     where.push(f.speciesMatch === "all" ? sql`b.species @> ${list}` : sql`b.species && ${list}`);
   }
@@ -91,15 +141,17 @@ function conditions(f: FinderFilter, open: boolean): SQL {
   if (f.temperatureMax !== undefined) where.push(sql`b.temperature_c <= ${f.temperatureMax}`);
   if (f.solvent) where.push(sql`b.solvent = ${f.solvent}`);
   if (f.modelUsed) where.push(sql`b.model_used = ${f.modelUsed}`);
-  if (f.savedFrom) where.push(sql`b.created_at >= ${f.savedFrom.toISOString()}::timestamptz`);
-  if (f.savedBefore) where.push(sql`b.created_at < ${f.savedBefore.toISOString()}::timestamptz`);
+  const saved = sql.raw(`${t}.created_at`);
+  if (f.savedFrom) where.push(sql`${saved} >= ${f.savedFrom.toISOString()}::timestamptz`);
+  if (f.savedBefore) where.push(sql`${saved} < ${f.savedBefore.toISOString()}::timestamptz`);
+  const entryId = sql.raw(`${t}.entry_id`);
   if (f.authorId || f.projectId || f.status) {
     const entry: SQL[] = [sql`xe.lab_id = ${f.labId}`];
     if (f.authorId) entry.push(sql`xe.author_id = ${f.authorId}`);
     if (f.projectId) entry.push(sql`xe.project_id = ${f.projectId}`);
     if (f.status) entry.push(sql`xe.status = ${f.status}`);
     where.push(
-      sql`b.entry_id in (select xe.id from entries xe where ${sql.join(entry, sql` and `)})`,
+      sql`${entryId} in (select xe.id from entries xe where ${sql.join(entry, sql` and `)})`,
     );
   }
   if (f.tsquery) {
@@ -109,7 +161,7 @@ function conditions(f: FinderFilter, open: boolean): SQL {
     // History: a revision the row was shown in must match.
     where.push(
       open
-        ? sql`b.entry_id = any(array(select xr.entry_id from revisions xr join entries xc on xc.id = xr.entry_id and xc.current_revision_number = xr.number where xc.lab_id = ${f.labId} and ${revisionMatches("xr", f.tsquery)}))`
+        ? sql`${entryId} = any(array(select xr.entry_id from revisions xr join entries xc on xc.id = xr.entry_id and xc.current_revision_number = xr.number where xc.lab_id = ${f.labId} and ${revisionMatches("xr", f.tsquery)}))`
         : sql`exists (select 1 from revisions xr where xr.entry_id = b.entry_id and xr.number >= b.from_revision and xr.number < b.to_revision and ${revisionMatches("xr", f.tsquery)})`,
     );
   }
@@ -117,30 +169,51 @@ function conditions(f: FinderFilter, open: boolean): SQL {
 }
 
 /** The rows a branch reads, with the entry and author joined only when the sort needs them. */
-function branchFrom(sort: FinderSort): SQL {
+function branchFrom(sort: FinderSort, t: Rows = "b"): SQL {
+  const rows = t === "s" ? sql`block_species s` : sql`block_results b`;
   return ENTRY_SORTS.has(sort.column)
-    ? sql`block_results b join entries e on e.id = b.entry_id join users u on u.id = e.author_id`
-    : sql`block_results b`;
+    ? sql`${rows} join entries e on e.id = ${sql.raw(t)}.entry_id join users u on u.id = e.author_id`
+    : rows;
+}
+
+/** One branch of the search: the rows it reads, their WHERE, and each match's id and key. */
+interface Branch {
+  from: SQL;
+  where: SQL;
+  id: SQL;
+  key: SQL;
+}
+
+/** The current solutions, and with `includeHistory` the closed rows, in a UNION ALL. */
+function branches(f: FinderFilter, sort: FinderSort): Branch[] {
+  return (f.includeHistory ? [true, false] : [true]).map((open) => {
+    const t: Rows = open && speciesIndexServes(f, sort) ? "s" : "b";
+    return {
+      from: branchFrom(sort, t),
+      where: conditions(f, open, t),
+      id: sql.raw(t === "s" ? "s.block_result_id" : "b.id"),
+      key: sortExpression(f, sort.column, t),
+    };
+  });
 }
 
 /** Sort columns that may be null (a block whose inputs the engine refused has no I). */
 const NULLABLE_SORTS = new Set<FinderSortColumn>(["ionicStrength", "debye"]);
 
 /**
- * ORDER BY for a sort, ties broken by id. Nulls go last; "nulls last" is written only for
- * columns that can be null, because on a NOT NULL column it would still stop PostgreSQL
- * from reading an index backwards (newest first) in index order.
+ * ORDER BY for a sort on a key and an id, ties broken by id. Nulls go last; "nulls last" is
+ * written only for columns that can be null, because on a NOT NULL column it would still
+ * stop PostgreSQL from reading an index backwards (newest first) in index order.
  */
-function orderBy(f: FinderFilter, sort: FinderSort, prefix = ""): SQL {
+function orderBy(sort: FinderSort, key: SQL, id: SQL): SQL {
   const dir = sql.raw(sort.direction === "asc" ? "asc" : "desc");
   const nulls = sql.raw(NULLABLE_SORTS.has(sort.column) ? " nulls last" : "");
-  const key = prefix ? sql.raw(`${prefix}k`) : sortExpression(f, sort.column);
-  const id = sql.raw(prefix ? `${prefix}id` : "b.id");
   return sql`${key} ${dir}${nulls}, ${id} ${dir}`;
 }
 
-function branches(f: FinderFilter): boolean[] {
-  return f.includeHistory ? [true, false] : [true];
+/** The order of merged branches' (or collected) matches, by their columns k and id. */
+function orderByColumns(sort: FinderSort, prefix: string): SQL {
+  return orderBy(sort, sql.raw(`${prefix}k`), sql.raw(`${prefix}id`));
 }
 
 export interface FinderRow {
@@ -204,18 +277,17 @@ export function solutionPageSql(
   page: { limit: number; offset: number },
   cap: number,
 ): SQL {
-  const key = sortExpression(f, sort.column);
   const union = sql.join(
-    branches(f).map(
-      (open) =>
-        sql`(select b.id, ${key} as k from ${branchFrom(sort)} where ${conditions(f, open)} limit ${cap + 1})`,
+    branches(f, sort).map(
+      (b) =>
+        sql`(select ${b.id} as id, ${b.key} as k from ${b.from} where ${b.where} limit ${cap + 1})`,
     ),
     sql` union all `,
   );
   return sql`
     with m as materialized (select * from (${union}) u limit ${cap + 1}),
-         pg as materialized (select m.id, row_number() over (order by ${orderBy(f, sort, "m.")}) as n
-                               from m order by ${orderBy(f, sort, "m.")}
+         pg as materialized (select m.id, row_number() over (order by ${orderByColumns(sort, "m.")}) as n
+                               from m order by ${orderByColumns(sort, "m.")}
                               limit ${page.limit} offset ${page.offset})
     select (select count(*) from m)::int as total, d.*
       from (select 1) one
@@ -295,13 +367,13 @@ const SORT_KEY_TYPES: Record<FinderSortColumn, string> = {
  * a nullable column nulls come last either way, so every null row is beyond a non-null key;
  * among the nulls (a null keyset key) the id alone goes on.
  */
-function beyond(f: FinderFilter, sort: FinderSort, keyset: FinderKeyset): SQL {
-  const key = sortExpression(f, sort.column);
+function beyond(sort: FinderSort, branch: Branch, keyset: FinderKeyset): SQL {
+  const { key, id } = branch;
   const op = sql.raw(sort.direction === "asc" ? ">" : "<");
-  const id = sql`${keyset.id}::uuid`;
-  if (keyset.key === null) return sql`${key} is null and b.id ${op} ${id}`;
+  const lastId = sql`${keyset.id}::uuid`;
+  if (keyset.key === null) return sql`${key} is null and ${id} ${op} ${lastId}`;
   const typed = sql`${keyset.key}::${sql.raw(SORT_KEY_TYPES[sort.column])}`;
-  const after = sql`(${key}, b.id) ${op} (${typed}, ${id})`;
+  const after = sql`(${key}, ${id}) ${op} (${typed}, ${lastId})`;
   return NULLABLE_SORTS.has(sort.column) ? sql`(${after} or ${key} is null)` : after;
 }
 
@@ -318,18 +390,16 @@ function orderedIdsSql(
   page: { limit: number; offset: number },
   after: FinderKeyset | null = null,
 ): SQL {
-  const key = sortExpression(f, sort.column);
-  const resume = after ? sql` and ${beyond(f, sort, after)}` : sql``;
   const reach = page.limit + page.offset;
   const ordered = sql.join(
-    branches(f).map(
-      (open) =>
-        sql`(select b.id, ${key} as k from ${branchFrom(sort)} where ${conditions(f, open)}${resume} order by ${orderBy(f, sort)} limit ${reach})`,
-    ),
+    branches(f, sort).map((b) => {
+      const resume = after ? sql` and ${beyond(sort, b, after)}` : sql``;
+      return sql`(select ${b.id} as id, ${b.key} as k from ${b.from} where ${b.where}${resume} order by ${orderBy(sort, b.key, b.id)} limit ${reach})`;
+    }),
     sql` union all `,
   );
   return sql`
-    select u.id, u.k::text as key from (${ordered}) u order by ${orderBy(f, sort, "u.")}
+    select u.id, u.k::text as key from (${ordered}) u order by ${orderByColumns(sort, "u.")}
      limit ${page.limit} offset ${page.offset}`;
 }
 
