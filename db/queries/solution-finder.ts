@@ -239,21 +239,23 @@ export interface FinderRow {
   projectName: string;
 }
 
+/**
+ * What the table shows of a block row. The recipe, author and project are scalar subqueries
+ * on their primary keys (every block row has exactly one of each), so the planner orders two
+ * joins instead of five: planning the five-way join took longer than running it for a page
+ * of 50 rows (about 0.9 against 0.5 ms for the page statement at a million rows).
+ */
 const DETAIL_COLUMNS = sql`
   b.id, b.entry_id as "entryId", b.block_id as "blockId", b.from_revision as "fromRevision",
   b.to_revision as "toRevision", b.name, b.ionic_strength_molal as "ionicStrengthMolal",
   b.ionic_strength_molar as "ionicStrengthMolar", b.debye_length_nm as "debyeLengthNm",
   b.temperature_c as "temperatureC", b.solvent, b.model_used as "modelUsed", b.species,
-  r.inputs -> 'components' as components, b.created_at as "createdAt",
-  e.title as "entryTitle", e.status as "entryStatus",
-  u.name as "authorName", p.name as "projectName"`;
+  (select r.inputs -> 'components' from solution_results r where r.id = b.result_id) as components,
+  b.created_at as "createdAt", e.title as "entryTitle", e.status as "entryStatus",
+  (select u.name from users u where u.id = e.author_id) as "authorName",
+  (select p.name from projects p where p.id = e.project_id) as "projectName"`;
 
-const DETAIL_FROM = sql`
-  block_results b
-  join solution_results r on r.id = b.result_id
-  join entries e on e.id = b.entry_id
-  join users u on u.id = e.author_id
-  join projects p on p.id = e.project_id`;
+const DETAIL_FROM = sql`block_results b join entries e on e.id = b.entry_id`;
 
 function rowOf(r: Record<string, unknown>): FinderRow {
   return { ...(r as unknown as FinderRow), createdAt: new Date(r.createdAt as string) };
