@@ -9,10 +9,11 @@ import { revisionMatches } from "./solution-finder-text";
  * that neither branch can wander into the other's rows. Every branch has the lab id in its
  * WHERE clause. Archived entries are left out by an anti-join over the small
  * `entries_archived_idx`; entry-level filters (author, project, status, text) are
- * semi-joins. A search that names species reads the current solutions from block_species
- * (one row per species of each open row) when it can (speciesIndexServes), so a range +
- * species query reads the rows of that species in the window from one covering index and
- * nothing else (docs/architecture.md, "The solution finder").
+ * semi-joins. The page's statement for a search that names species reads the current
+ * solutions from block_species (one row per species of each open row) when it can
+ * (speciesIndexServes, branches), so a range + species query reads the rows of that species
+ * in the window from one covering index and nothing else (docs/architecture.md, "The
+ * solution finder").
  */
 
 export interface FinderFilter {
@@ -56,8 +57,8 @@ const ENTRY_SORTS = new Set<FinderSortColumn>(["entry", "author", "status"]);
  */
 type Rows = "b" | "s";
 
-function ionicColumn(scale: FinderFilter["scale"], t: Rows = "b"): SQL {
-  return sql.raw(`${t}.${scale === "molar" ? "ionic_strength_molar" : "ionic_strength_molal"}`);
+function ionicColumn(scale: FinderFilter["scale"], alias: string = "b"): SQL {
+  return sql.raw(`${alias}.${scale === "molar" ? "ionic_strength_molar" : "ionic_strength_molal"}`);
 }
 
 function sortExpression(f: FinderFilter, column: FinderSortColumn, t: Rows = "b"): SQL {
@@ -126,12 +127,17 @@ function conditions(f: FinderFilter, open: boolean, t: Rows = "b"): SQL {
   if (f.ionicStrengthMin !== undefined) where.push(sql`${ionic} >= ${f.ionicStrengthMin}`);
   if (f.ionicStrengthMax !== undefined) where.push(sql`${ionic} <= ${f.ionicStrengthMax}`);
   if (t === "s") {
-    // The first species is in the index; each other one ("all of") a probe of its key.
+    // The first species is read from the index; each other one ("all of") is the same
+    // window of its own rows, which the planner hashes or probes row by row (rare species).
     const [first, ...others] = f.species;
     where.push(sql`s.species = ${first}`);
+    const window = (column: SQL) => [
+      ...(f.ionicStrengthMin !== undefined ? [sql` and ${column} >= ${f.ionicStrengthMin}`] : []),
+      ...(f.ionicStrengthMax !== undefined ? [sql` and ${column} <= ${f.ionicStrengthMax}`] : []),
+    ];
     for (const other of others)
       where.push(
-        sql`exists (select 1 from block_species s2 where s2.block_result_id = s.block_result_id and s2.species = ${other})`,
+        sql`s.block_result_id in (select s2.block_result_id from block_species s2 where s2.lab_id = ${f.labId} and s2.species = ${other}${sql.join(window(ionicColumn(f.scale, "s2")))})`,
       );
   } else if (f.species.length) {
     const list = sql`${sql.param(f.species)}::text[]`;
@@ -184,10 +190,18 @@ interface Branch {
   key: SQL;
 }
 
-/** The current solutions, and with `includeHistory` the closed rows, in a UNION ALL. */
-function branches(f: FinderFilter, sort: FinderSort): Branch[] {
+/**
+ * The current solutions, and with `includeHistory` the closed rows, in a UNION ALL.
+ * `speciesIndex`: whether the current solutions may be read from block_species. The page's
+ * statement reads at most 1 001 matches in no order, so the species' own rows are the
+ * fewest it can read. A statement that reads matches in order (past 1 001 matches, and the
+ * export) reads block_results, whose date and I indexes let it stop after the rows it needs,
+ * where block_species would read every row of the species in the window to sort them (for a
+ * species in half the solutions, a hundred thousand rows).
+ */
+function branches(f: FinderFilter, sort: FinderSort, speciesIndex: boolean): Branch[] {
   return (f.includeHistory ? [true, false] : [true]).map((open) => {
-    const t: Rows = open && speciesIndexServes(f, sort) ? "s" : "b";
+    const t: Rows = speciesIndex && open && speciesIndexServes(f, sort) ? "s" : "b";
     return {
       from: branchFrom(sort, t),
       where: conditions(f, open, t),
@@ -280,7 +294,7 @@ export function solutionPageSql(
   cap: number,
 ): SQL {
   const union = sql.join(
-    branches(f, sort).map(
+    branches(f, sort, true).map(
       (b) =>
         sql`(select ${b.id} as id, ${b.key} as k from ${b.from} where ${b.where} limit ${cap + 1})`,
     ),
@@ -394,7 +408,7 @@ function orderedIdsSql(
 ): SQL {
   const reach = page.limit + page.offset;
   const ordered = sql.join(
-    branches(f, sort).map((b) => {
+    branches(f, sort, false).map((b) => {
       const resume = after ? sql` and ${beyond(sort, b, after)}` : sql``;
       return sql`(select ${b.id} as id, ${b.key} as k from ${b.from} where ${b.where}${resume} order by ${orderBy(sort, b.key, b.id)} limit ${reach})`;
     }),

@@ -187,8 +187,14 @@ describe("the CSV export in the table's order", () => {
     }
   });
 
-  it("keeps the order with a filter and with earlier revisions (two branches merged)", async () => {
-    const queries: Record<string, string>[] = [{ species: "KCl", tMin: "21" }, { history: "1" }];
+  it("keeps the order with filters and with earlier revisions (two branches merged)", async () => {
+    // A species alone: the table's page reads block_species, the export block_results.
+    const queries: Record<string, string>[] = [
+      { species: "KCl" },
+      { species: "K+", iMin: "0.02" },
+      { species: "KCl", tMin: "21" },
+      { history: "1" },
+    ];
     for (const query of queries) {
       for (const sort of ["ionicStrength", "name", "saved", "author"]) {
         for (const dir of ["asc", "desc"]) {
