@@ -7,10 +7,15 @@ import type { Pool } from "pg";
  * owner), and the records the product keeps forever cannot even be addressed by an UPDATE
  * or DELETE: those privileges are simply not granted.
  *
- * Every table: SELECT and INSERT (new tables are covered on the next migration run).
+ * Every table: SELECT and INSERT (new tables are covered on the next migration run), except
+ * the tables the database derives by itself, which the application only reads.
  * UPDATE only where the product changes a row after writing it, listed here with why.
  * DELETE nowhere: Ionleaf removes nothing (archiving is a column, withdrawal a timestamp).
  */
+const DERIVED_TABLES: Record<string, string> = {
+  block_species: "the finder's species index, kept by triggers on block_results (0010)",
+};
+
 const UPDATABLE_TABLES: Record<string, string> = {
   users: "role, activation, password and session version change",
   entries: "status, current and signed revision pointers move forward",
@@ -39,6 +44,8 @@ export async function grantAppRolePrivileges(owner: Pool, appRole: string): Prom
     await client.query(`revoke all on all sequences in schema public from ${role}`);
     await client.query(`grant select, insert on all tables in schema public to ${role}`);
     await client.query(`grant usage, select on all sequences in schema public to ${role}`);
+    for (const table of Object.keys(DERIVED_TABLES))
+      await client.query(`revoke insert on ${quoteIdentifier(table)} from ${role}`);
     for (const table of Object.keys(UPDATABLE_TABLES))
       await client.query(`grant update on ${quoteIdentifier(table)} to ${role}`);
     for (const [table, columns] of Object.entries(UPDATABLE_COLUMNS))

@@ -291,6 +291,16 @@ async function insertEntries(
        join solution_results r on r.id = k.id`,
     [labId, recipeCount],
   );
+  // The finder's species index, which triggers keep when they are not switched off.
+  await client.query(
+    `insert into block_species (block_result_id, lab_id, species, ionic_strength_molal,
+                                ionic_strength_molar, entry_id, created_at)
+     select distinct b.id, b.lab_id, s.species, b.ionic_strength_molal, b.ionic_strength_molar,
+            b.entry_id, b.created_at
+       from block_results b cross join lateral unnest(b.species) as s(species)
+      where b.lab_id = $1 and b.to_revision is null`,
+    [labId],
+  );
 }
 
 export interface SyntheticLabOptions {
@@ -308,7 +318,8 @@ export interface SyntheticLabOptions {
 
 /**
  * One synthetic lab: 12 members (password SYNTHETIC_PASSWORD), 24 projects, entries with
- * their revisions and block rows. Run by a superuser session with
+ * their revisions and block rows (and the open rows' species in block_species, which the
+ * triggers switched off here would write). Run by a superuser session with
  * `session_replication_role = replica` inside a transaction (the caller's), so that
  * foreign keys and the record guards are not checked row by row. The tests' plan checks
  * use it on a small scale. Returns the lab id.
@@ -335,7 +346,7 @@ export async function seedSyntheticSolutions(db: ScratchDatabase): Promise<"seed
     // construction here, not row by row.
     await client.query(`set session_replication_role = replica`);
     await client.query("begin");
-    const tables = ["block_results", "solution_results", "revisions", "entries"];
+    const tables = ["block_results", "block_species", "solution_results", "revisions", "entries"];
     const indexes = await dropIndexes(client, tables);
     await seedSyntheticLab(client, {
       slug: SYNTHETIC_LAB_SLUG,

@@ -7,6 +7,7 @@ import {
   integer,
   jsonb,
   pgTable,
+  primaryKey,
   text,
   timestamp,
   unique,
@@ -257,6 +258,34 @@ export const blockResults = pgTable(
       sql`${t.toRevision} is null or ${t.toRevision} > ${t.fromRevision}`,
     ),
   ],
+);
+
+/**
+ * The solution finder's species index: one row per species of each open block row
+ * (`block_results.to_revision IS NULL`), with what a range + species search filters and
+ * returns, so that such a search reads exactly the rows of that species in the
+ * ionic-strength window instead of every row of the window (a GIN index on the array cannot
+ * do ranges or cover). Derived, never written by the application: triggers on
+ * block_results add a row's species when it is inserted open and remove them when it is
+ * closed (drizzle/0010_finder_species.sql), and the application role may only read it.
+ * The covering indexes (lab, species, I) INCLUDE (created_at, entry_id, block_result_id)
+ * on either scale are written in that migration too, because Drizzle cannot declare
+ * INCLUDE: block_species_molal_idx and block_species_molar_idx.
+ */
+export const blockSpecies = pgTable(
+  "block_species",
+  {
+    blockResultId: uuid("block_result_id")
+      .notNull()
+      .references(() => blockResults.id, { onDelete: "restrict" }),
+    labId: uuid("lab_id").notNull(),
+    species: text("species").notNull(),
+    ionicStrengthMolal: doublePrecision("ionic_strength_molal"),
+    ionicStrengthMolar: doublePrecision("ionic_strength_molar"),
+    entryId: uuid("entry_id").notNull(),
+    createdAt: timestamp("created_at", { withTimezone: true }).notNull(),
+  },
+  (t) => [primaryKey({ name: "block_species_pkey", columns: [t.blockResultId, t.species] })],
 );
 
 /**

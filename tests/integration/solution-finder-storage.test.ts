@@ -86,6 +86,24 @@ describe("rows written per save", () => {
       results: BLOCKS + SAVES - 1,
     });
 
+    // The finder's species index (block_species, kept by triggers) holds exactly the open
+    // rows' species with their values; the 199 rows closed by the saves left nothing there.
+    const index = await getDb().execute<{ missing: number; extra: number; expected: number }>(sql`
+      with expected as (
+             select b.id, s.species, b.lab_id, b.ionic_strength_molal, b.ionic_strength_molar,
+                    b.entry_id, b.created_at
+               from block_results b cross join unnest(b.species) as s(species)
+              where b.entry_id = ${id} and b.to_revision is null),
+           actual as (
+             select block_result_id, species, lab_id, ionic_strength_molal, ionic_strength_molar,
+                    entry_id, created_at
+               from block_species where entry_id = ${id})
+      select (select count(*) from (select * from expected except select * from actual) x)::int as missing,
+             (select count(*) from (select * from actual except select * from expected) x)::int as extra,
+             (select count(*) from expected)::int as expected`);
+    // KNO3, K+ and NO3- for each of the 20 open rows.
+    expect(index.rows[0]).toEqual({ missing: 0, extra: 0, expected: 3 * BLOCKS });
+
     // A save that changes only the text writes a revision and no solution row at all.
     const textOnly = await saveEntryContent(researcher, id, {
       baseRevision: SAVES,

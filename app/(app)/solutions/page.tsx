@@ -9,7 +9,7 @@ import { listMembers } from "@/lib/labs/members";
 import { searchSolutions, type SolutionSearchResult } from "@/lib/notebook/solution-finder";
 import { listProjects } from "@/lib/projects/service";
 import { FINDER_QUERY_KEYS, type FinderSortKey } from "@/lib/validation/solution-finder";
-import { finderHref, ResultsTable } from "./results-table";
+import { finderExportHref, finderHref, ResultsTable } from "./results-table";
 
 export const metadata: Metadata = { title: "Solution finder" };
 
@@ -43,7 +43,6 @@ export default async function SolutionFinderPage({
     fieldErrors = error.fieldErrors ?? { _form: [error.message] };
   }
   const { page: _page, sort: _sort, dir: _dir, ...filters } = query;
-  const csvParams = new URLSearchParams(filters).toString();
   const sort = (result ? (query.sort ?? "saved") : "saved") as FinderSortKey;
   const dir = (query.dir ?? (sort === "saved" ? "desc" : "asc")) as "asc" | "desc";
   const scale = query.scale === "molar" ? "molar" : "molal";
@@ -58,11 +57,7 @@ export default async function SolutionFinderPage({
           </p>
         </div>
         {result ? (
-          <a
-            href={`/api/solutions/export${csvParams ? `?${csvParams}` : ""}`}
-            className="btn-quiet"
-            download
-          >
+          <a href={finderExportHref(query)} className="btn-quiet" download>
             Export CSV
           </a>
         ) : null}

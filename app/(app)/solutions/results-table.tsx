@@ -16,6 +16,17 @@ export function finderHref(query: Query, changes: Query): string {
 }
 
 /**
+ * The CSV export of this search: every match in the table's order, so the filters with the
+ * sort and its direction, and no page.
+ */
+export function finderExportHref(query: Query): string {
+  const params = new URLSearchParams();
+  for (const [k, v] of Object.entries(query)) if (v && k !== "page") params.set(k, v);
+  const text = params.toString();
+  return text ? `/api/solutions/export?${text}` : "/api/solutions/export";
+}
+
+/**
  * The table's columns. Quantities keep their symbols' case ("λD / nm"); author and date fold
  * into the entry cell below desktop width so that a tablet shows the table without scrolling.
  */
