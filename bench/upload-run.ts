@@ -254,6 +254,10 @@ async function main() {
           plot: (window as unknown as { firstPlotFrame: number }).firstPlotFrame,
           text: performance.getEntriesByName("first-contentful-paint")[0]?.startTime ?? Number.NaN,
           canvasAt: (window as unknown as { canvasAt: number }).canvasAt,
+          navigation: (() => {
+            const n = performance.getEntriesByType("navigation")[0] as PerformanceNavigationTiming;
+            return `response ${Math.round(n.responseStart)}–${Math.round(n.responseEnd)} ms (${Math.round(n.transferSize / 1024)} KiB), DOMContentLoaded ${Math.round(n.domContentLoadedEventEnd)} ms, first paint ${Math.round(performance.getEntriesByName("first-paint")[0]?.startTime ?? NaN)} ms`;
+          })(),
           longTasks: (window as unknown as { longTasks: string[] }).longTasks,
           // Where the time goes: when the trace's data and the last script arrived.
           resources: performance.getEntriesByType("resource").map((r) => ({
@@ -303,9 +307,23 @@ async function main() {
           console.log(`  ${ms.toFixed(0).padStart(6)} ms  ${k}`);
       }
       if (process.env.IONLEAF_BENCH_TIMELINE) {
+        // The server's share: time to the first byte and to the last of the entry's HTML.
+        for (const target of [`/entries/${traceEntryId}`, "/entries"]) {
+          const t0 = performance.now();
+          const res = await fetch(`${app.url}${target}`, { headers: { cookie } });
+          const reader = res.body!.getReader();
+          const { value: first } = await reader.read();
+          const tFirst = performance.now() - t0;
+          let bytes = first?.length ?? 0;
+          for (let r = await reader.read(); !r.done; r = await reader.read())
+            bytes += r.value.length;
+          console.log(
+            `  ${target}: first byte ${tFirst.toFixed(0)} ms, last ${(performance.now() - t0).toFixed(0)} ms, ${(bytes / 1024).toFixed(0)} KiB`,
+          );
+        }
         const last = runs[runs.length - 1];
         console.log(
-          `  canvas at ${Math.round(last.canvasAt)} ms; long tasks (start+ms): ${last.longTasks.join(" ")}`,
+          `  ${last.navigation}; trace frame ${Math.round(last.trace)} ms; canvas at ${Math.round(last.canvasAt)} ms; long tasks (start+ms): ${last.longTasks.join(" ")}`,
         );
       }
       if (process.env.IONLEAF_BENCH_TIMELINE)

@@ -4,6 +4,7 @@ const COLOURS = ["#1b6964", "#9c5430", "#52606d", "#7d4226", "#22807a", "#b8683d
 const WIDTH = 640;
 const HEIGHT = 300;
 const PAD = { left: 56, right: 12, top: 12, bottom: 36 };
+const MAX_DRAWN_POINTS = 4000;
 
 /** "1.2e-5" style numbers for the axis ends, short enough for a corner label. */
 const tick = (v: number) =>
@@ -15,15 +16,24 @@ const tick = (v: number) =>
  * replaces it. No hooks and no browser APIs: it renders on the server and in the browser.
  */
 export function TracePreview({ view }: { view: Pick<TraceViewDto, "series" | "axes" | "name"> }) {
-  const points = view.series.flatMap((s) => s.x.map((x, i) => [x, s.y[i]] as const));
-  if (points.length === 0) return null;
+  const total = view.series.reduce((n, s) => n + s.x.length, 0);
+  if (total === 0) return null;
   let [xMin, xMax, yMin, yMax] = [Infinity, -Infinity, Infinity, -Infinity];
-  for (const [x, y] of points) {
-    xMin = Math.min(xMin, x);
-    xMax = Math.max(xMax, x);
-    yMin = Math.min(yMin, y);
-    yMax = Math.max(yMax, y);
-  }
+  for (const s of view.series)
+    for (let i = 0; i < s.x.length; i++) {
+      xMin = Math.min(xMin, s.x[i]);
+      xMax = Math.max(xMax, s.x[i]);
+      yMin = Math.min(yMin, s.y[i]);
+      yMax = Math.max(yMax, s.y[i]);
+    }
+  // A picture some 600 px wide needs no more than a few thousand vertices in all.
+  const step = Math.max(1, Math.ceil(total / MAX_DRAWN_POINTS));
+  const polyline = (s: { x: number[]; y: number[] }) => {
+    const out: string[] = [];
+    for (let i = 0; i < s.x.length; i += step)
+      out.push(`${px(s.x[i]).toFixed(1)},${py(s.y[i]).toFixed(1)}`);
+    return out.join(" ");
+  };
   const xSpan = xMax - xMin || 1;
   const ySpan = yMax - yMin || 1;
   const innerW = WIDTH - PAD.left - PAD.right;
@@ -46,7 +56,7 @@ export function TracePreview({ view }: { view: Pick<TraceViewDto, "series" | "ax
           stroke={COLOURS[k % COLOURS.length]}
           strokeWidth={1.5}
           vectorEffect="non-scaling-stroke"
-          points={s.x.map((x, i) => `${px(x).toFixed(1)},${py(s.y[i]).toFixed(1)}`).join(" ")}
+          points={polyline(s)}
         />
       ))}
       <g fill="#52606d" fontSize={11}>

@@ -62,7 +62,8 @@ function XYPlot({
         width,
         height,
         mode: 2,
-        legend: { show: true, live: false },
+        // A long cycling run would list hundreds of rows; its cycles are picked above instead.
+        legend: { show: series.length <= 12, live: false },
         // Peaks are marked with rings drawn over the curves.
         hooks: {
           draw: [

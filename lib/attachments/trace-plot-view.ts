@@ -16,18 +16,27 @@ import {
 
 /** Points per plotted series: enough for a crisp line, few enough for a quick first paint. */
 const MAX_PLOT_POINTS = 4000;
+/**
+ * Points over all cycles of a voltammogram together, with at least MIN_CYCLE_POINTS per cycle
+ * (min–max buckets keep each cycle's peaks). Without a total, a long cycling run (hundreds of
+ * cycles) sent 200 points for every cycle: 80 000 points, megabytes of JSON for one block.
+ */
+const MAX_TOTAL_CYCLE_POINTS = 16_000;
+const MIN_CYCLE_POINTS = 40;
 
 /**
  * Bumped whenever what a plot view holds changes (downsampling, peak finding, fields), so a
  * view kept from an earlier version is computed again instead of being served.
  */
-const PLOT_VIEW_VERSION = 1;
+const PLOT_VIEW_VERSION = 2;
 
 /** What the trace route answers for an export, apart from the attachment's id and name. */
 export type TracePlotView = Omit<TraceViewDto, "attachmentId" | "name">;
 type TraceSeries = TraceViewDto["series"][number];
 
-const plain = (a: ArrayLike<number>) => Array.from(a, (v) => (Number.isFinite(v) ? v : 0));
+/** Plain numbers for JSON, to 7 significant digits (far below a pixel; a third of the bytes). */
+const plain = (a: ArrayLike<number>) =>
+  Array.from(a, (v) => (Number.isFinite(v) ? Number(v.toPrecision(7)) : 0));
 
 function seriesOf(trace: ParsedTrace): Pick<TracePlotView, "series" | "axes" | "bode" | "peaks"> {
   const { summary } = trace;
@@ -66,7 +75,10 @@ function seriesOf(trace: ParsedTrace): Pick<TracePlotView, "series" | "axes" | "
     const cycles = summary.cycles.length
       ? summary.cycles
       : [{ number: 1, startRow: 0, endRow: summary.points }];
-    const perCycle = Math.max(200, Math.floor(MAX_PLOT_POINTS / cycles.length));
+    const perCycle = Math.min(
+      MAX_PLOT_POINTS,
+      Math.max(MIN_CYCLE_POINTS, Math.floor(MAX_TOTAL_CYCLE_POINTS / cycles.length)),
+    );
     for (const c of cycles) {
       const d = downsampleForPlot(
         potential.subarray(c.startRow, c.endRow),
