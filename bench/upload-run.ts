@@ -330,7 +330,9 @@ async function main() {
         for (const r of runs[runs.length - 1].resources)
           console.log(`  ${r.start}–${r.end} ms ${r.name}`);
       const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
-      const trace = median(runs.map((r) => r.trace));
+      // A frame scheduled before the page's first contentful paint is not on screen before it:
+      // the trace is visible at the later of the two.
+      const trace = median(runs.map((r) => Math.max(r.trace, r.text)));
       const plot = median(runs.map((r) => r.plot));
       const text = median(runs.map((r) => r.text));
       const paintOk = trace < PAINT_TARGET_MS;
