@@ -269,6 +269,28 @@ async function main() {
       };
       await measure(); // warm-up: the server's first read of the file and the page's chunks
       const runs = [await measure(), await measure(), await measure()];
+      const shots = process.env.IONLEAF_BENCH_SHOTS;
+      if (shots) {
+        // What a reader sees: the page as sent (scripts off: the still picture) and live.
+        for (const width of [1360, 768])
+          for (const javaScriptEnabled of [false, true]) {
+            const shotContext = await browser.newContext({
+              viewport: { width, height: 1000 },
+              javaScriptEnabled,
+            });
+            await shotContext.addCookies([{ name, value, url: app.url }]);
+            const shotPage = await shotContext.newPage();
+            await shotPage.goto(`${app.url}/entries/${traceEntryId}`);
+            if (javaScriptEnabled)
+              await shotPage.waitForSelector("[data-testid='trace-plot'] canvas", {
+                timeout: 60_000,
+              });
+            await shotPage.screenshot({
+              path: path.join(shots, `trace-${javaScriptEnabled ? "live" : "sent"}-${width}.png`),
+            });
+            await shotContext.close();
+          }
+      }
       if (process.env.IONLEAF_BENCH_PROFILE) {
         // One more load under the CPU profiler: self time by function, the heaviest first.
         const cdp = await context.newCDPSession(page);

@@ -26,14 +26,12 @@ export function TracePreview({ view }: { view: Pick<TraceViewDto, "series" | "ax
       yMin = Math.min(yMin, s.y[i]);
       yMax = Math.max(yMax, s.y[i]);
     }
-  // A picture some 600 px wide needs no more than a few thousand vertices in all.
-  const step = Math.max(1, Math.ceil(total / MAX_DRAWN_POINTS));
-  const polyline = (s: { x: number[]; y: number[] }) => {
-    const out: string[] = [];
-    for (let i = 0; i < s.x.length; i += step)
-      out.push(`${px(s.x[i]).toFixed(1)},${py(s.y[i]).toFixed(1)}`);
-    return out.join(" ");
-  };
+  // A picture some 600 px wide needs no more than a few thousand vertices in all: of a long
+  // cycling run it draws every k-th cycle (and the last) whole, rather than every cycle coarse.
+  const every = Math.max(1, Math.ceil(total / MAX_DRAWN_POINTS));
+  const drawn = view.series.filter((_, k) => k % every === 0 || k === view.series.length - 1);
+  const polyline = (s: { x: number[]; y: number[] }) =>
+    s.x.map((x, i) => `${px(x).toFixed(1)},${py(s.y[i]).toFixed(1)}`).join(" ");
   const xSpan = xMax - xMin || 1;
   const ySpan = yMax - yMin || 1;
   const innerW = WIDTH - PAD.left - PAD.right;
@@ -49,7 +47,7 @@ export function TracePreview({ view }: { view: Pick<TraceViewDto, "series" | "ax
       aria-label={`${view.axes.y} against ${view.axes.x}: ${view.name}`}
     >
       <rect x={PAD.left} y={PAD.top} width={innerW} height={innerH} fill="none" stroke="#e5e7eb" />
-      {view.series.map((s, k) => (
+      {drawn.map((s, k) => (
         <polyline
           key={s.label}
           fill="none"

@@ -23,6 +23,56 @@ let tracePlotModule: ReturnType<typeof importTracePlot> | null = null;
 const loadTracePlot = () => (tracePlotModule ??= importTracePlot());
 const TracePlot = lazy(loadTracePlot);
 
+/** Above this many cycles the cycle checkboxes fold into a disclosure. */
+const MANY_CYCLES = 12;
+
+/** Which cycles of a voltammogram are drawn; null means all. */
+function CycleChoices({
+  labels,
+  chosen,
+  editable,
+  onChange,
+}: {
+  labels: string[];
+  chosen: number[] | null | undefined;
+  editable: boolean;
+  onChange: (cycles: number[] | null) => void;
+}) {
+  const boxes = (
+    <fieldset className="flex flex-wrap gap-3 text-xs">
+      <legend className="sr-only">Cycles shown</legend>
+      {labels.map((label, i) => (
+        <label key={label} className="flex items-center gap-1">
+          <input
+            type="checkbox"
+            checked={!chosen || chosen.includes(i + 1)}
+            disabled={!editable}
+            onChange={(e) => {
+              const all = labels.map((_, k) => k + 1);
+              const current = chosen ?? all;
+              const next = e.target.checked
+                ? [...new Set([...current, i + 1])].sort((a, b) => a - b)
+                : current.filter((c) => c !== i + 1);
+              onChange(next.length === all.length ? null : next);
+            }}
+          />
+          {label}
+        </label>
+      ))}
+    </fieldset>
+  );
+  if (labels.length <= MANY_CYCLES) return boxes;
+  // A long cycling run: the list folds away instead of filling the block.
+  return (
+    <details className="text-xs">
+      <summary className="cursor-pointer text-ink-soft">
+        Cycles shown: {chosen ? `${chosen.length} of ${labels.length}` : `all ${labels.length}`}
+      </summary>
+      <div className="mt-2 max-h-48 overflow-y-auto">{boxes}</div>
+    </details>
+  );
+}
+
 interface TraceBlockPanelProps {
   editor: Editor;
   value: TraceBlockInput;
@@ -227,27 +277,12 @@ export function TraceBlockPanel({ editor, value, onChange, editable }: TraceBloc
               </label>
             </div>
             {isVoltammetry && view.series.length > 1 ? (
-              <fieldset className="flex flex-wrap gap-3 text-xs">
-                <legend className="sr-only">Cycles shown</legend>
-                {view.series.map((s, i) => (
-                  <label key={s.label} className="flex items-center gap-1">
-                    <input
-                      type="checkbox"
-                      checked={!value.cycles || value.cycles.includes(i + 1)}
-                      disabled={!editable}
-                      onChange={(e) => {
-                        const all = view.series.map((_, k) => k + 1);
-                        const current = value.cycles ?? all;
-                        const next = e.target.checked
-                          ? [...new Set([...current, i + 1])].sort((a, b) => a - b)
-                          : current.filter((c) => c !== i + 1);
-                        patch({ cycles: next.length === all.length ? null : next });
-                      }}
-                    />
-                    {s.label}
-                  </label>
-                ))}
-              </fieldset>
+              <CycleChoices
+                labels={view.series.map((x) => x.label)}
+                chosen={value.cycles}
+                editable={editable}
+                onChange={(cycles) => patch({ cycles })}
+              />
             ) : null}
             {shown && shown.series.length ? (
               <Suspense fallback={<div className="h-72 animate-pulse rounded bg-paper-deep" />}>

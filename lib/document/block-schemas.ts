@@ -186,7 +186,7 @@ export const traceBlockInputSchema = z.strictObject({
   /** Show potentials against this reference electrode instead of the file's own. */
   potentialScale: z.enum(REFERENCE_ELECTRODE_IDS).nullable(),
   /** Cycles shown (voltammetry); null: all. */
-  cycles: z.array(z.number().int().min(1).max(100_000)).max(200).nullable(),
+  cycles: z.array(z.number().int().min(1).max(100_000)).max(10_000).nullable(),
 });
 export type TraceBlockInput = z.infer<typeof traceBlockInputSchema>;
 
