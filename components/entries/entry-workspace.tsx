@@ -66,10 +66,14 @@ export function EntryWorkspace(props: EntryWorkspaceProps) {
   }, []);
 
   if (!start)
-    return (
-      props.preview ?? (
-        <div className="h-96 animate-pulse card bg-paper-deep" aria-label="Loading the editor" />
-      )
+    return props.preview ? (
+      // Laid out as the session below lays out its title and editor, so nothing moves.
+      <div className="space-y-4">
+        <p className="py-[3px] text-2xl font-semibold tracking-tight">{props.title}</p>
+        {props.preview}
+      </div>
+    ) : (
+      <div className="h-96 animate-pulse card bg-paper-deep" aria-label="Loading the editor" />
     );
   return <EntrySession {...props} start={start} />;
 }
