@@ -4,4 +4,4 @@
  * before keep the numbers they were computed with, and a signed revision can say which
  * engine computed its numbers and whether today's engine would give others.
  */
-export const ENGINE_VERSION = "2026.12.5";
+export const ENGINE_VERSION = "2026.12.6";

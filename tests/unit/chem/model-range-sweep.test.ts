@@ -22,14 +22,8 @@ const rows = readFixture("gamma-binary.csv").map((r) => ({
   memory: r.confidence.startsWith("memory"),
 }));
 
-/**
- * Confirmed rows a model misses by more than 2 % without flagging, each with its measured
- * deviation and reason (tests/fixtures/reference/README.md, known disagreements).
- * - CaCl2 2 mol/kg at 25 °C, Pitzer: 0.801 with Appelo's (2015) parameters and the Aφ they were
- *   fitted with (Bradley & Pitzer 1979 εr), 2.2 % above the handbook's 0.784 (Staples &
- *   Nuttall 1977 evaluation); the same fit is within 0.5 % at 5 mol/kg (item 11).
- */
-const KNOWN_EXCEPTIONS: Record<string, number> = { "CaCl2 2 25": 2.3 };
+/** Confirmed rows a model misses by more than 2 % without flagging: none today. */
+const KNOWN_EXCEPTIONS: Record<string, number> = {};
 
 const MODELS: (ActivityModelId | "auto")[] = [
   "dh-limiting",

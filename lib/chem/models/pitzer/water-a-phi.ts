@@ -10,14 +10,27 @@
  * against the fit's own values (tests/unit/chem/pitzer-temperature-references.test.ts). Same
  * general expression and water density (Kell 1975) as debye-huckel-constants.ts; only εr differs.
  */
-import { debyeHuckelConstantsFrom } from "../../debye-huckel-constants";
+import { debyeHuckelConstants, debyeHuckelConstantsFrom } from "../../debye-huckel-constants";
 import { waterDensityGPerMl, waterRelativePermittivityBradleyPitzer } from "../../solvents/water";
 
-/** Aφ (kg/mol)^½ of water at 1 atm for the Pitzer model, 0–100 °C. */
-export function pitzerWaterAPhi(temperatureC: number): number {
-  return debyeHuckelConstantsFrom(
+const bradleyPitzerAPhi = (temperatureC: number) =>
+  debyeHuckelConstantsFrom(
     waterRelativePermittivityBradleyPitzer(temperatureC),
     waterDensityGPerMl(temperatureC),
     temperatureC,
   ).aPhi;
+
+/** Aφ at 25 °C as the other models have it (Malmberg & Maryott εr): 0.3921 (kg/mol)^½. */
+const A_PHI_25 = debyeHuckelConstants(25).aPhi;
+const BRADLEY_PITZER_A_PHI_25 = bradleyPitzerAPhi(25);
+
+/**
+ * Aφ (kg/mol)^½ of water at 1 atm for the Pitzer model, 0–100 °C: the 25 °C value the 25 °C
+ * parameter sets (Pitzer & Mayorga 1973, May et al. 2011) reproduce their tables with, changed
+ * with temperature as the Bradley & Pitzer Aφ changes, like the anchored parameter rows. So 25 °C
+ * results stay as the handbook tables have them (CaCl2 at 2 mol/kg moved 2.2 % above the CRC
+ * value with the Bradley & Pitzer value itself) and the temperature change is the fits' own.
+ */
+export function pitzerWaterAPhi(temperatureC: number): number {
+  return A_PHI_25 + bradleyPitzerAPhi(temperatureC) - BRADLEY_PITZER_A_PHI_25;
 }
