@@ -35,9 +35,10 @@
  * pytzer Aosm_CRP94; checked against tests/fixtures/reference/water-properties.csv); the εr of
  * Bradley & Pitzer (1979) for PP86 (Pitzer's group) and VOI2020 (run in PHREEQC), evaluated
  * with the engine's function (lib/chem/models/pitzer/water-a-phi.ts, checked below against
- * Archer & Wang and Møller). The Pitzer model uses that Aφ since this check: with the Malmberg &
- * Maryott εr of the other models its Aφ was 0.55 % low at 100 °C, and γ± of MgSO4 at 2 mol/kg
- * 3.9 % high against Phutela & Pitzer there.
+ * Archer & Wang and Møller). Since this check the Pitzer model's Aφ changes with temperature as
+ * that Aφ does (kept at the other models' 0.3921 at 25 °C): with the Malmberg & Maryott εr alone
+ * its Aφ was 0.55 % low at 100 °C, and γ± of MgSO4 at 2 mol/kg 3.9 % high against Phutela &
+ * Pitzer there.
  *
  * Molalities stay below the solubility of the salt at each temperature (from memory: Na2SO4
  * about 0.3 mol/kg at 0 °C and 2 at 25 °C, K2SO4 0.4 at 0 °C and 0.7 at 25 °C, KCl 3.7 at 0 °C,
