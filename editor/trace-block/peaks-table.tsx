@@ -18,10 +18,15 @@ export function PeaksTable({
   const current = (a: number | null | undefined) =>
     a === null || a === undefined ? "—" : formatSignificant(a * perArea);
   const unit = perArea === 1 ? "A" : "A cm⁻²";
+  // A long cycling run scrolls inside the block (focusable, so the keyboard can scroll it too).
+  const long = peaks.length > 12;
   return (
-    <div className="overflow-x-auto">
+    <div
+      className={long ? "max-h-72 overflow-auto" : "overflow-x-auto"}
+      {...(long ? { tabIndex: 0, role: "region", "aria-label": "Peaks of every cycle" } : {})}
+    >
       <table className="w-full text-xs tabular-nums" aria-label="Peaks per cycle">
-        <thead className="text-left text-ink-soft">
+        <thead className="sticky top-0 bg-paper text-left text-ink-soft">
           <tr>
             <th scope="col" className="py-1 pr-3 font-normal">
               Cycle
