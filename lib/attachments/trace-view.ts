@@ -1,6 +1,5 @@
 import "server-only";
 import type { TraceViewDto } from "@/lib/contract/traces";
-import type { Readable } from "node:stream";
 import { findLabAttachment, findTraceMapping, saveTraceMapping } from "@/db/queries/attachments";
 import { insertAuditEvent } from "@/db/queries/audit";
 import { AppError } from "@/lib/errors";
@@ -8,34 +7,12 @@ import { loadEntryFor } from "@/lib/notebook/entry-access";
 import { assertCan, type Actor } from "@/lib/rules/authorize";
 import { getDb } from "@/lib/server/database";
 import { getStorage } from "@/lib/storage";
-import {
-  createTraceParser,
-  type ColumnMapping,
-  type ParsedTrace,
-  type TraceSummary,
-} from "@/lib/traces";
+import type { ColumnMapping, TraceSummary } from "@/lib/traces";
+import { parseTraceStream } from "@/lib/traces/parse-file";
 import { layoutKeyOf } from "./trace-layout";
 import { keepPlotView, plotViewOf, readPlotView, type TracePlotView } from "./trace-plot-view";
 
 type TraceView = TraceViewDto;
-
-async function parseStream(stream: Readable, mapping: ColumnMapping | null): Promise<ParsedTrace> {
-  const parser = createTraceParser(mapping ? { mapping } : {});
-  let decoder: TextDecoder | null = null;
-  for await (const piece of stream) {
-    let bytes = piece as Buffer;
-    if (!decoder) {
-      const le = bytes[0] === 0xff && bytes[1] === 0xfe;
-      const be = bytes[0] === 0xfe && bytes[1] === 0xff;
-      const utf8Bom = bytes[0] === 0xef && bytes[1] === 0xbb && bytes[2] === 0xbf;
-      decoder = new TextDecoder(le ? "utf-16le" : be ? "utf-16be" : "utf-8");
-      bytes = bytes.subarray(le || be ? 2 : utf8Bom ? 3 : 0);
-    }
-    parser.push(decoder.decode(bytes, { stream: true }));
-  }
-  if (decoder) parser.push(decoder.decode());
-  return parser.finish();
-}
 
 /** Recent views by content and mapping: reopening an entry does not parse a big file again. */
 const cache = new Map<string, TracePlotView>();
@@ -83,7 +60,10 @@ async function traceViewOf(
     view = (await readPlotView(storage, row.sha256, mapping)) ?? undefined;
     if (!view) {
       if (!parse) return null;
-      view = plotViewOf(await parseStream(await storage.read(row.storedPath), mapping), mapping);
+      view = plotViewOf(
+        await parseTraceStream(await storage.read(row.storedPath), mapping ? { mapping } : {}),
+        mapping,
+      );
       // Keeping it is an optimisation: a failed write only means the next reader parses too.
       await keepPlotView(storage, row.sha256, view).catch(() => undefined);
     }

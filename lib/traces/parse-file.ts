@@ -22,14 +22,22 @@ function encodingOf(first: Uint8Array): {
   return { encoding: "utf-8", bomBytes: 0 };
 }
 
-export async function parseTraceFile(
+export function parseTraceFile(
   path: string,
+  options: TraceParseOptions = {},
+): Promise<ParsedTrace> {
+  return parseTraceStream(createReadStream(path, { highWaterMark: CHUNK_BYTES }), options);
+}
+
+/** The same from any byte stream (a file, or an object read back from the storage). */
+export async function parseTraceStream(
+  chunks: AsyncIterable<unknown>,
   options: TraceParseOptions = {},
 ): Promise<ParsedTrace> {
   const parser = createTraceParser(options);
   let decoder: TextDecoder | null = null;
-  for await (const piece of createReadStream(path, { highWaterMark: CHUNK_BYTES })) {
-    let bytes = piece as Buffer;
+  for await (const piece of chunks) {
+    let bytes = piece as Uint8Array;
     if (!decoder) {
       const { encoding, bomBytes } = encodingOf(bytes);
       decoder = new TextDecoder(encoding);
