@@ -53,7 +53,7 @@ const day = (label: string) =>
       }, `${label}: use a real date between 2000 and 2200.`),
   );
 
-const FINDER_SORT_KEYS = [
+export const FINDER_SORT_KEYS = [
   "saved",
   "name",
   "ionicStrength",

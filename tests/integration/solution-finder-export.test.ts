@@ -10,6 +10,7 @@ import { submitEntry } from "@/lib/notebook/review";
 import { saveEntryContent } from "@/lib/notebook/save-entry";
 import { searchSolutions, solutionsCsvStream } from "@/lib/notebook/solution-finder";
 import { getDb } from "@/lib/server/database";
+import { FINDER_SORT_KEYS } from "@/lib/validation/solution-finder";
 import { createLabWithMembers } from "../support/db";
 
 /**
@@ -19,16 +20,8 @@ import { createLabWithMembers } from "../support/db";
  * with blocks the engine refused (no ionic strength, no Debye length) among them.
  */
 
-const SORTS = [
-  "saved",
-  "name",
-  "ionicStrength",
-  "debye",
-  "temperature",
-  "entry",
-  "author",
-  "status",
-] as const;
+// Every column the table can sort by: a column added later is exported in order too.
+const SORTS = FINDER_SORT_KEYS;
 /** Keys read in order per statement, and rows written per batch: both end inside pages. */
 const KEYS = 20;
 const BATCH = 7;
