@@ -46,9 +46,15 @@ function BlockCard({ kind, name, children }: { kind: string; name: string; child
   );
 }
 
-function Node({ node, traces }: { node: DocNode; traces: ReadonlyMap<string, TraceViewDto> }) {
+function PreviewNode({
+  node,
+  traces,
+}: {
+  node: DocNode;
+  traces: ReadonlyMap<string, TraceViewDto>;
+}) {
   const inner = (node.content ?? []).map((child, i) => (
-    <Node key={i} node={child} traces={traces} />
+    <PreviewNode key={i} node={child} traces={traces} />
   ));
   switch (node.type) {
     case "text":
@@ -118,7 +124,7 @@ export function DocumentPreview({
       aria-busy="true"
     >
       <div className="ionleaf-prose">
-        <Node node={content as DocNode} traces={traces} />
+        <PreviewNode node={content as DocNode} traces={traces} />
       </div>
     </div>
   );
