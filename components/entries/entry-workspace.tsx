@@ -1,10 +1,9 @@
 "use client";
 import type { JSONContent } from "@tiptap/core";
 import { useEffect, useRef, useState, type ReactNode } from "react";
-import { useQueryClient } from "@tanstack/react-query";
 import { NotebookEditor } from "@/editor/notebook-editor";
 import { preloadTraceBlock } from "@/editor/trace-block/trace-block-view";
-import type { TraceViewDto } from "@/lib/contract/traces";
+import { extractTraceAttachmentIds } from "@/lib/document/extract-blocks";
 import { StoredResultsProvider } from "@/editor/stored-results";
 import type { StoredSolution } from "@/lib/document/stored-evaluation";
 import { ConflictPanel } from "./conflict-panel";
@@ -20,8 +19,6 @@ export interface EntryWorkspaceProps {
   editable: boolean;
   /** The stored numbers of the shown revision's solution blocks, when it is read-only. */
   storedResults?: Readonly<Record<string, StoredSolution>> | null;
-  /** Plot views of the entry's trace blocks that the server had at hand. */
-  traceViews?: readonly TraceViewDto[];
   /** The document drawn on the server, shown until the editor is ready. */
   preview?: ReactNode;
 }
@@ -36,16 +33,10 @@ export function EntryWorkspace(props: EntryWorkspaceProps) {
   // Once per mount: the page gives this component a key of entry id and revision, so a new
   // revision remounts it; a server refresh with the same revision must not restart the session.
   const initial = useRef(props);
-  // The trace views sent with the page go into the query cache the trace blocks read, before
-  // the editor makes them; the plotting code starts loading at once when there are traces.
-  const queryClient = useQueryClient();
-  useState(() => {
-    for (const view of props.traceViews ?? [])
-      queryClient.setQueryData(["trace", view.attachmentId], view);
-  });
   useEffect(() => {
     const props = initial.current;
-    if (props.traceViews?.length) void preloadTraceBlock();
+    // An entry with traces starts loading the plotting code now, before the editor exists.
+    if (extractTraceAttachmentIds(props.content).length > 0) void preloadTraceBlock();
     const draft = props.editable ? readLocalDraft(props.entryId) : null;
     if (draft && draft.baseRevision <= props.revision) {
       setStart({

@@ -5,7 +5,7 @@ import { useQueries, useQuery } from "@tanstack/react-query";
 import { lazy, Suspense, useMemo, useState } from "react";
 import { convertPotential, listReferenceElectrodes } from "@/lib/chem";
 import type { TraceBlockInput } from "@/lib/document/block-schemas";
-import type { TraceViewDto } from "@/lib/contract/traces";
+import { traceViewQueryKey, type TraceViewDto } from "@/lib/contract/traces";
 import { apiFetch } from "@/lib/ui/api-client";
 import { TECHNIQUE_LABEL } from "@/lib/traces";
 import { TextField } from "../ui/text-field";
@@ -18,9 +18,7 @@ import { ExpectedVsMeasured, type LinkedVoltammogram } from "./expected-vs-measu
 
 // uPlot comes with the first trace block only; its fetch starts as soon as this panel's code
 // runs, alongside the trace's data, instead of after the data arrived.
-const importTracePlot = () => import("./trace-plot");
-let tracePlotModule: ReturnType<typeof importTracePlot> | null = null;
-const loadTracePlot = () => (tracePlotModule ??= importTracePlot());
+const loadTracePlot = () => import("./trace-plot");
 const TracePlot = lazy(loadTracePlot);
 
 /** Above this many cycles the cycle checkboxes fold into a disclosure. */
@@ -108,7 +106,7 @@ function currentPrefix(values: number[]) {
 export function TraceBlockPanel({ editor, value, onChange, editable }: TraceBlockPanelProps) {
   void loadTracePlot();
   const query = useQuery({
-    queryKey: ["trace", value.attachmentId],
+    queryKey: traceViewQueryKey(value.attachmentId),
     queryFn: () => apiFetch<TraceViewDto>(`/api/attachments/${value.attachmentId}/trace`),
     staleTime: Infinity,
   });
@@ -126,7 +124,7 @@ export function TraceBlockPanel({ editor, value, onChange, editable }: TraceBloc
   );
   const siblingViews = useQueries({
     queries: siblings.map((t) => ({
-      queryKey: ["trace", t.attachmentId],
+      queryKey: traceViewQueryKey(t.attachmentId),
       queryFn: () => apiFetch<TraceViewDto>(`/api/attachments/${t.attachmentId}/trace`),
       staleTime: Infinity,
     })),

@@ -4,15 +4,14 @@ import { NodeViewWrapper, useEditorState, type ReactNodeViewProps } from "@tipta
 import { lazy, Suspense } from "react";
 import { useQueryClient } from "@tanstack/react-query";
 import { TracePreview } from "@/components/traces/trace-preview";
-import type { TraceViewDto } from "@/lib/contract/traces";
+import { traceViewQueryKey, type TraceViewDto } from "@/lib/contract/traces";
 import type { TraceBlockInput } from "@/lib/document/block-schemas";
 import { BlockLoading } from "../block-loading";
 
 // The panel brings the plotting library; it loads with the first trace block only (or
 // earlier, when the entry page knows it holds traces).
-const importPanel = () => import("./trace-block-panel");
-let panelModule: ReturnType<typeof importPanel> | null = null;
-export const preloadTraceBlock = () => (panelModule ??= importPanel());
+// import() of a module already asked for answers the same promise: calling it again is free.
+export const preloadTraceBlock = () => import("./trace-block-panel");
 const TraceBlockPanel = lazy(() =>
   preloadTraceBlock().then((m) => ({ default: m.TraceBlockPanel })),
 );
@@ -21,10 +20,9 @@ const TraceBlockPanel = lazy(() =>
 export function TraceBlockView({ node, editor, updateAttributes }: ReactNodeViewProps) {
   const editable = useEditorState({ editor, selector: ({ editor: e }) => e.isEditable });
   // The view sent with the page keeps the still picture on screen while the plot code loads.
-  const cached = useQueryClient().getQueryData<TraceViewDto>([
-    "trace",
-    (node.attrs as TraceBlockInput).attachmentId,
-  ]);
+  const cached = useQueryClient().getQueryData<TraceViewDto>(
+    traceViewQueryKey((node.attrs as TraceBlockInput).attachmentId),
+  );
   return (
     <NodeViewWrapper contentEditable={false}>
       <Suspense

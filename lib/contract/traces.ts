@@ -1,5 +1,8 @@
 import type { CycleAnalysis, TraceSummary } from "@/lib/traces";
 
+/** The query-cache key of an attachment's trace view: the entry page seeds it, blocks read it. */
+export const traceViewQueryKey = (attachmentId: string) => ["trace", attachmentId] as const;
+
 /** GET /api/attachments/:id/trace: an export read back for plotting. */
 export interface TraceViewDto {
   attachmentId: string;

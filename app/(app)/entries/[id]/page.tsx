@@ -1,3 +1,4 @@
+import { dehydrate, HydrationBoundary, QueryClient } from "@tanstack/react-query";
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
@@ -11,6 +12,7 @@ import { revisionHash } from "@/lib/document/prepare-revision";
 import { readyTraceViews } from "@/lib/attachments/trace-view";
 import { extractTraceAttachmentIds } from "@/lib/document/extract-blocks";
 import { isAppError } from "@/lib/errors";
+import { traceViewQueryKey, type TraceViewDto } from "@/lib/contract/traces";
 import { NewerStockNotice } from "@/components/lineage/newer-stock-notice";
 import { newerStocksOf } from "@/lib/notebook/lineage/stocks";
 import { listPossibleReviewers } from "@/lib/notebook/review";
@@ -24,6 +26,13 @@ import {
 import { EntryActions } from "./entry-actions";
 
 export const metadata: Metadata = { title: "Entry" };
+
+/** A query cache holding the entry's trace views, to be sent with the page. */
+function traceViewCache(views: readonly TraceViewDto[]): QueryClient {
+  const cache = new QueryClient();
+  for (const view of views) cache.setQueryData(traceViewQueryKey(view.attachmentId), view);
+  return cache;
+}
 
 async function load(id: string) {
   const actor = await requireActor();
@@ -86,17 +95,19 @@ export default async function EntryPage({ params }: { params: Promise<{ id: stri
           }
           update={updateStockAction}
         />
-        <EntryWorkspace
-          key={`${entry.id}:${current.number}`}
-          entryId={entry.id}
-          title={current.title}
-          content={current.content}
-          revision={current.number}
-          editable={editable}
-          storedResults={storedResults}
-          traceViews={traceViews}
-          preview={<DocumentPreview content={current.content} traceViews={traceViews} />}
-        />
+        {/* The trace views go into the query cache the trace blocks read (no request of their own). */}
+        <HydrationBoundary state={dehydrate(traceViewCache(traceViews))}>
+          <EntryWorkspace
+            key={`${entry.id}:${current.number}`}
+            entryId={entry.id}
+            title={current.title}
+            content={current.content}
+            revision={current.number}
+            editable={editable}
+            storedResults={storedResults}
+            preview={<DocumentPreview content={current.content} traceViews={traceViews} />}
+          />
+        </HydrationBoundary>
       </div>
       <aside className="space-y-5 text-sm" aria-label="About this entry">
         <div className="space-y-3 card p-4">
