@@ -1,7 +1,7 @@
 import "server-only";
 import { cache } from "react";
 import { findUserById } from "@/db/queries/users";
-import { auth } from "@/lib/auth";
+import { sessionClaims } from "@/lib/auth/session-claims";
 import { AppError } from "@/lib/errors";
 import { getDb } from "@/lib/server/database";
 import type { Actor } from "@/lib/rules/authorize";
@@ -30,9 +30,8 @@ export async function actorForUserId(
 
 /** Once per request: the session's member, or null. */
 export const getActor = cache(async (): Promise<Actor | null> => {
-  const session = await auth();
-  const user = session?.user;
-  return user?.id ? actorForUserId(user.id, user.sessionVersion ?? 0) : null;
+  const claims = await sessionClaims();
+  return claims ? actorForUserId(claims.userId, claims.sessionVersion) : null;
 });
 
 export async function requireActor(): Promise<Actor> {

@@ -15,7 +15,7 @@ class ThrottledSignIn extends CredentialsSignin {
   code = "throttled";
 }
 
-export const { handlers, auth, signIn, signOut } = NextAuth({
+export const { handlers, signIn, signOut } = NextAuth({
   ...authConfig,
   logger: {
     // A wrong password is an expected event, not a server error worth a stack trace.

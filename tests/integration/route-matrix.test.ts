@@ -27,10 +27,17 @@ const session = vi.hoisted(() => ({
   current: null as null | { user: { id: string; sessionVersion: number } },
 }));
 vi.mock("@/lib/auth", () => ({
-  auth: () => Promise.resolve(session.current),
   signIn: () => Promise.resolve(undefined),
   signOut: () => Promise.resolve(undefined),
   handlers: {},
+}));
+vi.mock("@/lib/auth/session-claims", () => ({
+  sessionClaims: () =>
+    Promise.resolve(
+      session.current
+        ? { userId: session.current.user.id, sessionVersion: session.current.user.sessionVersion }
+        : null,
+    ),
 }));
 // Outside Next.js there is no cache to revalidate; the actions' calls become no-ops.
 vi.mock("next/cache", () => ({ revalidatePath: () => undefined, revalidateTag: () => undefined }));
