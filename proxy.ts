@@ -1,10 +1,5 @@
 import NextAuth from "next-auth";
-import {
-  NextResponse,
-  type NextFetchEvent,
-  type NextMiddleware,
-  type NextRequest,
-} from "next/server";
+import { NextResponse, type NextMiddleware, type NextRequest } from "next/server";
 import { authConfig, isPublicPath } from "@/lib/auth/config";
 import { contentSecurityPolicy, securityHeaders } from "@/lib/http/security-headers";
 
@@ -35,15 +30,7 @@ const pages = auth((request) => {
   return secured(response, request, csp);
 }) as unknown as NextMiddleware;
 
-/**
- * API routes check the session themselves (and answer 401 JSON), so the proxy does no
- * Auth.js work for them — decoding the token here as well decided nothing and cost about a
- * quarter of a signed-in API call's CPU (bench/finder-profile.ts). They still get the headers.
- */
-export default function proxy(request: NextRequest, event: NextFetchEvent) {
-  if (!request.nextUrl.pathname.startsWith("/api/")) return pages(request, event);
-  return secured(NextResponse.next(), request, contentSecurityPolicy(createNonce(), false));
-}
+export default pages;
 
 /** The policy and the security headers on an answer. */
 function secured(response: NextResponse, request: NextRequest, csp: string): NextResponse {
@@ -63,12 +50,14 @@ function isHttps(request: NextRequest): boolean {
   );
 }
 
-// Uploads bypass the proxy: Next.js buffers a request body that passes through it and cuts it
-// at 10 MB, so a 200 MB potentiostat export would arrive truncated (found by the upload
-// bench). The upload route checks the session and origin itself and streams the body to disk;
-// its answers still get the static headers of next.config.mjs.
+// API routes bypass the proxy. They check the session themselves beside the data (and
+// answer 401 JSON, not a redirect), so running the proxy for them decided nothing and cost a
+// third of a signed-in call's time (bench/finder.ts: 482 → 762 requests per second on the
+// no-op route). Uploads must bypass it anyway: Next.js buffers a request body that passes
+// through the proxy and cuts it at 10 MB. API answers get the static headers of
+// next.config.mjs.
 export const config = {
   matcher: [
-    "/((?!_next/static|_next/image|favicon.ico|api/entries/[^/]+/attachments$|.*\\.(?:png|svg|jpg|ico|webmanifest|woff2?)$).*)",
+    "/((?!_next/static|_next/image|favicon.ico|api/|.*\\.(?:png|svg|jpg|ico|webmanifest|woff2?)$).*)",
   ],
 };

@@ -28,9 +28,10 @@ describe("security headers and CSP", () => {
     for (const tag of scripts) expect(tag).toContain(`nonce="${nonce}"`);
     expect(first.headers.get("x-content-type-options")).toBe("nosniff");
     expect(first.headers.get("x-frame-options")).toBe("DENY");
-    // API answers carry them too.
+    // API answers (outside the proxy) carry them from next.config.mjs.
     const api = await fetch(`${BASE_URL}/api/health`);
-    expect(api.headers.get("content-security-policy")).toContain("default-src 'self'");
+    expect(api.headers.get("content-security-policy")).toContain("default-src 'none'");
+    expect(api.headers.get("x-frame-options")).toBe("DENY");
   });
 
   it("runs sign-in, the lists and an entry with live blocks without a violation", async () => {

@@ -1,3 +1,4 @@
+import type { NextConfig } from "next";
 import { describe, expect, it } from "vitest";
 import { contentSecurityPolicy, securityHeaders } from "@/lib/http/security-headers";
 
@@ -40,5 +41,30 @@ describe("securityHeaders", () => {
     expect(plain["x-frame-options"]).toBe("DENY");
     expect(plain).not.toHaveProperty("strict-transport-security");
     expect(securityHeaders(true)["strict-transport-security"]).toMatch(/max-age=\d+/);
+  });
+});
+
+describe("the API's static headers (next.config.mjs)", () => {
+  it("match the pages' security headers, with a policy that lets nothing run or frame", async () => {
+    // @ts-expect-error -- next.config.mjs is plain JavaScript without type declarations.
+    const imported = (await import("../../../next.config.mjs")) as { default: NextConfig };
+    const config = imported.default;
+    const rules = await config.headers!();
+    const forApi = (https: boolean) =>
+      Object.fromEntries(
+        rules
+          .filter((rule) => rule.source === "/:path*" || rule.source === "/api/:path*")
+          .filter((rule) => https || !rule.has)
+          .flatMap((rule) => rule.headers)
+          .map(({ key, value }) => [key.toLowerCase(), value]),
+      );
+    for (const https of [false, true]) {
+      const { "content-security-policy": policy, ...rest } = forApi(https);
+      expect(rest).toEqual(securityHeaders(https));
+      const api = directives(policy);
+      expect(api.get("default-src")).toEqual(["'none'"]);
+      expect(api.get("frame-ancestors")).toEqual(["'none'"]);
+      expect(api.has("script-src")).toBe(false);
+    }
   });
 });
