@@ -1,6 +1,7 @@
 // @vitest-environment node
 import { randomUUID } from "node:crypto";
 import { sql, type SQL } from "drizzle-orm";
+import { PgDialect } from "drizzle-orm/pg-core";
 import { Client } from "pg";
 import { beforeAll, describe, expect, it } from "vitest";
 import { solutionPageSql, type FinderFilter, type FinderSort } from "@/db/queries/solution-finder";
@@ -134,6 +135,36 @@ describe("the finder's plans at 24 000 current solutions", () => {
     const plan = await planOf(solutionPageSql(filter("RbCl"), newest, firstPage, 1_000));
     expect(plan.indexes).toEqual(["block_species_molal_idx", "entries_archived_idx"]);
     expect(plan.nodes).toContain("Index Only Scan");
+  });
+
+  it("keeps the same plan for a species as a generic plan (the finder prepares that statement)", async () => {
+    // PostgreSQL may keep one generic plan for a prepared statement (db/prepared.ts); the
+    // finder prepares only the one-species statement, whose plan must not depend on which
+    // species it is given: the generic plan must read the species index as the plans above do.
+    const statement = new PgDialect().sqlToQuery(
+      solutionPageSql(filter("NaCl"), newest, firstPage, 1_000),
+    );
+    const client = new Client({ connectionString: process.env.DATABASE_URL });
+    await client.connect();
+    try {
+      await client.query("set plan_cache_mode = force_generic_plan");
+      await client.query(`prepare finder_page as ${statement.sql}`);
+      // The values as literals (EXPLAIN EXECUTE takes expressions, not bound parameters).
+      const literals = statement.params.map((p) =>
+        typeof p === "number" ? String(p) : `'${String(p).replace(/'/g, "''")}'`,
+      );
+      const result = await client.query<{ "QUERY PLAN": [{ Plan: PlanNode }] }>(
+        `explain (format json) execute finder_page(${literals.join(", ")})`,
+      );
+      const root = matchesOf(result.rows[0]["QUERY PLAN"][0].Plan);
+      expect(root["Subplan Name"]).toBe("CTE m");
+      expect([...indexesOf(root)].sort()).toEqual([
+        "block_species_molal_idx",
+        "entries_archived_idx",
+      ]);
+    } finally {
+      await client.end();
+    }
   });
 
   it("uses the molar species index on the molar scale", async () => {
