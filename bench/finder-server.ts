@@ -26,8 +26,8 @@ function appEnv(databaseUrl: string, port: number): NodeJS.ProcessEnv {
     DATABASE_URL: databaseUrl,
     AUTH_SECRET: BENCH_AUTH_SECRET,
     AUTH_TRUST_HOST: "true",
-    APP_URL: `http://localhost:${port}`,
-    AUTH_URL: `http://localhost:${port}`,
+    APP_URL: `http://127.0.0.1:${port}`,
+    AUTH_URL: `http://127.0.0.1:${port}`,
     UPLOAD_DIR: path.join(ROOT, ".data/bench/uploads"),
   };
 }
@@ -77,7 +77,8 @@ export async function startApp(
     [...nodeArgs, path.join(ROOT, "node_modules/next/dist/bin/next"), "start", "-p", String(port)],
     { cwd: ROOT, env: appEnv(databaseUrl, port), stdio: ["ignore", "ignore", "inherit"] },
   );
-  const url = `http://localhost:${port}`;
+  // The address, not "localhost": a client resolving that name on every request measured it.
+  const url = `http://127.0.0.1:${port}`;
   await waitFor(`${url}/api/health`, 90);
   return { url, pid: child.pid!, stop: stopper(child) };
 }
@@ -101,7 +102,7 @@ export async function startBareServer(
 export async function signIn(url: string, email: string, password: string): Promise<string> {
   const csrf = await fetch(`${url}/api/auth/csrf`);
   const { csrfToken } = (await csrf.json()) as { csrfToken: string };
-  // The proxy and the route both set a CSRF cookie; the browser keeps the last one.
+  // Keep the last CSRF cookie of each name, as a browser would.
   const jar = new Map(
     csrf.headers.getSetCookie().map((c) => {
       const pair = c.split(";")[0];
