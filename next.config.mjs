@@ -1,21 +1,9 @@
-// API answers skip proxy.ts (it does no work for them that their own session check does not
-// do again, and running it cost a third of a signed-in call), so their security headers are
-// static and live here. They are JSON, CSV and stored files, never pages: the policy lets
-// nothing run and nothing frame them. tests/unit/http/security-headers.test.ts keeps these
-// values equal to lib/http/security-headers.ts, which the pages get from proxy.ts.
-const apiSecurityHeaders = [
-  {
-    key: "Content-Security-Policy",
-    value:
-      "default-src 'none'; img-src 'self'; style-src 'unsafe-inline'; frame-ancestors 'none'; base-uri 'none'; form-action 'none'",
-  },
-  {
-    key: "Permissions-Policy",
-    value: "camera=(), microphone=(), geolocation=(), payment=(), usb=(), interest-cohort=()",
-  },
-  { key: "X-Frame-Options", value: "DENY" },
-  { key: "Cross-Origin-Opener-Policy", value: "same-origin" },
-];
+// The header values the pages get from proxy.ts (lib/http/security-headers.ts) are in
+// lib/http/security-headers.json; this file is plain JavaScript and imports them from there.
+import security from "./lib/http/security-headers.json" with { type: "json" };
+
+const asHeaders = (/** @type {Record<string, string>} */ values) =>
+  Object.entries(values).map(([key, value]) => ({ key, value }));
 
 /** @type {import('next').NextConfig} */
 const nextConfig = {
@@ -27,23 +15,24 @@ const nextConfig = {
   distDir: process.env.NEXT_DIST_DIR || ".next",
   // Type-checking is its own step of `npm test` (tsc --noEmit); the build does not repeat it.
   typescript: { ignoreBuildErrors: true },
-  // Static assets skip proxy.ts; they still say what they are and never get sniffed.
+  // Static assets skip proxy.ts; they still say what they are and never get sniffed. API
+  // answers skip it too (they check the session themselves, and running the proxy for them
+  // cost a third of a signed-in call): they are JSON, CSV and stored files, never pages, so
+  // their policy lets nothing run and nothing frame them.
   async headers() {
     return [
+      { source: "/:path*", headers: asHeaders(security.everyAnswer) },
       {
-        source: "/:path*",
+        source: "/api/:path*",
         headers: [
-          { key: "X-Content-Type-Options", value: "nosniff" },
-          { key: "Referrer-Policy", value: "strict-origin-when-cross-origin" },
+          { key: "content-security-policy", value: security.apiContentSecurityPolicy },
+          ...asHeaders(security.everyDocument),
         ],
       },
-      { source: "/api/:path*", headers: apiSecurityHeaders },
       {
         source: "/api/:path*",
         has: [{ type: "header", key: "x-forwarded-proto", value: "https" }],
-        headers: [
-          { key: "Strict-Transport-Security", value: "max-age=31536000; includeSubDomains" },
-        ],
+        headers: asHeaders(security.overHttps),
       },
     ];
   },

@@ -1,7 +1,8 @@
+import staticHeaders from "./security-headers.json";
+
 /**
- * The security headers of every page and API answer, and the Content-Security-Policy: scripts
- * only from the app itself with this response's nonce (Next.js puts it on its own inline
- * scripts), no eval in production, no framing, no plugins. KaTeX and React set inline
+ * The Content-Security-Policy of every page (proxy.ts): scripts only from the app itself with
+ * this response's nonce (Next.js puts it on its own inline scripts), no eval in production, no framing, no plugins. KaTeX and React set inline
  * styles, so styles allow 'unsafe-inline' (styles cannot run code).
  */
 export function contentSecurityPolicy(nonce: string, development: boolean): string {
@@ -20,14 +21,15 @@ export function contentSecurityPolicy(nonce: string, development: boolean): stri
   ].join("; ");
 }
 
+/**
+ * The security headers of a page or API answer. The values live in security-headers.json,
+ * which next.config.mjs (plain JavaScript, outside the proxy) reads for the API's and the
+ * static files' answers.
+ */
 export function securityHeaders(https: boolean): Record<string, string> {
   return {
-    "x-content-type-options": "nosniff",
-    "referrer-policy": "strict-origin-when-cross-origin",
-    "permissions-policy":
-      "camera=(), microphone=(), geolocation=(), payment=(), usb=(), interest-cohort=()",
-    "x-frame-options": "DENY",
-    "cross-origin-opener-policy": "same-origin",
-    ...(https ? { "strict-transport-security": "max-age=31536000; includeSubDomains" } : {}),
+    ...staticHeaders.everyAnswer,
+    ...staticHeaders.everyDocument,
+    ...(https ? staticHeaders.overHttps : {}),
   };
 }
