@@ -4,12 +4,12 @@ import { authConfig, isPublicPath } from "@/lib/auth/config";
 import { contentSecurityPolicy, securityHeaders } from "@/lib/http/security-headers";
 
 // Optimistic redirects only (no database here): pages without a session go to sign-in. The
-// real checks happen on the server beside the data (lib/access). Every answer gets the
+// real checks happen on the server beside the data (lib/access). Every page gets the
 // security headers and a Content-Security-Policy with a fresh nonce.
 const { auth } = NextAuth(authConfig);
 
 // auth() returns an overloaded wrapper typed for route handlers too; as a proxy it is this.
-const pages = auth((request) => {
+export default auth((request) => {
   const nonce = createNonce();
   const csp = contentSecurityPolicy(nonce, process.env.NODE_ENV === "development");
   const path = request.nextUrl.pathname;
@@ -29,8 +29,6 @@ const pages = auth((request) => {
   }
   return secured(response, request, csp);
 }) as unknown as NextMiddleware;
-
-export default pages;
 
 /** The policy and the security headers on an answer. */
 function secured(response: NextResponse, request: NextRequest, csp: string): NextResponse {

@@ -272,12 +272,9 @@ const DETAIL_COLUMNS = sql`
 
 const DETAIL_FROM = sql`block_results b join entries e on e.id = b.entry_id`;
 
-/**
- * A row as db.execute (created_at as text), executePrepared (as a Date) or json_agg (as ISO
- * 8601 text) returns it.
- */
+/** A row as db.execute or the page's json_agg returns it (created_at as text either way). */
 function rowOf(r: Record<string, unknown>): FinderRow {
-  return { ...(r as unknown as FinderRow), createdAt: new Date(r.createdAt as string | Date) };
+  return { ...(r as unknown as FinderRow), createdAt: new Date(r.createdAt as string) };
 }
 
 export interface FinderPage {
