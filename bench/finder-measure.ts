@@ -119,4 +119,24 @@ export async function requestsPerSecond(
   return result.requests.total / seconds;
 }
 
+/**
+ * Brings a freshly started server and the bench's own SQL path to steady state before
+ * anything is timed: each URL under autocannon for `seconds` (4 clients), then each SQL
+ * function `statements` times. Returns how many requests and SQL runs that took.
+ */
+export async function warmUp(
+  urls: string[],
+  cookie: string,
+  sqlRuns: (() => Promise<unknown>)[],
+  seconds = 3,
+  statements = 300,
+): Promise<{ requests: number; statements: number }> {
+  let requests = 0;
+  for (const url of urls) {
+    requests += Math.round((await requestsPerSecond(url, cookie, 4, seconds)) * seconds);
+  }
+  for (const run of sqlRuns) for (let i = 0; i < statements; i++) await run();
+  return { requests, statements: sqlRuns.length * statements };
+}
+
 export const ms = (x: number) => `${x.toFixed(1)} ms`;
