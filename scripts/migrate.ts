@@ -1,11 +1,13 @@
 /**
- * Applies the committed drizzle-kit migrations (drizzle/) and the application role's privileges.
- * Run by `npm start` and `npm test` before anything touches the database.
+ * Applies the committed drizzle-kit migrations (drizzle/), the data backfills that SQL cannot
+ * compute, and the application role's privileges. Run by `npm start` and `npm test` before
+ * anything touches the database.
  */
 import { drizzle } from "drizzle-orm/node-postgres";
 import { migrate } from "drizzle-orm/node-postgres/migrator";
 import { Pool } from "pg";
 import { grantAppRolePrivileges } from "@/db/app-role-privileges";
+import { backfillCompositionSummaries } from "./support/backfill-composition-summaries";
 
 export const MIGRATIONS_FOLDER = new URL("../drizzle", import.meta.url).pathname;
 
@@ -16,6 +18,8 @@ export async function runMigrations(
   const pool = new Pool({ connectionString: databaseUrl, max: 1 });
   try {
     await migrate(drizzle(pool), { migrationsFolder });
+    const filled = await backfillCompositionSummaries(pool);
+    if (filled > 0) console.log(`[ionleaf] composition summaries filled for ${filled} solutions`);
   } finally {
     await pool.end();
   }

@@ -17,6 +17,7 @@ import { createHash } from "node:crypto";
 import argon2 from "argon2";
 import { Client } from "pg";
 import { resolveSpecies } from "@/lib/chem";
+import { compositionSummary } from "@/lib/document/composition-summary";
 import { runMigrations } from "./migrate";
 import { ensureScratchDatabase, type ScratchDatabase } from "./support/scratch-database";
 
@@ -85,6 +86,7 @@ interface Recipe {
   debyeNm: number;
   species: string[];
   composition: Record<string, number>;
+  summary: string;
   inputs: Record<string, unknown>;
 }
 
@@ -138,6 +140,7 @@ function makeRecipe(i: number, random: () => number): Recipe {
     debyeNm: 0.304 / Math.sqrt(ionic),
     species: [...new Set([...components.map((c) => c.formula), ...Object.keys(composition)])],
     composition,
+    summary: compositionSummary(components),
     inputs,
   };
 }
@@ -193,14 +196,15 @@ async function insertRecipes(client: Client, labId: string, count: number, rando
       `with ins as (
          insert into solution_results (lab_id, inputs_hash, engine_version, name, temperature_c,
            solvent, model_requested, model_used, ionic_strength_molal, ionic_strength_molar,
-           debye_length_nm, species, composition, results, inputs)
+           debye_length_nm, species, composition, results, inputs, composition_summary)
          select $1, h, 'synthetic', nm, t, 'water', 'auto', mu, im, ic, dl,
                 array(select jsonb_array_elements_text(sp)), co,
                 jsonb_build_object('status', 'ok', 'synthetic', true, 'ionicStrength',
-                  jsonb_build_object('molal', im, 'molar', ic), 'debyeLengthNm', dl), inp
+                  jsonb_build_object('molal', im, 'molar', ic), 'debyeLengthNm', dl), inp, cs
            from unnest($2::text[], $3::text[], $4::float8[], $5::text[], $6::float8[],
-                       $7::float8[], $8::float8[], $9::jsonb[], $10::jsonb[], $11::jsonb[], $12::int[])
-             as u(h, nm, t, mu, im, ic, dl, sp, co, inp, n)
+                       $7::float8[], $8::float8[], $9::jsonb[], $10::jsonb[], $11::jsonb[], $12::int[],
+                       $13::text[])
+             as u(h, nm, t, mu, im, ic, dl, sp, co, inp, n, cs)
          returning id, inputs_hash)
        insert into seed_recipes (n, id)
        select u.n, ins.id from ins join unnest($2::text[], $12::int[]) as u(h, n) on u.h = ins.inputs_hash`,
@@ -217,6 +221,7 @@ async function insertRecipes(client: Client, labId: string, count: number, rando
         recipes.map((r) => JSON.stringify(r.composition)),
         recipes.map((r) => JSON.stringify(r.inputs)),
         recipes.map((_, k) => start + k + 1),
+        recipes.map((r) => r.summary),
       ],
     );
   }

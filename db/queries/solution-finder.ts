@@ -245,8 +245,8 @@ export interface FinderRow {
   solvent: string;
   modelUsed: string | null;
   species: string[];
-  /** The block's components as typed: formula, amount, unit. */
-  components: unknown;
+  /** The recipe in one line, formulas typeset (solution_results.composition_summary). */
+  composition: string;
   createdAt: Date;
   entryTitle: string;
   entryStatus: string;
@@ -265,7 +265,7 @@ const DETAIL_COLUMNS = sql`
   b.to_revision as "toRevision", b.name, b.ionic_strength_molal as "ionicStrengthMolal",
   b.ionic_strength_molar as "ionicStrengthMolar", b.debye_length_nm as "debyeLengthNm",
   b.temperature_c as "temperatureC", b.solvent, b.model_used as "modelUsed", b.species,
-  (select r.inputs -> 'components' from solution_results r where r.id = b.result_id) as components,
+  (select coalesce(r.composition_summary, '') from solution_results r where r.id = b.result_id) as composition,
   b.created_at as "createdAt", e.title as "entryTitle", e.status as "entryStatus",
   (select u.name from users u where u.id = e.author_id) as "authorName",
   (select p.name from projects p where p.id = e.project_id) as "projectName"`;

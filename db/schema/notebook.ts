@@ -167,10 +167,22 @@ export const solutionResults = pgTable(
     /** The engine's full result, or its error when the inputs were impossible. */
     results: jsonb("results").$type<Record<string, unknown>>().notNull(),
     inputs: jsonb("inputs").$type<Record<string, unknown>>().notNull(),
+    /**
+     * The recipe in one line with formulas typeset ("0.1 mol/kg KCl + 5 mmol/L K₃Fe(CN)₆"),
+     * including what stocks contribute, written with the row so that the finder shows it
+     * without reading the inputs. Null only for rows saved before it existed, until
+     * scripts/support/backfill-composition-summaries.ts (run after the migrations) fills them.
+     */
+    compositionSummary: text("composition_summary"),
     createdAt: createdAt(),
   },
   (t) => [
     unique("solution_results_lab_inputs_unique").on(t.labId, t.inputsHash),
+    // The rows the backfill still has to fill: empty once it has run, so finding that there
+    // is nothing to do costs nothing at start-up however large the table.
+    index("solution_results_summary_pending_idx")
+      .on(t.id)
+      .where(sql`${t.compositionSummary} is null`),
     check("solution_results_hash_format", sql`${t.inputsHash} ~ '^[0-9a-f]{64}$'`),
     check(
       "solution_results_ionic_strength_nonnegative",

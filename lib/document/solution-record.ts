@@ -1,4 +1,5 @@
 import { ENGINE_VERSION } from "@/lib/chem";
+import { compositionSummary } from "./composition-summary";
 import type { SolutionBlockInput } from "./block-schemas";
 import { canonicalHash } from "./canonical-hash";
 import type { StockLookups } from "./dilution";
@@ -22,6 +23,8 @@ export interface SolutionRecord {
   debyeLengthNm: number | null;
   species: string[];
   composition: Record<string, number>;
+  /** The recipe in one line, formulas typeset, stocks' contributions included (the finder's). */
+  compositionSummary: string;
   results: Record<string, unknown>;
   inputs: Record<string, unknown>;
 }
@@ -85,6 +88,10 @@ export function solutionRecordFor(
     debyeLengthNm: finiteOrNull(ok?.debyeLengthNm),
     species: [...species],
     composition,
+    compositionSummary: compositionSummary([
+      ...block.components,
+      ...(evaluation.status === "ok" ? (evaluation.dilution?.components ?? []) : []),
+    ]),
     results: ok
       ? {
           status: "ok",

@@ -1,4 +1,4 @@
-import { formulaAsText } from "./formula-text";
+import { formulaAsText } from "@/lib/document/formula-text";
 
 /**
  * How far one solution is from another, for "similar solutions". Pure, documented in

@@ -10,7 +10,7 @@ import {
 } from "@/db/queries/solution-finder";
 import { prefixTsquery } from "@/db/queries/solution-finder-text";
 import { toFound, type FoundSolution } from "@/lib/finder/found-solution";
-import { formulaAsText } from "@/lib/finder/formula-text";
+import { formulaAsText } from "@/lib/document/formula-text";
 import { resolveSpeciesTerms } from "@/lib/finder/resolve-species";
 import { AppError } from "@/lib/errors";
 import { assertCan, type Actor } from "@/lib/rules/authorize";

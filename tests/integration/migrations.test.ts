@@ -191,3 +191,85 @@ describe("migration 0003 carries solutions saved before it into the new tables",
     ]);
   });
 });
+
+describe("migration 0011 gives every stored solution its one-line recipe", () => {
+  const superuser = process.env.TEST_SUPERUSER_URL!;
+  const olderDb = `ionleaf_summary_${process.pid}`;
+  const olderUrl = superuser.replace(/\/[^/]+$/, `/${olderDb}`);
+  const partial = mkdtempSync(join(tmpdir(), "ionleaf-migrations-"));
+
+  afterAll(async () => {
+    await withClient(superuser, (c) => c.query(`drop database if exists ${olderDb}`));
+    rmSync(partial, { recursive: true, force: true });
+  });
+
+  it("fills the summaries of rows saved before it, stocks included, and keeps them immutable", async () => {
+    const journal = JSON.parse(
+      readFileSync(join(MIGRATIONS_FOLDER, "meta/_journal.json"), "utf8"),
+    ) as { entries: { tag: string }[] };
+    const upTo = journal.entries.findIndex((e) => e.tag === "0011_composition_summary");
+    expect(upTo).toBeGreaterThan(0);
+    const before = journal.entries.slice(0, upTo);
+    mkdirSync(join(partial, "meta"));
+    writeFileSync(
+      join(partial, "meta/_journal.json"),
+      JSON.stringify({ ...journal, entries: before }),
+    );
+    for (const e of before)
+      cpSync(join(MIGRATIONS_FOLDER, `${e.tag}.sql`), join(partial, `${e.tag}.sql`));
+
+    await withClient(superuser, (c) => c.query(`create database ${olderDb}`));
+    await runMigrations(olderUrl, partial);
+    const rows: [string, unknown, unknown][] = [
+      // Typed rows, a weighed amount with its basis, and a row still being typed.
+      [
+        "a".repeat(64),
+        [
+          { formula: "KCl", amount: 0.1, unit: "mol/kg" },
+          { formula: "K3Fe(CN)6", amount: 0.005, unit: "mmol/L" },
+          { formula: "NaCl", amount: 2.92, unit: "g", perAmount: 100, perUnit: "mL" },
+          { formula: "", amount: null, unit: "mol/kg" },
+        ],
+        { status: "ok" },
+      ],
+      // Made from a stock: its share comes from the stored dilution arithmetic.
+      [
+        "b".repeat(64),
+        [],
+        {
+          status: "ok",
+          dilution: { components: [{ formula: "CuSO4", amount: 0.01, unit: "mol/L" }] },
+        },
+      ],
+    ];
+    await withClient(olderUrl, async (c) => {
+      const lab = (
+        await c.query<{ id: string }>(
+          "insert into labs (name, slug) values ('L', 'l') returning id",
+        )
+      ).rows[0].id;
+      for (const [hash, components, results] of rows)
+        await c.query(
+          `insert into solution_results (lab_id, inputs_hash, engine_version, name, temperature_c, solvent, model_requested, results, inputs)
+           values ($1, $2, 'test', 'S', 25, 'water', 'auto', $3, $4)`,
+          [lab, hash, JSON.stringify(results), JSON.stringify({ components })],
+        );
+    });
+
+    await runMigrations(olderUrl);
+    await runMigrations(olderUrl); // nothing left to fill: a quiet second start
+    await withClient(olderUrl, async (c) => {
+      const summaries = await c.query<{ inputs_hash: string; composition_summary: string }>(
+        "select inputs_hash, composition_summary from solution_results order by inputs_hash",
+      );
+      expect(summaries.rows.map((r) => r.composition_summary)).toEqual([
+        "0.1 mol/kg KCl + 0.005 mmol/L K₃Fe(CN)₆ + 2.92 g per 100 mL NaCl",
+        "0.01 mol/L CuSO₄",
+      ]);
+      // The stored results are as immutable as before the backfill.
+      await expect(
+        c.query("update solution_results set composition_summary = 'changed'"),
+      ).rejects.toThrow(/immutable|refuse|cannot/i);
+    });
+  });
+});

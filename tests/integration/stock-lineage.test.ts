@@ -20,6 +20,7 @@ import { countersignEntry, startAmendment, submitEntry } from "@/lib/notebook/re
 import { getRevisionComparison } from "@/lib/notebook/review-view";
 import { getCurrentContent } from "@/lib/notebook/revisions";
 import { saveEntryContent } from "@/lib/notebook/save-entry";
+import { searchSolutions } from "@/lib/notebook/solution-finder";
 import { getDb } from "@/lib/server/database";
 import { createLabWithMembers, ownerDb, TEST_PASSWORD } from "../support/db";
 
@@ -148,6 +149,14 @@ describe("stocks and lineage", () => {
     expect(finalRow.block.ionicStrengthMolar).toBeCloseTo(0.01, 12);
     // Molality uses the density lib/chem models for KCl (Laliberté & Cooper 2004), and says so.
     expect((finalRow.result.results.density as { source: string }).source).toBe("laliberte-cooper");
+    // The finder shows what a solution made from stocks contains, not an empty recipe.
+    const found = await searchSolutions(author, { species: "KCl", sort: "name", dir: "asc" });
+    expect(
+      found.solutions.filter((s) => s.entryId === workEntry).map((s) => [s.blockId, s.composition]),
+    ).toEqual([
+      ["mid-kcl", "0.1 mol/L KCl"],
+      ["final-kcl", "0.01 mol/L KCl"],
+    ]);
 
     // The editor's reading of the stock (the same route the block fetches) evaluates to the
     // very numbers the server stored.

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { requireActor } from "@/lib/access/actor";
-import { formulaAsText } from "@/lib/finder/formula-text";
+import { formulaAsText } from "@/lib/document/formula-text";
 import { listLabStocks } from "@/lib/notebook/lineage/stocks";
 
 export const metadata: Metadata = { title: "Stocks" };

@@ -231,6 +231,19 @@ describe("a solution block made from a stock", () => {
     expect(solutionInputsHash(later)).not.toBe(solutionInputsHash(child()));
   });
 
+  it("writes the one-line recipe with what the stocks contribute, for the finder", () => {
+    // Its own weighed KCl as typed, then 10 mL of 0.1 mol/L KCl to 100 mL: 0.01 mol/L.
+    expect(solutionRecordFor(child(), lookups(stockA)).compositionSummary).toBe(
+      "0.75 g per 100 mL KCl + 0.01 mol/L KCl",
+    );
+    // Made from the stock alone, the recipe is the stock's share, not empty.
+    expect(solutionRecordFor(child({ components: [] }), lookups(stockA)).compositionSummary).toBe(
+      "0.01 mol/L KCl",
+    );
+    // Until the stock's composition is known, only the typed rows.
+    expect(solutionRecordFor(child()).compositionSummary).toBe("0.75 g per 100 mL KCl");
+  });
+
   it("keys a block without stocks as before lineage existed", () => {
     const plain = defaultSolutionBlockInput({
       blockId: "b1",

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { compositionDistance, describeDifference } from "@/lib/finder/composition-distance";
-import { compositionSummary } from "@/lib/finder/composition-summary";
-import { formulaAsText } from "@/lib/finder/formula-text";
+import { compositionSummary } from "@/lib/document/composition-summary";
+import { formulaAsText } from "@/lib/document/formula-text";
 
 // I = ½ Σ m z² (definition): 0.1 mol/kg NaCl → 0.1; 0.1 mol/kg Na2SO4 → 0.3.
 const nacl = (m: number, t = 25) => ({

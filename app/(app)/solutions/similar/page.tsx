@@ -3,7 +3,7 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { requireActor } from "@/lib/access/actor";
 import { isAppError } from "@/lib/errors";
-import { formulaAsText } from "@/lib/finder/formula-text";
+import { formulaAsText } from "@/lib/document/formula-text";
 import { findSimilarSolutions } from "@/lib/notebook/similar-solutions";
 import { formatSignificant } from "@/lib/ui/format-number";
 

@@ -1,0 +1,2 @@
+ALTER TABLE "solution_results" ADD COLUMN "composition_summary" text;--> statement-breakpoint
+CREATE INDEX "solution_results_summary_pending_idx" ON "solution_results" USING btree ("id") WHERE "solution_results"."composition_summary" is null;
