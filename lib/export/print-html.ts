@@ -5,6 +5,7 @@ import type { SolutionBlockInput, CellBlockInput } from "@/lib/document/block-sc
 import { computeCellPotential } from "@/lib/document/evaluate-cell-block";
 import { evaluateCellElectrochemistry } from "@/lib/document/evaluate-cell-electrochem";
 import { evaluationFromStored, type StoredSolution } from "@/lib/document/stored-evaluation";
+import { splitCharge } from "@/lib/document/formula-text";
 import { formatPotentialV, formatSignificant } from "@/lib/ui/format-number";
 import type { EntryArchive } from "./archive";
 
@@ -20,17 +21,8 @@ const escape = (s: unknown): string => {
 };
 /** "SO4^2-" → SO<sub>4</sub><sup>2−</sup>, as the block writes formulas (lib/ui/chem-formula). */
 function formulaHtml(formula: string): string {
-  const caret = /\^(\d*)([+-])$/.exec(formula);
-  const bare = caret ? null : /[A-Za-z0-9)\]]([+-])$/.exec(formula);
-  let body = formula;
-  let charge = "";
-  if (caret) {
-    body = formula.slice(0, caret.index);
-    charge = `${caret[1] === "1" ? "" : caret[1]}${caret[2] === "-" ? "−" : "+"}`;
-  } else if (bare) {
-    body = formula.slice(0, -1);
-    charge = bare[1] === "-" ? "−" : "+";
-  }
+  const { body, count, sign } = splitCharge(formula);
+  const charge = sign ? `${count}${sign === "-" ? "−" : "+"}` : "";
   const typeset = escape(body).replace(/([A-Za-z)\]])(\d+)/g, "$1<sub>$2</sub>");
   return charge ? `${typeset}<sup>${charge}</sup>` : typeset;
 }

@@ -1,4 +1,5 @@
 import { Fragment, type ReactNode } from "react";
+import { splitCharge } from "@/lib/document/formula-text";
 
 /**
  * A formula as chemists write it: "Fe(CN)6^3-" → Fe(CN)₆³⁻, "CuSO4·5H2O" → CuSO₄·5H₂O.
@@ -15,19 +16,8 @@ export function ChemFormula({ formula, className }: { formula: string; className
 }
 
 function renderFormula(formula: string): ReactNode[] {
-  // lib/chem's spelling: "^" before a multiple charge ("SO4^2-", "Fe^3+"); a single charge is
-  // a bare sign ("Na+", "NO3-"), so the digit before it is still a count.
-  const caret = /\^(\d*)([+-])$/.exec(formula);
-  const bare = caret ? null : /[A-Za-z0-9)\]]([+-])$/.exec(formula);
-  let body = formula;
-  let charge = "";
-  if (caret) {
-    body = formula.slice(0, caret.index);
-    charge = `${caret[1] === "1" ? "" : caret[1]}${caret[2] === "-" ? "−" : "+"}`;
-  } else if (bare) {
-    body = formula.slice(0, -1);
-    charge = bare[1] === "-" ? "−" : "+";
-  }
+  const { body, count, sign } = splitCharge(formula);
+  const charge = sign ? `${count}${sign === "-" ? "−" : "+"}` : "";
   const parts: ReactNode[] = [];
   const pattern = /(\d+)/g;
   let last = 0;

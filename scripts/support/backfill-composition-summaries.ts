@@ -16,6 +16,9 @@ import { compositionSummary } from "@/lib/document/composition-summary";
 
 const BATCH = 5_000;
 
+/** A JSON value as a list of components (a row without any has null). */
+const list = (x: unknown): unknown[] => (Array.isArray(x) ? (x as unknown[]) : []);
+
 interface PendingRow {
   id: string;
   components: unknown;
@@ -56,7 +59,6 @@ export async function backfillCompositionSummaries(pool: Pool): Promise<number> 
         [after],
       );
       if (rows.length === 0) break;
-      const list = (x: unknown): unknown[] => (Array.isArray(x) ? (x as unknown[]) : []);
       const summaries = rows.map((r) =>
         compositionSummary([...list(r.components), ...list(r.diluted)]),
       );

@@ -20,6 +20,27 @@ async function withClient<T>(url: string, fn: (c: Client) => Promise<T>): Promis
   }
 }
 
+/**
+ * Writes into `folder` the committed migrations that come before `tag` (journal and SQL), as a
+ * database made before that migration had them; returns their tags.
+ */
+function migrationsBefore(tag: string, folder: string): string[] {
+  const journal = JSON.parse(
+    readFileSync(join(MIGRATIONS_FOLDER, "meta/_journal.json"), "utf8"),
+  ) as { entries: { tag: string }[] };
+  const upTo = journal.entries.findIndex((e) => e.tag === tag);
+  expect(upTo).toBeGreaterThan(0);
+  const before = journal.entries.slice(0, upTo);
+  mkdirSync(join(folder, "meta"));
+  writeFileSync(
+    join(folder, "meta/_journal.json"),
+    JSON.stringify({ ...journal, entries: before }),
+  );
+  for (const e of before)
+    cpSync(join(MIGRATIONS_FOLDER, `${e.tag}.sql`), join(folder, `${e.tag}.sql`));
+  return before.map((e) => e.tag);
+}
+
 describe("migrations on an empty database", () => {
   if (!superuserUrl)
     throw new Error("TEST_SUPERUSER_URL is not set: run the tests through npm test");
@@ -111,24 +132,11 @@ describe("migration 0003 carries solutions saved before it into the new tables",
 
   it("keeps every revision's numbers and leaves the current revision's blocks open", async () => {
     // The migrations up to 0002, as a database saved before 0003 had them.
-    const journal = JSON.parse(
-      readFileSync(join(MIGRATIONS_FOLDER, "meta/_journal.json"), "utf8"),
-    ) as {
-      entries: { tag: string }[];
-    };
-    const before = journal.entries.slice(0, 3);
-    expect(before.map((e) => e.tag)).toEqual([
+    expect(migrationsBefore("0003_countersign_and_block_results", partial)).toEqual([
       "0000_init",
       "0001_immutable_revisions",
       "0002_entry_status_amended",
     ]);
-    mkdirSync(join(partial, "meta"));
-    writeFileSync(
-      join(partial, "meta/_journal.json"),
-      JSON.stringify({ ...journal, entries: before }),
-    );
-    for (const e of before)
-      cpSync(join(MIGRATIONS_FOLDER, `${e.tag}.sql`), join(partial, `${e.tag}.sql`));
 
     await withClient(superuser, (c) => c.query(`create database ${legacyDb}`));
     await runMigrations(legacyUrl, partial);
@@ -204,19 +212,7 @@ describe("migration 0011 gives every stored solution its one-line recipe", () =>
   });
 
   it("fills the summaries of rows saved before it, stocks included, and keeps them immutable", async () => {
-    const journal = JSON.parse(
-      readFileSync(join(MIGRATIONS_FOLDER, "meta/_journal.json"), "utf8"),
-    ) as { entries: { tag: string }[] };
-    const upTo = journal.entries.findIndex((e) => e.tag === "0011_composition_summary");
-    expect(upTo).toBeGreaterThan(0);
-    const before = journal.entries.slice(0, upTo);
-    mkdirSync(join(partial, "meta"));
-    writeFileSync(
-      join(partial, "meta/_journal.json"),
-      JSON.stringify({ ...journal, entries: before }),
-    );
-    for (const e of before)
-      cpSync(join(MIGRATIONS_FOLDER, `${e.tag}.sql`), join(partial, `${e.tag}.sql`));
+    migrationsBefore("0011_composition_summary", partial);
 
     await withClient(superuser, (c) => c.query(`create database ${olderDb}`));
     await runMigrations(olderUrl, partial);
